@@ -1,0 +1,144 @@
+// Drawing storage: parts kept sorted by id with a hash index for lookups.
+#include "model/drawing.h"
+
+#include <algorithm>
+#include <stdexcept>
+
+namespace lineward {
+
+const Part* Drawing::part(PartId id) const {
+    auto it = m_partIndex.find(id);
+    return it == m_partIndex.end() ? nullptr : &m_parts[it->second];
+}
+
+Part* Drawing::part(PartId id) {
+    auto it = m_partIndex.find(id);
+    return it == m_partIndex.end() ? nullptr : &m_parts[it->second];
+}
+
+std::optional<std::size_t> Drawing::indexOf(PartId id) const {
+    auto it = m_partIndex.find(id);
+    if (it == m_partIndex.end())
+        return std::nullopt;
+    return it->second;
+}
+
+const Part* Drawing::partByTag(std::string_view tag) const {
+    for (const auto& p : m_parts)
+        if (p.tag == tag)
+            return &p;
+    return nullptr;
+}
+
+const Wire* Drawing::wire(WireId id) const {
+    auto it = std::lower_bound(m_wires.begin(), m_wires.end(), id,
+                               [](const Wire& w, WireId i) { return w.id < i; });
+    return it != m_wires.end() && it->id == id ? &*it : nullptr;
+}
+
+const Bucket* Drawing::bucket(BucketId id) const {
+    for (const auto& b : m_buckets)
+        if (b.id == id)
+            return &b;
+    return nullptr;
+}
+
+bool Drawing::updateBucket(Bucket b) {
+    for (auto& old : m_buckets)
+        if (old.id == b.id) {
+            old = std::move(b);
+            reindex();
+            return true;
+        }
+    return false;
+}
+
+const Bucket* Drawing::bucketOf(PartId id) const {
+    auto it = m_bucketOfPart.find(id.value);
+    return it == m_bucketOfPart.end() ? nullptr : &m_buckets[it->second];
+}
+
+void Drawing::addPart(Part p) {
+    if (!p.id.valid() || part(p.id))
+        throw std::invalid_argument("part id " + std::to_string(p.id.value) + " is in use");
+    m_maxPart = std::max(m_maxPart, p.id.value);
+    if (m_parts.empty() || m_parts.back().id < p.id) { // the common case: no reindex
+        m_partIndex[p.id] = m_parts.size();
+        m_parts.push_back(std::move(p));
+        return;
+    }
+    auto it = std::lower_bound(m_parts.begin(), m_parts.end(), p.id,
+                               [](const Part& a, PartId i) { return a.id < i; });
+    m_parts.insert(it, std::move(p));
+    reindex();
+}
+
+std::optional<Part> Drawing::removePart(PartId id) {
+    auto it = std::find_if(m_parts.begin(), m_parts.end(), [&](const Part& p) { return p.id == id; });
+    if (it == m_parts.end())
+        return std::nullopt;
+    Part removed = std::move(*it);
+    m_parts.erase(it);
+    std::erase_if(m_wires, [&](const Wire& w) { return w.a.part == id || w.b.part == id; });
+    for (auto& b : m_buckets)
+        std::erase(b.parts, id);
+    reindex();
+    return removed;
+}
+
+void Drawing::addWire(Wire w) {
+    if (!w.id.valid() || wire(w.id))
+        throw std::invalid_argument("wire id " + std::to_string(w.id.value) + " is in use");
+    m_maxWire = std::max(m_maxWire, w.id.value);
+    auto it = std::lower_bound(m_wires.begin(), m_wires.end(), w.id,
+                               [](const Wire& a, WireId i) { return a.id < i; });
+    m_wires.insert(it, w);
+}
+
+std::optional<Wire> Drawing::removeWire(WireId id) {
+    auto it = std::find_if(m_wires.begin(), m_wires.end(), [&](const Wire& w) { return w.id == id; });
+    if (it == m_wires.end())
+        return std::nullopt;
+    Wire w = *it;
+    m_wires.erase(it);
+    return w;
+}
+
+void Drawing::addBucket(Bucket b) {
+    if (!b.id.valid() || bucket(b.id))
+        throw std::invalid_argument("bucket id " + std::to_string(b.id.value) + " is in use");
+    m_maxBucket = std::max(m_maxBucket, b.id.value);
+    if (m_buckets.empty() || m_buckets.back().id < b.id) {
+        for (auto pid : b.parts)
+            m_bucketOfPart[pid.value] = m_buckets.size();
+        m_buckets.push_back(std::move(b));
+        return;
+    }
+    auto it = std::lower_bound(m_buckets.begin(), m_buckets.end(), b.id,
+                               [](const Bucket& a, BucketId i) { return a.id < i; });
+    m_buckets.insert(it, std::move(b));
+    reindex();
+}
+
+std::optional<Bucket> Drawing::removeBucket(BucketId id) {
+    auto it = std::find_if(m_buckets.begin(), m_buckets.end(),
+                           [&](const Bucket& b) { return b.id == id; });
+    if (it == m_buckets.end())
+        return std::nullopt;
+    Bucket b = std::move(*it);
+    m_buckets.erase(it);
+    reindex();
+    return b;
+}
+
+void Drawing::reindex() {
+    m_partIndex.clear();
+    for (std::size_t i = 0; i < m_parts.size(); ++i)
+        m_partIndex[m_parts[i].id] = i;
+    m_bucketOfPart.clear();
+    for (std::size_t i = 0; i < m_buckets.size(); ++i)
+        for (auto pid : m_buckets[i].parts)
+            m_bucketOfPart[pid.value] = i;
+}
+
+} // namespace lineward

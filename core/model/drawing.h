@@ -1,0 +1,131 @@
+// The Drawing: sheet data, settings, parts, wires, buckets and accepted deviations.
+#pragma once
+
+#include "model/ids.h"
+#include "model/part.h"
+
+#include <optional>
+#include <string>
+#include <unordered_map>
+#include <vector>
+
+namespace lineward {
+
+enum class UnitSystem { US, SI };
+
+/// One row of the revision table.
+struct Revision {
+    std::string rev, date, by, note;
+    bool operator==(const Revision&) const = default;
+};
+
+/// Title-block data of the Sheet.
+struct SheetInfo {
+    std::string title, project, drawingNo, drawnBy, checkedBy;
+    UnitSystem units = UnitSystem::US;
+    std::string ruleSet = "NEC 2023";
+    std::vector<Revision> revisions;
+    bool operator==(const SheetInfo&) const = default;
+};
+
+/// Limits that are recommendations or common practice; each produces a caution when exceeded.
+struct Settings {
+    double vdropBranchPct = 3.0;   ///< NEC 210.19(A) informational note
+    double vdropTotalPct = 5.0;    ///< NEC 215.2(A) informational note
+    double startDipPct = 15.0;     ///< common practice
+    double startTerminalPct = 80.0;///< common practice
+    double coordinationMarginS = 0.1; ///< common practice for low-voltage devices
+    double ambientC = 30.0;        ///< NEC Table 310.16 base ambient
+    double asymmetryFactor = 1.5;  ///< common practice
+    double startPf = 0.3;          ///< common practice
+    double motorContributionX = 4.0; ///< common practice: running motor feeds ~4 x FLC
+    bool operator==(const Settings&) const = default;
+};
+
+/// One end of a wire: a part and one of its terminals (index into the kind's terminal list).
+struct WireEnd {
+    PartId part;
+    int terminal = 0;
+    bool operator==(const WireEnd&) const = default;
+};
+
+/// A wire joining two part terminals; drawn orthogonally on the Sheet.
+struct Wire {
+    WireId id;
+    WireEnd a, b;
+    bool operator==(const Wire&) const = default;
+};
+
+/// A bucket: the parts of one MCC unit (combination starter) with its short-circuit rating.
+struct Bucket {
+    BucketId id;
+    std::string tag;
+    std::optional<double> sccrKa;
+    std::vector<PartId> parts;
+    bool operator==(const Bucket&) const = default;
+};
+
+/// A reviewer's accepted deviation from a rule for a set of parts.
+struct Accepted {
+    std::string rule;
+    std::vector<PartId> parts;
+    std::string by, date, note;
+    bool operator==(const Accepted&) const = default;
+};
+
+/// The whole one-line drawing: plain values, owned by value.
+class Drawing {
+public:
+    SheetInfo sheet;
+    Settings settings;
+
+    const std::vector<Part>& parts() const { return m_parts; }
+    const std::vector<Wire>& wires() const { return m_wires; }
+    const std::vector<Bucket>& buckets() const { return m_buckets; }
+    std::vector<Accepted>& accepted() { return m_accepted; }
+    const std::vector<Accepted>& accepted() const { return m_accepted; }
+
+    const Part* part(PartId id) const;
+    Part* part(PartId id);
+    const Part* partByTag(std::string_view tag) const;
+    /// Position of the part in parts(), or nothing.
+    std::optional<std::size_t> indexOf(PartId id) const;
+    const Wire* wire(WireId id) const;
+    const Bucket* bucket(BucketId id) const;
+    /// The bucket that holds this part, if any.
+    const Bucket* bucketOf(PartId id) const;
+
+    PartId nextPartId() const { return PartId(m_maxPart + 1); }
+    WireId nextWireId() const { return WireId(m_maxWire + 1); }
+    BucketId nextBucketId() const { return BucketId(m_maxBucket + 1); }
+
+    /// Adds a part; its id must be unused. Parts stay ordered by id.
+    void addPart(Part p);
+    /// Removes a part and every wire on it; returns what was removed.
+    std::optional<Part> removePart(PartId id);
+    /// Adds a wire; its id must be unused. Both ends must name existing parts (checked by the
+    /// loader and the editor, not here).
+    void addWire(Wire w);
+    std::optional<Wire> removeWire(WireId id);
+    void addBucket(Bucket b);
+    std::optional<Bucket> removeBucket(BucketId id);
+    /// Replaces the bucket with the same id; false where there is none.
+    bool updateBucket(Bucket b);
+
+    bool operator==(const Drawing& o) const {
+        return sheet == o.sheet && settings == o.settings && m_parts == o.m_parts &&
+               m_wires == o.m_wires && m_buckets == o.m_buckets && m_accepted == o.m_accepted;
+    }
+
+private:
+    void reindex();
+    std::vector<Part> m_parts;
+    std::vector<Wire> m_wires;
+    std::vector<Bucket> m_buckets;
+    std::vector<Accepted> m_accepted;
+    std::unordered_map<PartId, std::size_t> m_partIndex;
+    std::unordered_map<std::uint32_t, std::size_t> m_bucketOfPart;
+    std::uint32_t m_maxPart = 0, m_maxWire = 0, m_maxBucket = 0;
+};
+
+} // namespace lineward

@@ -1,0 +1,41 @@
+// Field specifications: the ratings each part kind carries, with units and accepted ranges.
+#pragma once
+
+#include <optional>
+#include <string>
+#include <string_view>
+#include <variant>
+#include <vector>
+
+namespace lineward {
+
+/// The value of one rating: absent, a number, a flag or a word from a fixed list.
+using FieldValue = std::variant<std::monostate, double, bool, std::string>;
+
+enum class FieldType { Number, Integer, Flag, Choice, Text };
+
+/// One rating of a part kind: its key in the file, label and unit for people, and its limits.
+struct FieldSpec {
+    std::string_view key;
+    std::string_view label;
+    std::string_view unit; ///< empty where the value has no unit
+    FieldType type = FieldType::Number;
+    double minValue = 0.0;       ///< smallest accepted value (Number/Integer)
+    double maxValue = 0.0;       ///< largest accepted value (Number/Integer)
+    bool minExclusive = false;   ///< true where the minimum itself is refused (e.g. 0 kVA)
+    bool required = false;       ///< a drawing without it is refused
+    FieldValue defaultValue = {};
+    std::vector<std::string_view> choices = {}; ///< accepted words (Choice)
+    std::string_view help = {};
+};
+
+/// Checks one value against its spec. Returns the reason it is refused, or nothing when accepted.
+std::optional<std::string> validateField(const FieldSpec& spec, const FieldValue& value);
+
+/// Shortest text that reads back to the same number (used in messages and the file).
+std::string formatNumber(double v);
+
+/// The value as people read it, with its unit.
+std::string describeValue(const FieldSpec& spec, const FieldValue& value);
+
+} // namespace lineward

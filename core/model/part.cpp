@@ -1,0 +1,144 @@
+// Part field access and the cross-field checks of each kind.
+#include "model/part.h"
+
+#include "model/conductor.h"
+
+#include <algorithm>
+#include <stdexcept>
+
+namespace lineward {
+
+namespace {
+const FieldValue kNone{};
+} // namespace
+
+Part Part::make(PartKind kind, PartId id, std::string tag) {
+    Part p;
+    p.id = id;
+    p.kind = kind;
+    p.tag = std::move(tag);
+    for (const auto& f : kindInfo(kind).fields)
+        p.values.push_back(f.defaultValue);
+    return p;
+}
+
+const FieldValue& Part::value(std::string_view key) const {
+    auto i = fieldIndex(kind, key);
+    if (!i)
+        throw std::logic_error("part kind " + std::string(kindInfo(kind).key) +
+                               " has no field " + std::string(key));
+    return *i < values.size() ? values[*i] : kNone;
+}
+
+std::optional<double> Part::number(std::string_view key) const {
+    if (auto d = std::get_if<double>(&value(key)))
+        return *d;
+    return std::nullopt;
+}
+
+std::optional<std::string> Part::word(std::string_view key) const {
+    if (auto s = std::get_if<std::string>(&value(key)))
+        return *s;
+    return std::nullopt;
+}
+
+bool Part::flag(std::string_view key) const {
+    auto b = std::get_if<bool>(&value(key));
+    return b && *b;
+}
+
+std::optional<std::string> Part::set(std::string_view key, FieldValue v) {
+    auto i = fieldIndex(kind, key);
+    if (!i)
+        return std::string(kindInfo(kind).name) + " has no rating '" + std::string(key) + "'";
+    if (auto why = validateField(kindInfo(kind).fields[*i], v))
+        return why;
+    Part trial = *this;
+    trial.values.resize(kindInfo(kind).fields.size());
+    trial.values[*i] = std::move(v);
+    // Refuse only what this change breaks: a part still being filled in may lack other values.
+    const auto before = validatePart(*this);
+    for (auto& problem : validatePart(trial))
+        if (std::find(before.begin(), before.end(), problem) == before.end())
+            return problem;
+    *this = std::move(trial);
+    return std::nullopt;
+}
+
+namespace {
+
+void oneOf(const Part& p, std::string_view a, std::string_view b, std::vector<std::string>& out) {
+    const bool hasA = p.number(a).has_value(), hasB = p.number(b).has_value();
+    if (hasA == hasB)
+        out.push_back("give exactly one of " + std::string(a) + " and " + std::string(b));
+}
+
+void notAbove(const Part& p, std::string_view lo, std::string_view hi,
+              std::vector<std::string>& out) {
+    auto l = p.number(lo), h = p.number(hi);
+    if (l && h && *l > *h)
+        out.push_back(std::string(lo) + " " + formatNumber(*l) + " is above " + std::string(hi) +
+                      " " + formatNumber(*h));
+}
+
+void temperatureColumn(const Part& p, std::string_view key, std::vector<std::string>& out) {
+    auto t = p.number(key);
+    if (t && *t != 60 && *t != 75 && *t != 90)
+        out.push_back(std::string(key) + " must be 60, 75 or 90 °C (got " + formatNumber(*t) +
+                      ")");
+}
+
+} // namespace
+
+std::vector<std::string> validatePart(const Part& p) {
+    std::vector<std::string> out;
+    const auto& fields = kindInfo(p.kind).fields;
+    if (p.values.size() != fields.size())
+        out.push_back("internal: wrong number of ratings");
+    for (std::size_t i = 0; i < fields.size() && i < p.values.size(); ++i)
+        if (auto why = validateField(fields[i], p.values[i]))
+            out.push_back(*why);
+    if (p.values.size() != fields.size())
+        return out;
+    switch (p.kind) {
+    case PartKind::Source:
+        oneOf(p, "fault_ka", "fault_mva", out);
+        break;
+    case PartKind::Breaker:
+        notAbove(p, "trip_a", "frame_a", out);
+        break;
+    case PartKind::InstBreaker:
+        notAbove(p, "pickup_min_a", "pickup_a", out);
+        notAbove(p, "pickup_a", "pickup_max_a", out);
+        break;
+    case PartKind::Overload:
+        notAbove(p, "range_min_a", "setting_a", out);
+        notAbove(p, "setting_a", "range_max_a", out);
+        break;
+    case PartKind::Contactor:
+        if (!p.word("nema_size") && !p.number("ac3_a"))
+            out.push_back("give nema_size or ac3_a");
+        break;
+    case PartKind::Cable:
+        temperatureColumn(p, "insulation_c", out);
+        temperatureColumn(p, "termination_c", out);
+        if (auto size = p.word("size"); size && !isKnownConductorSize(*size))
+            out.push_back("size '" + *size +
+                          "' is not a conductor size (write e.g. \"8 AWG\", \"250 kcmil\" or "
+                          "\"16 mm2\")");
+        break;
+    case PartKind::Motor:
+        oneOf(p, "hp", "kw", out);
+        break;
+    case PartKind::Load:
+        oneOf(p, "kva", "kw", out);
+        break;
+    default:
+        break;
+    }
+    if (p.rotation % 90 != 0 || p.rotation < 0 || p.rotation >= 360)
+        out.push_back("rotation must be 0, 90, 180 or 270");
+    return out;
+}
+
+} // namespace lineward

@@ -1,0 +1,192 @@
+// Field tables of each part kind. Ranges are physical sanity limits for low-voltage work, not
+// code limits; the rules judge compliance.
+#include "model/part_kind.h"
+
+#include <array>
+
+namespace lineward {
+
+namespace {
+
+using FT = FieldType;
+
+constexpr std::array<std::string_view, 1> kOut{"out"};
+constexpr std::array<std::string_view, 1> kIn{"in"};
+constexpr std::array<std::string_view, 1> kBar{"bar"};
+constexpr std::array<std::string_view, 2> kLineLoad{"line", "load"};
+constexpr std::array<std::string_view, 2> kPriSec{"pri", "sec"};
+
+const FieldSpec kOpen{"open", "Open", "", FT::Flag, 0, 0, false, false, false, {},
+                      "true where the device is open (an open tie, a spare)"};
+
+const std::array<FieldSpec, 4> kSourceFields{{
+    {"kv", "Nominal voltage", "kV", FT::Number, 0, 765, true, true},
+    {"fault_ka", "Available fault current", "kA", FT::Number, 0, 1000, true, false, {}, {},
+     "three-phase symmetrical; give this or fault_mva"},
+    {"fault_mva", "Available short-circuit power", "MVA", FT::Number, 0, 1e5, true, false, {}, {},
+     "three-phase; give this or fault_ka"},
+    {"x_over_r", "X/R ratio", "", FT::Number, 0, 200, true, false, 15.0},
+}};
+
+const std::array<FieldSpec, 5> kTransformerFields{{
+    {"kva", "Rating", "kVA", FT::Number, 0, 100000, true, true},
+    {"pri_v", "Primary voltage", "V", FT::Number, 0, 765000, true, true},
+    {"sec_v", "Secondary voltage", "V", FT::Number, 0, 35000, true, true},
+    {"z_pct", "Impedance", "%", FT::Number, 0, 30, true, true},
+    {"x_over_r", "X/R ratio", "", FT::Number, 0, 200, true, false, 6.0},
+}};
+
+const std::array<FieldSpec, 5> kBusFields{{
+    {"bus_type", "Equipment", "", FT::Choice, 0, 0, false, true, std::string("mcc"),
+     {"switchboard", "mcc", "panelboard"}},
+    {"volts", "System voltage", "V", FT::Number, 0, 35000, true, true},
+    {"amps", "Continuous rating", "A", FT::Number, 0, 10000, true, true},
+    {"bracing_ka", "Bus bracing", "kA", FT::Number, 0, 300, true, false},
+    {"phases", "Phases", "", FT::Integer, 1, 3, false, false, 3.0},
+}};
+
+const std::array<FieldSpec, 10> kBreakerFields{{
+    {"trip_type", "Trip unit", "", FT::Choice, 0, 0, false, true,
+     std::string("thermal_magnetic"), {"thermal_magnetic", "electronic"}},
+    {"frame_a", "Frame", "A", FT::Number, 0, 6000, true, false},
+    {"trip_a", "Trip rating", "A", FT::Number, 0, 6000, true, true},
+    {"interrupting_ka", "Interrupting rating", "kA", FT::Number, 0, 300, true, true},
+    {"inst_x", "Instantaneous pickup", "x trip", FT::Number, 1, 40, false, false, {}, {},
+     "multiple of the trip rating"},
+    {"lt_pickup_x", "Long-time pickup", "x trip", FT::Number, 0.4, 1, false, false},
+    {"lt_delay_s", "Long-time delay at 6x", "s", FT::Number, 0, 60, true, false},
+    {"st_pickup_x", "Short-time pickup", "x trip", FT::Number, 1, 12, false, false},
+    {"st_delay_s", "Short-time delay", "s", FT::Number, 0, 1, false, false},
+    kOpen,
+}};
+
+const std::array<FieldSpec, 6> kInstBreakerFields{{
+    {"amps", "Continuous rating", "A", FT::Number, 0, 1200, true, true},
+    {"pickup_a", "Pickup setting", "A", FT::Number, 0, 20000, true, true},
+    {"pickup_min_a", "Lowest adjustable pickup", "A", FT::Number, 0, 20000, true, false},
+    {"pickup_max_a", "Highest adjustable pickup", "A", FT::Number, 0, 20000, true, false},
+    {"interrupting_ka", "Interrupting rating", "kA", FT::Number, 0, 300, true, true},
+    kOpen,
+}};
+
+const std::array<FieldSpec, 3> kFuseFields{{
+    {"fuse_type", "Fuse type", "", FT::Choice, 0, 0, false, true, std::string("time_delay"),
+     {"time_delay", "fast"}},
+    {"amps", "Rating", "A", FT::Number, 0, 6000, true, true},
+    {"interrupting_ka", "Interrupting rating", "kA", FT::Number, 0, 300, true, true},
+}};
+
+const std::array<FieldSpec, 4> kDisconnectFields{{
+    {"amps", "Rating", "A", FT::Number, 0, 6000, true, true},
+    {"hp_rating", "Horsepower rating", "hp", FT::Number, 0, 5000, true, false},
+    {"fused", "Fused", "", FT::Flag, 0, 0, false, false, false},
+    kOpen,
+}};
+
+const std::array<FieldSpec, 3> kContactorFields{{
+    {"nema_size", "NEMA size", "", FT::Choice, 0, 0, false, false, {},
+     {"00", "0", "1", "2", "3", "4", "5", "6", "7", "8", "9"}},
+    {"ac3_a", "IEC AC-3 rated current", "A", FT::Number, 0, 3000, true, false},
+    kOpen,
+}};
+
+const std::array<FieldSpec, 4> kOverloadFields{{
+    {"setting_a", "Setting", "A", FT::Number, 0, 3000, true, true},
+    {"range_min_a", "Lowest setting", "A", FT::Number, 0, 3000, true, false},
+    {"range_max_a", "Highest setting", "A", FT::Number, 0, 3000, true, false},
+    {"trip_class", "Trip class", "", FT::Choice, 0, 0, false, true, std::string("10"),
+     {"10A", "10", "20", "30"}},
+}};
+
+const std::array<FieldSpec, 9> kCableFields{{
+    {"material", "Conductor", "", FT::Choice, 0, 0, false, true, std::string("cu"),
+     {"cu", "al"}},
+    {"size", "Size", "", FT::Text, 0, 0, false, true},
+    {"sets", "Parallel sets", "", FT::Integer, 1, 20, false, false, 1.0},
+    {"length_ft", "Length", "ft", FT::Number, 0, 20000, true, true},
+    {"insulation_c", "Insulation rating", "°C", FT::Integer, 60, 90, false, false, 90.0, {},
+     "60, 75 or 90"},
+    {"termination_c", "Termination rating", "°C", FT::Integer, 60, 90, false, false, 75.0, {},
+     "60, 75 or 90"},
+    {"raceway", "Raceway", "", FT::Choice, 0, 0, false, false, std::string("steel"),
+     {"steel", "pvc", "aluminum"}},
+    {"conductors", "Current-carrying conductors in raceway", "", FT::Integer, 1, 200, false,
+     false, 3.0},
+    {"ambient_c", "Ambient", "°C", FT::Number, -40, 90, false, false, {}, {},
+     "blank: the drawing's ambient"},
+}};
+
+const std::array<FieldSpec, 14> kMotorFields{{
+    {"hp", "Rated output", "hp", FT::Number, 0, 5000, true, false, {}, {},
+     "give this or kw"},
+    {"kw", "Rated output", "kW", FT::Number, 0, 4000, true, false, {}, {}, "give this or hp"},
+    {"volts", "Rated voltage", "V", FT::Number, 0, 15000, true, true},
+    {"phases", "Phases", "", FT::Integer, 1, 3, false, false, 3.0},
+    {"fla", "Nameplate full-load current", "A", FT::Number, 0, 5000, true, false},
+    {"sf", "Service factor", "", FT::Number, 1, 1.5, false, false, 1.15},
+    {"design", "Design letter", "", FT::Choice, 0, 0, false, false, std::string("B"),
+     {"A", "B", "C", "D", "E"}},
+    {"code_letter", "Code letter", "", FT::Choice, 0, 0, false, false, {},
+     {"A", "B", "C", "D", "E", "F", "G", "H", "J", "K", "L", "M", "N", "P", "R", "S", "T",
+      "U", "V"}},
+    {"lra", "Locked-rotor current", "A", FT::Number, 0, 50000, true, false},
+    {"accel_s", "Acceleration time", "s", FT::Number, 0, 600, true, false, 5.0},
+    {"stall_hot_s", "Safe stall time, hot", "s", FT::Number, 0, 600, true, false},
+    {"stall_cold_s", "Safe stall time, cold", "s", FT::Number, 0, 600, true, false},
+    {"temp_rise_c", "Marked temperature rise", "°C", FT::Number, 0, 200, true, false},
+    {"hard_to_start", "Hard to start", "", FT::Flag, 0, 0, false, false, false},
+}};
+
+const std::array<FieldSpec, 6> kLoadFields{{
+    {"kva", "Apparent power", "kVA", FT::Number, 0, 100000, true, false, {}, {},
+     "give this or kw"},
+    {"kw", "Real power", "kW", FT::Number, 0, 100000, true, false, {}, {}, "give this or kva"},
+    {"pf", "Power factor", "", FT::Number, 0, 1, true, false, 0.9},
+    {"volts", "Rated voltage", "V", FT::Number, 0, 35000, true, true},
+    {"phases", "Phases", "", FT::Integer, 1, 3, false, false, 3.0},
+    {"continuous", "Continuous (3 h or more)", "", FT::Flag, 0, 0, false, false, true},
+}};
+
+const std::array<KindInfo, kPartKindCount> kKinds{{
+    {PartKind::Source, "source", "Utility source", "UTIL-", kOut, kSourceFields},
+    {PartKind::Transformer, "transformer", "Transformer", "TX-", kPriSec, kTransformerFields},
+    {PartKind::Bus, "bus", "Bus", "BUS-", kBar, kBusFields},
+    {PartKind::Breaker, "breaker", "Breaker", "CB-", kLineLoad, kBreakerFields, true, true},
+    {PartKind::InstBreaker, "inst_breaker", "Instantaneous-only breaker", "MCP-", kLineLoad,
+     kInstBreakerFields, true, true},
+    {PartKind::Fuse, "fuse", "Fuse", "FU-", kLineLoad, kFuseFields, false, true},
+    {PartKind::Disconnect, "disconnect", "Disconnect switch", "DS-", kLineLoad,
+     kDisconnectFields, true, false},
+    {PartKind::Contactor, "contactor", "Contactor", "K-", kLineLoad, kContactorFields, true,
+     false},
+    {PartKind::Overload, "overload", "Overload relay", "OL-", kLineLoad, kOverloadFields},
+    {PartKind::Cable, "cable", "Cable", "C-", kLineLoad, kCableFields},
+    {PartKind::Motor, "motor", "Motor", "M-", kIn, kMotorFields},
+    {PartKind::Load, "load", "Static load", "LD-", kIn, kLoadFields},
+}};
+
+} // namespace
+
+const KindInfo& kindInfo(PartKind kind) { return kKinds[static_cast<std::size_t>(kind)]; }
+
+std::optional<PartKind> kindFromKey(std::string_view key) {
+    for (const auto& k : kKinds)
+        if (k.key == key)
+            return k.kind;
+    return std::nullopt;
+}
+
+std::optional<std::size_t> fieldIndex(PartKind kind, std::string_view key) {
+    const auto& fields = kindInfo(kind).fields;
+    for (std::size_t i = 0; i < fields.size(); ++i)
+        if (fields[i].key == key)
+            return i;
+    return std::nullopt;
+}
+
+const FieldSpec* findField(PartKind kind, std::string_view key) {
+    auto i = fieldIndex(kind, key);
+    return i ? &kindInfo(kind).fields[*i] : nullptr;
+}
+
+} // namespace lineward
