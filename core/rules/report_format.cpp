@@ -1,0 +1,110 @@
+// Report rendering. Text groups findings under the part they are about (their first part).
+#include "rules/report_format.h"
+
+#include <map>
+#include <sstream>
+
+namespace lineward {
+
+namespace {
+
+std::string partLabel(const Drawing& d, PartId id) {
+    const Part* p = d.part(id);
+    if (!p)
+        return "#" + std::to_string(id.value);
+    return (p->tag.empty() ? "#" + std::to_string(id.value) : p->tag) + " (" +
+           std::string(kindInfo(p->kind).name) + ")";
+}
+
+nlohmann::ordered_json fieldValueJson(const FieldValue& v) {
+    if (auto d = std::get_if<double>(&v))
+        return *d;
+    if (auto b = std::get_if<bool>(&v))
+        return *b;
+    if (auto s = std::get_if<std::string>(&v))
+        return *s;
+    return nullptr;
+}
+
+} // namespace
+
+std::string findingHeadline(const Finding& f) {
+    return std::string(severityName(f.severity)) + " · " + f.ruleId + " · " + f.clause + " · " +
+           f.message;
+}
+
+std::string reportText(const Drawing& d, const CheckReport& r, const std::string& file) {
+    std::ostringstream s;
+    s << file << ": " << r.openCounts[2] << " violation(s), " << r.openCounts[1]
+      << " caution(s), " << r.openCounts[0] << " note(s)";
+    if (r.acceptedCount)
+        s << ", " << r.acceptedCount << " accepted";
+    s << "\n";
+    std::map<std::uint32_t, std::vector<const Finding*>> byPart;
+    for (const auto& f : r.findings)
+        byPart[f.parts.empty() ? 0u : f.parts.front().value].push_back(&f);
+    for (const auto& [pid, list] : byPart) {
+        s << "\n" << (pid ? partLabel(d, PartId(pid)) : std::string("(drawing)")) << "\n";
+        for (const Finding* f : list) {
+            s << "  " << (f->accepted ? "[accepted] " : "") << findingHeadline(*f) << "\n";
+            if (f->computed && f->limit)
+                s << "      computed " << formatNumber(*f->computed) << " " << f->unit
+                  << ", limit " << formatNumber(*f->limit) << " " << f->unit << "\n";
+            for (const auto& t : f->trace)
+                s << "      " << t.name << ": " << t.value << "\n";
+            if (f->fix)
+                s << "      fix: " << f->fix->description << "\n";
+            if (f->accepted)
+                s << "      accepted: " << f->acceptedNote << "\n";
+        }
+    }
+    return s.str();
+}
+
+nlohmann::ordered_json reportJson(const Drawing& d, const CheckReport& r, const std::string& file) {
+    using oj = nlohmann::ordered_json;
+    oj j;
+    j["file"] = file;
+    j["counts"] = {{"violation", r.openCounts[2]},
+                   {"caution", r.openCounts[1]},
+                   {"note", r.openCounts[0]},
+                   {"accepted", r.acceptedCount}};
+    oj list = oj::array();
+    for (const auto& f : r.findings) {
+        oj e;
+        e["rule"] = f.ruleId;
+        e["severity"] = severityName(f.severity);
+        e["clause"] = f.clause;
+        oj parts = oj::array();
+        for (auto id : f.parts) {
+            const Part* p = d.part(id);
+            parts.push_back({{"id", id.value}, {"tag", p ? p->tag : ""}});
+        }
+        e["parts"] = parts;
+        e["message"] = f.message;
+        e["computed"] = f.computed ? oj(*f.computed) : oj(nullptr);
+        e["limit"] = f.limit ? oj(*f.limit) : oj(nullptr);
+        e["unit"] = f.unit;
+        oj trace = oj::array();
+        for (const auto& t : f.trace)
+            trace.push_back({{"name", t.name}, {"value", t.value}});
+        e["trace"] = trace;
+        if (f.fix) {
+            oj changes = oj::array();
+            for (const auto& c : f.fix->changes)
+                changes.push_back({{"part", c.part.value}, {"field", c.field},
+                                   {"value", fieldValueJson(c.value)}});
+            e["fix"] = {{"description", f.fix->description}, {"changes", changes}};
+        } else {
+            e["fix"] = nullptr;
+        }
+        e["accepted"] = f.accepted;
+        if (f.accepted)
+            e["accepted_note"] = f.acceptedNote;
+        list.push_back(std::move(e));
+    }
+    j["findings"] = list;
+    return j;
+}
+
+} // namespace lineward
