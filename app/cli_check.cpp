@@ -1,0 +1,70 @@
+// `lineward-cli check`: load each file, run every rule, report, exit by the worst finding.
+#include "cli_commands.h"
+#include "io/drawing_file.h"
+#include "rules/check.h"
+#include "rules/report_format.h"
+
+#include <spdlog/spdlog.h>
+
+#include <iostream>
+#include <memory>
+
+namespace lineward::cli {
+
+namespace {
+
+struct CheckOptions {
+    std::vector<std::string> files;
+    bool json = false;
+    std::string failOn = "violation";
+};
+
+int runCheck(const CheckOptions& o) {
+    const Severity threshold = *severityFromName(o.failOn);
+    bool anyFindings = false, anyBad = false;
+    nlohmann::ordered_json all = nlohmann::ordered_json::array();
+    for (const auto& file : o.files) {
+        auto loaded = io::loadDrawing(file);
+        if (!loaded) {
+            std::cerr << "lineward-cli: " << loaded.error->text() << "\n";
+            spdlog::info("check: refused {}: {}", file, loaded.error->message);
+            anyBad = true;
+            continue;
+        }
+        const auto report = checkDrawing(*loaded.drawing);
+        anyFindings = anyFindings || report.hasOpenAtLeast(threshold);
+        if (o.json)
+            all.push_back(reportJson(*loaded.drawing, report, file));
+        else
+            std::cout << reportText(*loaded.drawing, report, file) << "\n";
+    }
+    if (o.json) {
+        nlohmann::ordered_json out;
+        out["fail_on"] = o.failOn;
+        out["reports"] = all;
+        std::cout << out.dump(2) << "\n";
+    } else {
+        std::cout << kSafetyCaution << "\n";
+    }
+    if (anyBad)
+        return kBadInput;
+    return anyFindings ? kFindings : kClean;
+}
+
+} // namespace
+
+void addCheckCommand(CLI::App& app, int& exitCode) {
+    auto opts = std::make_shared<CheckOptions>();
+    auto* cmd = app.add_subcommand(
+        "check", "Check drawings against every rule. Exit 0: nothing at or above --fail-on; "
+                 "1: findings at or above it; 2: a file could not be read.");
+    cmd->add_option("files", opts->files, "drawing files (.lineward)")->required()->check(
+        CLI::ExistingFile);
+    cmd->add_flag("--json", opts->json, "print machine-readable JSON instead of text");
+    cmd->add_option("--fail-on", opts->failOn,
+                    "lowest severity that makes the exit code 1 (default: violation)")
+        ->check(CLI::IsMember({"violation", "caution", "note"}));
+    cmd->callback([opts, &exitCode] { exitCode = runCheck(*opts); });
+}
+
+} // namespace lineward::cli

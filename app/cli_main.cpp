@@ -1,0 +1,26 @@
+// lineward-cli: the headless command line (check; later size, study, trip, curves, export).
+#include "cli_commands.h"
+#include "util/log.h"
+
+#include <iostream>
+
+int main(int argc, char** argv) {
+    lineward::setupLogging("lineward-cli");
+    CLI::App app{"lineward-cli: check one-line drawings (.lineward) without a display.\n"
+                 "Results support, and do not replace, a licensed engineer and the code in "
+                 "force."};
+    app.require_subcommand(1);
+    int exitCode = lineward::cli::kClean;
+    lineward::cli::addCheckCommand(app, exitCode);
+    try {
+        app.parse(argc, argv);
+    } catch (const CLI::CallForHelp& e) {
+        return app.exit(e);
+    } catch (const CLI::CallForAllHelp& e) {
+        return app.exit(e);
+    } catch (const CLI::ParseError& e) {
+        app.exit(e);
+        return lineward::cli::kBadInput;
+    }
+    return exitCode;
+}

@@ -1,0 +1,39 @@
+// lineward: the desktop editor. `lineward [FILE]` opens FILE; `--screenshot PNG` saves a
+// picture of the window and quits (used to make the user guide's images).
+#include "main_window.h"
+#include "util/log.h"
+
+#include <QApplication>
+#include <QCommandLineParser>
+#include <QPixmap>
+#include <QTimer>
+
+#include <spdlog/spdlog.h>
+
+int main(int argc, char** argv) {
+    QApplication app(argc, argv);
+    QApplication::setApplicationName("Lineward");
+    QApplication::setOrganizationName("Lineward");
+    lineward::setupLogging("lineward");
+    QCommandLineParser parser;
+    parser.setApplicationDescription("Lineward one-line diagram editor");
+    parser.addHelpOption();
+    parser.addPositionalArgument("file", "drawing to open (.lineward)");
+    QCommandLineOption shot("screenshot", "save a picture of the window to PNG and quit", "PNG");
+    parser.addOption(shot);
+    parser.process(app);
+    lineward::ui::MainWindow window;
+    window.show();
+    if (!parser.positionalArguments().isEmpty())
+        window.openFile(parser.positionalArguments().first(), parser.isSet(shot));
+    if (parser.isSet(shot)) {
+        const QString out = parser.value(shot);
+        QTimer::singleShot(300, &app, [&window, &app, out] {
+            const bool ok = window.grab().save(out);
+            if (!ok)
+                spdlog::error("cannot write screenshot {}", out.toStdString());
+            app.exit(ok ? 0 : 1);
+        });
+    }
+    return app.exec();
+}

@@ -1,0 +1,114 @@
+// Keeps the documents true: docs/rules.md matches the rule catalogue, and samples/README.md
+// lists exactly the findings the mistake sample produces.
+#include "io/drawing_file.h"
+#include "rules/check.h"
+#include "model/part_kind.h"
+#include "rules/rule_catalog.h"
+#include "test_support.h"
+
+#include <gtest/gtest.h>
+
+#include <map>
+#include <regex>
+#include <set>
+#include <sstream>
+
+using namespace lineward;
+using namespace lineward::test;
+
+namespace {
+
+// Cells of a markdown table row, trimmed.
+std::vector<std::string> cells(const std::string& line) {
+    std::vector<std::string> out;
+    std::stringstream s(line);
+    std::string cell;
+    std::getline(s, cell, '|'); // before the first bar
+    while (std::getline(s, cell, '|')) {
+        const auto a = cell.find_first_not_of(' '), b = cell.find_last_not_of(' ');
+        out.push_back(a == std::string::npos ? "" : cell.substr(a, b - a + 1));
+    }
+    return out;
+}
+
+std::string unquote(const std::string& s) {
+    return s.size() >= 2 && s.front() == '`' && s.back() == '`' ? s.substr(1, s.size() - 2) : s;
+}
+
+} // namespace
+
+TEST(Docs, RulesDocumentMatchesCatalogue) {
+    const std::string doc = readFile(sourcePath("docs/rules.md"));
+    ASSERT_FALSE(doc.empty());
+    std::map<std::string, std::vector<std::string>> rows; // id -> cells
+    std::istringstream in(doc);
+    for (std::string line; std::getline(in, line);) {
+        if (line.rfind("| `", 0) != 0)
+            continue;
+        auto c = cells(line);
+        ASSERT_GE(c.size(), 4u) << line;
+        rows[unquote(c[0])] = c;
+    }
+    std::set<std::string> inCode;
+    for (const auto& r : ruleCatalog()) {
+        inCode.insert(std::string(r.id));
+        auto it = rows.find(std::string(r.id));
+        ASSERT_NE(it, rows.end()) << "docs/rules.md lacks rule " << r.id;
+        EXPECT_EQ(it->second[1], r.clause) << r.id;
+        EXPECT_EQ(it->second[2], severityName(r.severity)) << r.id;
+    }
+    for (const auto& [id, c] : rows)
+        EXPECT_TRUE(inCode.count(id)) << "docs/rules.md lists " << id << ", which the code lacks";
+}
+
+TEST(Samples, CleanSampleChecksClean) {
+    auto r = io::loadDrawing(sourcePath("samples/kestrel-mill-mcc1.lineward"));
+    ASSERT_TRUE(r) << r.error->text();
+    const auto report = checkDrawing(*r.drawing);
+    for (const auto& f : report.findings)
+        ADD_FAILURE() << f.ruleId << ": " << f.message;
+    EXPECT_GE(r.drawing->buckets().size(), 12u);
+}
+
+TEST(Samples, MistakeSampleReportsExactlyTheListedFindings) {
+    // samples/README.md lists each deliberate mistake as: | `rule.id` | `TAG` | what is wrong |
+    const std::string readme = readFile(sourcePath("samples/README.md"));
+    ASSERT_FALSE(readme.empty());
+    std::multiset<std::pair<std::string, std::string>> listed;
+    const auto section = readme.find("## Deliberate mistakes");
+    ASSERT_NE(section, std::string::npos);
+    std::istringstream in(readme.substr(section));
+    for (std::string line; std::getline(in, line);) {
+        if (line.rfind("| `", 0) != 0)
+            continue;
+        auto c = cells(line);
+        ASSERT_GE(c.size(), 3u) << line;
+        listed.insert({unquote(c[0]), unquote(c[1])});
+    }
+    ASSERT_GE(listed.size(), 6u);
+
+    auto r = io::loadDrawing(sourcePath("samples/kestrel-mill-mcc1-review.lineward"));
+    ASSERT_TRUE(r) << r.error->text();
+    std::multiset<std::pair<std::string, std::string>> found;
+    for (const auto& f : checkDrawing(*r.drawing).findings)
+        found.insert({f.ruleId, r.drawing->part(f.parts.front())->tag});
+    EXPECT_EQ(found, listed);
+}
+
+TEST(Docs, FileFormatDocumentsEveryKindAndField) {
+    const std::string doc = readFile(sourcePath("docs/file-format.md"));
+    ASSERT_FALSE(doc.empty());
+    for (int k = 0; k < kPartKindCount; ++k) {
+        const auto& info = kindInfo(static_cast<PartKind>(k));
+        const auto heading = doc.find("### `" + std::string(info.key) + "`");
+        ASSERT_NE(heading, std::string::npos) << "no section for kind " << info.key;
+        const auto next = doc.find("\n#", heading + 4);
+        const std::string section = doc.substr(heading, next - heading);
+        for (const auto& f : info.fields)
+            EXPECT_NE(section.find("| `" + std::string(f.key) + "` |"), std::string::npos)
+                << info.key << "." << f.key << " is not documented";
+        for (auto t : info.terminals)
+            EXPECT_NE(section.find("`" + std::string(t) + "`"), std::string::npos)
+                << info.key << " terminal " << t << " is not documented";
+    }
+}

@@ -1,0 +1,76 @@
+// The real main window, offscreen: open the mistake sample, see badges and the Findings list,
+// locate a finding's part.
+#include "findings_panel.h"
+#include "main_window.h"
+#include "part_item.h"
+#include "sheet_scene.h"
+
+#include <QApplication>
+#include <QGraphicsView>
+#include <QLabel>
+#include <QTreeWidget>
+#include <gtest/gtest.h>
+
+using namespace lineward;
+using namespace lineward::ui;
+
+namespace {
+QString sample(const char* name) {
+    return QString(LINEWARD_SOURCE_DIR) + "/samples/" + name;
+}
+} // namespace
+
+TEST(MainWindow, OpensSampleShowsBadgesAndFindings) {
+    MainWindow w;
+    w.show();
+    ASSERT_TRUE(w.openFile(sample("kestrel-mill-mcc1-review.lineward"), true).isEmpty());
+    const auto& report = w.document().report();
+    ASSERT_FALSE(report.findings.empty());
+    EXPECT_EQ(w.findings()->list()->topLevelItemCount(), static_cast<int>(report.findings.size()));
+    const Part* p105 = w.document().drawing().partByTag("P-105");
+    ASSERT_NE(p105, nullptr);
+    PartItem* item = w.scene()->itemFor(p105->id);
+    ASSERT_NE(item, nullptr);
+    ASSERT_TRUE(item->badge().has_value());
+    EXPECT_EQ(*item->badge(), Severity::Violation);
+    EXPECT_TRUE(item->toolTip().contains("topology.voltage.mismatch"));
+    auto* counts = w.findChild<QLabel*>("severityCounts");
+    ASSERT_NE(counts, nullptr);
+    EXPECT_TRUE(counts->text().startsWith(QString::number(report.openCounts[2]) + " violations"));
+
+    // Selecting the finding selects its part on the Sheet.
+    for (int i = 0; i < w.findings()->list()->topLevelItemCount(); ++i) {
+        auto* row = w.findings()->list()->topLevelItem(i);
+        if (row->text(2).startsWith("P-105")) {
+            w.findings()->list()->setCurrentItem(row);
+            break;
+        }
+    }
+    EXPECT_TRUE(item->isSelected());
+}
+
+TEST(MainWindow, CleanSampleHasNoBadges) {
+    MainWindow w;
+    ASSERT_TRUE(w.openFile(sample("kestrel-mill-mcc1.lineward"), true).isEmpty());
+    for (const auto* gi : w.scene()->items()) {
+        if (auto* pi = qgraphicsitem_cast<const PartItem*>(gi)) {
+            EXPECT_FALSE(pi->badge().has_value()) << pi->part().tag;
+        }
+    }
+}
+
+TEST(MainWindow, BrokenFileGivesLocatedMessageAndKeepsDrawing) {
+    MainWindow w;
+    ASSERT_TRUE(w.openFile(sample("kestrel-mill-mcc1.lineward"), true).isEmpty());
+    const auto parts = w.document().drawing().parts().size();
+    const QString why = w.openFile(QString(LINEWARD_SOURCE_DIR) + "/README.md", true);
+    EXPECT_TRUE(why.contains("README.md:1:")) << why.toStdString();
+    EXPECT_EQ(w.document().drawing().parts().size(), parts);
+}
+
+int main(int argc, char** argv) {
+    qputenv("QT_QPA_PLATFORM", "offscreen");
+    QApplication app(argc, argv);
+    ::testing::InitGoogleTest(&argc, argv);
+    return RUN_ALL_TESTS();
+}
