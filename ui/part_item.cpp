@@ -1,0 +1,211 @@
+// Symbols of our own, drawn in the IEEE 315 / IEC 60617 conventions: circles for sources and
+// machines, two circles for a transformer, a heavy bar for a bus, a square for a breaker,
+// a rectangle for a fuse, a hook for a thermal overload.
+#include "part_item.h"
+
+#include "severity_style.h"
+
+#include <QPainter>
+#include <QStyleOptionGraphicsItem>
+
+namespace lineward::ui {
+
+namespace {
+constexpr qreal kHalf = 20.0; // terminals sit 20 units above and below the centre
+const QColor kInk(0x22, 0x2a, 0x33);
+const QColor kSelect(0x1d, 0x7f, 0xb8);
+
+QString num(const Part& p, const char* key, const char* unit) {
+    auto v = p.number(key);
+    return v ? QString::fromStdString(formatNumber(*v)) + unit : QString();
+}
+} // namespace
+
+PartItem::PartItem(const Part& part) : m_part(part) {
+    setPos(part.x, part.y);
+    setRotation(part.rotation);
+    setFlag(ItemIsSelectable);
+    setData(0, QVariant::fromValue<quint32>(part.id.value));
+}
+
+void PartItem::setBarSpan(qreal left, qreal right) {
+    prepareGeometryChange();
+    m_barLeft = left;
+    m_barRight = right;
+}
+
+void PartItem::setBadge(std::optional<Severity> worst, const QString& tooltip) {
+    m_badge = worst;
+    setToolTip(tooltip);
+    update();
+}
+
+QPointF PartItem::terminalScenePos(int terminal, QPointF toward) const {
+    if (m_part.kind == PartKind::Bus) {
+        const qreal x = std::clamp(mapFromScene(toward).x(), m_barLeft, m_barRight);
+        return mapToScene(QPointF(x, 0));
+    }
+    const auto& terms = kindInfo(m_part.kind).terminals;
+    if (terms.size() == 2)
+        return mapToScene(QPointF(0, terminal == 0 ? -kHalf : kHalf));
+    // one-terminal parts: sources feed downward, loads are fed from above
+    return mapToScene(QPointF(0, m_part.kind == PartKind::Source ? kHalf : -kHalf));
+}
+
+QRectF PartItem::boundingRect() const {
+    if (m_part.kind == PartKind::Bus)
+        return QRectF(m_barLeft - 10, -30, m_barRight - m_barLeft + 140, 50);
+    return QRectF(-30, -30, 190, 60);
+}
+
+QString PartItem::ratingText() const {
+    const Part& p = m_part;
+    switch (p.kind) {
+    case PartKind::Source:
+        return num(p, "kv", " kV") + "  " +
+               (p.number("fault_ka") ? num(p, "fault_ka", " kA") : num(p, "fault_mva", " MVA"));
+    case PartKind::Transformer:
+        return num(p, "kva", " kVA") + "  " + num(p, "z_pct", " %Z");
+    case PartKind::Bus:
+        return num(p, "volts", " V") + "  " + num(p, "amps", " A") + "  " +
+               num(p, "bracing_ka", " kA");
+    case PartKind::Breaker:
+        return num(p, "trip_a", " AT") + "  " + num(p, "interrupting_ka", " kA");
+    case PartKind::InstBreaker:
+        return num(p, "amps", " A") + "  " + num(p, "pickup_a", " A inst");
+    case PartKind::Fuse:
+        return num(p, "amps", " A") + " " +
+               QString::fromStdString(p.word("fuse_type").value_or("")).replace('_', '-');
+    case PartKind::Disconnect:
+        return num(p, "amps", " A");
+    case PartKind::Contactor:
+        return p.word("nema_size") ? "NEMA " + QString::fromStdString(*p.word("nema_size"))
+                                   : num(p, "ac3_a", " A AC-3");
+    case PartKind::Overload:
+        return num(p, "setting_a", " A") + "  cl " +
+               QString::fromStdString(p.word("trip_class").value_or(""));
+    case PartKind::Cable:
+        return QString::fromStdString(p.word("size").value_or("")) + "  " +
+               num(p, "length_ft", " ft");
+    case PartKind::Motor:
+        return (p.number("hp") ? num(p, "hp", " hp") : num(p, "kw", " kW")) + "  " +
+               num(p, "volts", " V");
+    case PartKind::Load:
+        return (p.number("kva") ? num(p, "kva", " kVA") : num(p, "kw", " kW")) + "  " +
+               num(p, "volts", " V");
+    }
+    return {};
+}
+
+void PartItem::paintSymbol(QPainter* p) const {
+    const PartKind k = m_part.kind;
+    switch (k) {
+    case PartKind::Source:
+        p->drawEllipse(QPointF(0, -2), 14, 14);
+        p->drawArc(QRectF(-8, -7, 8, 10), 0, 180 * 16);
+        p->drawArc(QRectF(0, -7, 8, 10), 180 * 16, 180 * 16);
+        p->drawLine(QPointF(0, 12), QPointF(0, kHalf));
+        break;
+    case PartKind::Transformer:
+        p->drawEllipse(QPointF(0, -7), 11, 11);
+        p->drawEllipse(QPointF(0, 7), 11, 11);
+        break;
+    case PartKind::Bus: {
+        QPen bar = p->pen();
+        bar.setWidthF(6);
+        p->setPen(bar);
+        p->drawLine(QPointF(m_barLeft, 0), QPointF(m_barRight, 0));
+        break;
+    }
+    case PartKind::Breaker:
+    case PartKind::InstBreaker:
+        p->drawLine(QPointF(0, -kHalf), QPointF(0, -9));
+        p->drawRect(QRectF(-9, -9, 18, 18));
+        p->drawLine(QPointF(0, 9), QPointF(0, kHalf));
+        if (k == PartKind::InstBreaker)
+            p->drawText(QRectF(-9, -9, 18, 18), Qt::AlignCenter, "i");
+        if (m_part.isOpen())
+            p->drawLine(QPointF(-12, 12), QPointF(12, -12));
+        break;
+    case PartKind::Fuse:
+        p->drawLine(QPointF(0, -kHalf), QPointF(0, kHalf));
+        p->drawRect(QRectF(-5, -11, 10, 22));
+        break;
+    case PartKind::Disconnect:
+    case PartKind::Contactor:
+        p->drawLine(QPointF(0, -kHalf), QPointF(0, -8));
+        p->drawLine(QPointF(0, 8), QPointF(0, kHalf));
+        if (m_part.isOpen())
+            p->drawLine(QPointF(0, 8), QPointF(-10, -8));
+        else
+            p->drawLine(QPointF(0, 8), QPointF(-3, -8));
+        if (k == PartKind::Contactor) {
+            p->drawLine(QPointF(-8, -8), QPointF(8, -8));
+            p->drawLine(QPointF(-8, 8), QPointF(8, 8));
+        }
+        break;
+    case PartKind::Overload:
+        p->drawLine(QPointF(0, -kHalf), QPointF(0, -8));
+        p->drawArc(QRectF(-6, -8, 12, 8), 90 * 16, -180 * 16);
+        p->drawArc(QRectF(-6, 0, 12, 8), 90 * 16, 180 * 16);
+        p->drawLine(QPointF(0, 8), QPointF(0, kHalf));
+        break;
+    case PartKind::Cable:
+        p->drawLine(QPointF(0, -kHalf), QPointF(0, kHalf));
+        p->drawLine(QPointF(-6, -4), QPointF(6, 4));
+        p->drawLine(QPointF(-6, 0), QPointF(6, 8));
+        break;
+    case PartKind::Motor:
+        p->drawLine(QPointF(0, -kHalf), QPointF(0, -6));
+        p->drawEllipse(QPointF(0, 8), 14, 14);
+        p->drawText(QRectF(-14, -6, 28, 28), Qt::AlignCenter, "M");
+        break;
+    case PartKind::Load:
+        p->drawLine(QPointF(0, -kHalf), QPointF(0, -4));
+        p->drawPolygon(QPolygonF({QPointF(-10, -4), QPointF(10, -4), QPointF(0, 14)}));
+        break;
+    }
+}
+
+void PartItem::paint(QPainter* p, const QStyleOptionGraphicsItem* option, QWidget*) {
+    p->setRenderHint(QPainter::Antialiasing);
+    QPen pen(isSelected() ? kSelect : kInk, 1.6);
+    p->setPen(pen);
+    QFont f = p->font();
+    f.setPointSizeF(7.5);
+    p->setFont(f);
+    paintSymbol(p);
+    p->setPen(isSelected() ? kSelect : kInk);
+    const qreal textX = m_part.kind == PartKind::Bus ? m_barRight + 16 : 24;
+    const qreal textY = m_part.kind == PartKind::Bus ? -18 : -16;
+    QFont bold = f;
+    bold.setBold(true);
+    p->setFont(bold);
+    p->drawText(QRectF(textX, textY, 130, 14), Qt::AlignLeft | Qt::AlignVCenter,
+                QString::fromStdString(m_part.tag));
+    p->setFont(f);
+    p->setPen(QColor(0x55, 0x5f, 0x6a));
+    p->drawText(QRectF(textX, textY + 13, 130, 14), Qt::AlignLeft | Qt::AlignVCenter,
+                ratingText());
+    if (m_badge) {
+        // upper right of the symbol, between it and the tag
+        const QPointF at = m_part.kind == PartKind::Bus ? QPointF(m_barRight + 2, -12)
+                                                        : QPointF(14, -14);
+        p->save();
+        p->translate(at);
+        p->setPen(QPen(Qt::white, 1.2));
+        p->setBrush(severityColor(*m_badge));
+        p->drawPath(severityShape(*m_badge, 13));
+        p->setPen(Qt::white);
+        QFont bf = f;
+        bf.setBold(true);
+        bf.setPointSizeF(6.5);
+        p->setFont(bf);
+        p->drawText(QRectF(-6, -6, 12, 12), Qt::AlignCenter,
+                    *m_badge == Severity::Note ? "i" : "!");
+        p->restore();
+    }
+    (void)option;
+}
+
+} // namespace lineward::ui
