@@ -69,9 +69,12 @@ const std::array<FieldSpec, 6> kInstBreakerFields{{
     kOpen,
 }};
 
-const std::array<FieldSpec, 3> kFuseFields{{
+const std::array<FieldSpec, 4> kFuseFields{{
     {"fuse_type", "Fuse type", "", FT::Choice, 0, 0, false, true, std::string("time_delay"),
      {"time_delay", "fast"}},
+    {"fuse_class", "Fuse class", "", FT::Choice, 0, 0, false, false, {},
+     {"J", "RK1", "RK5", "CC", "CD", "G", "K5", "L", "T", "gG", "aM"},
+     "UL 248 class or IEC 60269 utilisation category"},
     {"amps", "Rating", "A", FT::Number, 0, 6000, true, true},
     {"interrupting_ka", "Interrupting rating", "kA", FT::Number, 0, 300, true, true},
 }};
