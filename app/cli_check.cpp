@@ -19,7 +19,7 @@ struct CheckOptions {
     std::string failOn = "violation";
 };
 
-int runCheck(const CheckOptions& o) {
+int runCheck(const CheckOptions& o, const Tables& tables) {
     const Severity threshold = *severityFromName(o.failOn);
     bool anyFindings = false, anyBad = false;
     nlohmann::ordered_json all = nlohmann::ordered_json::array();
@@ -31,7 +31,7 @@ int runCheck(const CheckOptions& o) {
             anyBad = true;
             continue;
         }
-        const auto report = checkDrawing(*loaded.drawing);
+        const auto report = checkDrawing(*loaded.drawing, tables);
         anyFindings = anyFindings || report.hasOpenAtLeast(threshold);
         if (o.json)
             all.push_back(reportJson(*loaded.drawing, report, file));
@@ -53,7 +53,7 @@ int runCheck(const CheckOptions& o) {
 
 } // namespace
 
-void addCheckCommand(CLI::App& app, int& exitCode) {
+void addCheckCommand(CLI::App& app, const TablesRef& tables, int& exitCode) {
     auto opts = std::make_shared<CheckOptions>();
     auto* cmd = app.add_subcommand(
         "check", "Check drawings against every rule. Exit 0: nothing at or above --fail-on; "
@@ -64,7 +64,7 @@ void addCheckCommand(CLI::App& app, int& exitCode) {
     cmd->add_option("--fail-on", opts->failOn,
                     "lowest severity that makes the exit code 1 (default: violation)")
         ->check(CLI::IsMember({"violation", "caution", "note"}));
-    cmd->callback([opts, &exitCode] { exitCode = runCheck(*opts); });
+    cmd->callback([opts, &tables, &exitCode] { exitCode = runCheck(*opts, *tables); });
 }
 
 } // namespace lineward::cli

@@ -1,14 +1,21 @@
 // The verbs of lineward-cli; each registers its options and its action on the CLI11 app.
 #pragma once
 
+#include "tables/tables.h"
+
 #include <CLI/CLI.hpp>
+
+#include <memory>
 
 namespace lineward::cli {
 
 /// Exit codes shared by every verb.
 enum Exit : int { kClean = 0, kFindings = 1, kBadInput = 2 };
 
+/// The reference tables, loaded once before any verb runs.
+using TablesRef = std::shared_ptr<const Tables>;
+
 /// `check FILE... [--json] [--fail-on violation|caution|note]`
-void addCheckCommand(CLI::App& app, int& exitCode);
+void addCheckCommand(CLI::App& app, const TablesRef& tables, int& exitCode);
 
 } // namespace lineward::cli

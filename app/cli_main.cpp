@@ -11,7 +11,14 @@ int main(int argc, char** argv) {
                  "force."};
     app.require_subcommand(1);
     int exitCode = lineward::cli::kClean;
-    lineward::cli::addCheckCommand(app, exitCode);
+    lineward::cli::TablesRef tables;
+    try {
+        tables = lineward::loadBuiltinTables();
+    } catch (const std::exception& e) {
+        std::cerr << "lineward-cli: reference table unusable: " << e.what() << "\n";
+        return lineward::cli::kBadInput;
+    }
+    lineward::cli::addCheckCommand(app, tables, exitCode);
     try {
         app.parse(argc, argv);
     } catch (const CLI::CallForHelp& e) {

@@ -5,6 +5,7 @@
 
 #include <QApplication>
 #include <QCommandLineParser>
+#include <QMessageBox>
 #include <QPixmap>
 #include <QTimer>
 
@@ -22,7 +23,15 @@ int main(int argc, char** argv) {
     QCommandLineOption shot("screenshot", "save a picture of the window to PNG and quit", "PNG");
     parser.addOption(shot);
     parser.process(app);
-    lineward::ui::MainWindow window;
+    std::shared_ptr<const lineward::Tables> tables;
+    try {
+        tables = lineward::loadBuiltinTables();
+    } catch (const std::exception& e) {
+        spdlog::critical("reference table unusable: {}", e.what());
+        QMessageBox::critical(nullptr, "Lineward", QString("A reference table is unusable:\n") + e.what());
+        return 2;
+    }
+    lineward::ui::MainWindow window(tables);
     window.show();
     if (!parser.positionalArguments().isEmpty())
         window.openFile(parser.positionalArguments().first(), parser.isSet(shot));

@@ -7,7 +7,10 @@
 
 namespace lineward::ui {
 
-Document::Document(QObject* parent) : QObject(parent) { recheck(); }
+Document::Document(std::shared_ptr<const Tables> tables, QObject* parent)
+    : QObject(parent), m_tables(std::move(tables)) {
+    recheck();
+}
 
 QString Document::open(const QString& path) {
     auto loaded = io::loadDrawing(path.toStdString());
@@ -29,7 +32,7 @@ QString Document::saveAs(const QString& path) {
 }
 
 void Document::recheck() {
-    m_report = checkDrawing(m_drawing);
+    m_report = checkDrawing(m_drawing, *m_tables);
     emit reportChanged();
 }
 

@@ -4,6 +4,8 @@
 #include "model/drawing.h"
 #include "rules/check.h"
 
+#include <memory>
+
 #include <QObject>
 #include <QString>
 
@@ -13,7 +15,8 @@ namespace lineward::ui {
 class Document : public QObject {
     Q_OBJECT
 public:
-    explicit Document(QObject* parent = nullptr);
+    explicit Document(std::shared_ptr<const Tables> tables, QObject* parent = nullptr);
+    const Tables& tables() const { return *m_tables; }
 
     const Drawing& drawing() const { return m_drawing; }
     const CheckReport& report() const { return m_report; }
@@ -33,6 +36,7 @@ signals:
 
 private:
     void recheck();
+    std::shared_ptr<const Tables> m_tables;
     Drawing m_drawing;
     CheckReport m_report;
     QString m_path;

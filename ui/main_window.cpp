@@ -19,8 +19,8 @@
 
 namespace lineward::ui {
 
-MainWindow::MainWindow(QWidget* parent)
-    : QMainWindow(parent), m_scene(new SheetScene(m_doc, this)), m_view(new QGraphicsView),
+MainWindow::MainWindow(std::shared_ptr<const Tables> tables, QWidget* parent)
+    : QMainWindow(parent), m_doc(std::move(tables)), m_scene(new SheetScene(m_doc, this)), m_view(new QGraphicsView),
       m_findings(new FindingsPanel(m_doc)), m_counts(new QLabel) {
     setObjectName("mainWindow");
     m_view->setObjectName("sheetView");

@@ -17,7 +17,7 @@ class FindingsPanel;
 class MainWindow : public QMainWindow {
     Q_OBJECT
 public:
-    explicit MainWindow(QWidget* parent = nullptr);
+    explicit MainWindow(std::shared_ptr<const Tables> tables, QWidget* parent = nullptr);
     Document& document() { return m_doc; }
     SheetScene* scene() const { return m_scene; }
     QGraphicsView* view() const { return m_view; }

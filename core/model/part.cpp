@@ -122,6 +122,8 @@ std::vector<std::string> validatePart(const Part& p) {
     case PartKind::Cable:
         temperatureColumn(p, "insulation_c", out);
         temperatureColumn(p, "termination_c", out);
+        if (auto egc = p.word("egc_size"); egc && !egc->empty() && !isKnownConductorSize(*egc))
+            out.push_back("egc_size '" + *egc + "' is not a conductor size");
         if (auto size = p.word("size"); size && !isKnownConductorSize(*size))
             out.push_back("size '" + *size +
                           "' is not a conductor size (write e.g. \"8 AWG\", \"250 kcmil\" or "

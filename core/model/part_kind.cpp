@@ -101,7 +101,7 @@ const std::array<FieldSpec, 4> kOverloadFields{{
      {"10A", "10", "20", "30"}},
 }};
 
-const std::array<FieldSpec, 9> kCableFields{{
+const std::array<FieldSpec, 10> kCableFields{{
     {"material", "Conductor", "", FT::Choice, 0, 0, false, true, std::string("cu"),
      {"cu", "al"}},
     {"size", "Size", "", FT::Text, 0, 0, false, true},
@@ -117,9 +117,11 @@ const std::array<FieldSpec, 9> kCableFields{{
      false, 3.0},
     {"ambient_c", "Ambient", "°C", FT::Number, -40, 90, false, false, {}, {},
      "blank: the drawing's ambient"},
+    {"egc_size", "Equipment grounding conductor", "", FT::Text, 0, 0, false, false, {}, {},
+     "blank: the raceway serves as the EGC (NEC 250.118)"},
 }};
 
-const std::array<FieldSpec, 14> kMotorFields{{
+const std::array<FieldSpec, 15> kMotorFields{{
     {"hp", "Rated output", "hp", FT::Number, 0, 5000, true, false, {}, {},
      "give this or kw"},
     {"kw", "Rated output", "kW", FT::Number, 0, 4000, true, false, {}, {}, "give this or hp"},
@@ -137,7 +139,10 @@ const std::array<FieldSpec, 14> kMotorFields{{
     {"stall_hot_s", "Safe stall time, hot", "s", FT::Number, 0, 600, true, false},
     {"stall_cold_s", "Safe stall time, cold", "s", FT::Number, 0, 600, true, false},
     {"temp_rise_c", "Marked temperature rise", "°C", FT::Number, 0, 200, true, false},
-    {"hard_to_start", "Hard to start", "", FT::Flag, 0, 0, false, false, false},
+    {"premium_eff", "Design B premium efficiency", "", FT::Flag, 0, 0, false, false, false, {},
+     "NEMA premium efficiency; Table 430.52 allows a higher instantaneous setting"},
+    {"hard_to_start", "Hard to start", "", FT::Flag, 0, 0, false, false, false, {},
+     "set where the motor will not start at the Table 430.52 rating (Exception No. 2)"},
 }};
 
 const std::array<FieldSpec, 6> kLoadFields{{

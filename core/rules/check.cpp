@@ -2,7 +2,9 @@
 #include "rules/check.h"
 
 #include "rules/drawing_rules.h"
+#include "rules/rule_context.h"
 #include "rules/topology_rules.h"
+#include "topology/flow.h"
 #include "topology/network.h"
 
 #include <algorithm>
@@ -36,11 +38,15 @@ void markAccepted(const Drawing& d, std::vector<Finding>& findings) {
 
 } // namespace
 
-CheckReport checkDrawing(const Drawing& drawing) {
+CheckReport checkDrawing(const Drawing& drawing, const Tables& tables) {
     CheckReport report;
     Network net(drawing);
+    Flow flow(net);
+    const RuleContext ctx{drawing, net, flow, tables};
     checkDrawingRules(drawing, report.findings);
     checkTopology(net, report.findings);
+    checkMotorBranches(ctx, report.findings);
+    checkFeeders(ctx, report.findings);
     markAccepted(drawing, report.findings);
     std::stable_sort(report.findings.begin(), report.findings.end(),
                      [](const Finding& a, const Finding& b) {

@@ -3,6 +3,7 @@
 
 #include "model/drawing.h"
 #include "rules/finding.h"
+#include "tables/tables.h"
 
 #include <array>
 #include <vector>
@@ -20,6 +21,6 @@ struct CheckReport {
 };
 
 /// Runs every rule on the drawing. Pure: the same drawing gives the same report.
-CheckReport checkDrawing(const Drawing& drawing);
+CheckReport checkDrawing(const Drawing& drawing, const Tables& tables);
 
 } // namespace lineward

@@ -1,6 +1,7 @@
 // Report rendering. Text groups findings under the part they are about (their first part).
 #include "rules/report_format.h"
 
+#include <cmath>
 #include <map>
 #include <sstream>
 
@@ -15,6 +16,9 @@ std::string partLabel(const Drawing& d, PartId id) {
     return (p->tag.empty() ? "#" + std::to_string(id.value) : p->tag) + " (" +
            std::string(kindInfo(p->kind).name) + ")";
 }
+
+// Two decimals are enough for people; JSON keeps full precision.
+std::string rounded(double v) { return formatNumber(std::round(v * 100.0) / 100.0); }
 
 nlohmann::ordered_json fieldValueJson(const FieldValue& v) {
     if (auto d = std::get_if<double>(&v))
@@ -48,8 +52,8 @@ std::string reportText(const Drawing& d, const CheckReport& r, const std::string
         for (const Finding* f : list) {
             s << "  " << (f->accepted ? "[accepted] " : "") << findingHeadline(*f) << "\n";
             if (f->computed && f->limit)
-                s << "      computed " << formatNumber(*f->computed) << " " << f->unit
-                  << ", limit " << formatNumber(*f->limit) << " " << f->unit << "\n";
+                s << "      computed " << rounded(*f->computed) << " " << f->unit << ", limit "
+                  << rounded(*f->limit) << " " << f->unit << "\n";
             for (const auto& t : f->trace)
                 s << "      " << t.name << ": " << t.value << "\n";
             if (f->fix)

@@ -64,7 +64,7 @@ TEST(Docs, RulesDocumentMatchesCatalogue) {
 TEST(Samples, CleanSampleChecksClean) {
     auto r = io::loadDrawing(sourcePath("samples/kestrel-mill-mcc1.lineward"));
     ASSERT_TRUE(r) << r.error->text();
-    const auto report = checkDrawing(*r.drawing);
+    const auto report = checkDrawing(*r.drawing, testTables());
     for (const auto& f : report.findings)
         ADD_FAILURE() << f.ruleId << ": " << f.message;
     EXPECT_GE(r.drawing->buckets().size(), 12u);
@@ -90,7 +90,7 @@ TEST(Samples, MistakeSampleReportsExactlyTheListedFindings) {
     auto r = io::loadDrawing(sourcePath("samples/kestrel-mill-mcc1-review.lineward"));
     ASSERT_TRUE(r) << r.error->text();
     std::multiset<std::pair<std::string, std::string>> found;
-    for (const auto& f : checkDrawing(*r.drawing).findings)
+    for (const auto& f : checkDrawing(*r.drawing, testTables()).findings)
         found.insert({f.ruleId, r.drawing->part(f.parts.front())->tag});
     EXPECT_EQ(found, listed);
 }

@@ -34,6 +34,11 @@ BucketId DrawingBuilder::bucket(const std::string& tag, std::vector<PartId> part
     return id;
 }
 
+const Tables& testTables() {
+    static const auto tables = loadBuiltinTables();
+    return *tables;
+}
+
 std::string readFile(const std::string& path) {
     std::ifstream in(path, std::ios::binary);
     std::ostringstream s;
@@ -49,8 +54,9 @@ Drawing smallLineup() {
     DrawingBuilder b;
     auto src = b.add(PartKind::Source, "UTIL", {{"kv", 13.8}, {"fault_ka", 20.0}});
     auto tx = b.add(PartKind::Transformer, "TX",
-                    {{"kva", 1000.0}, {"pri_v", 13800.0}, {"sec_v", 480.0}, {"z_pct", 5.75}});
-    auto main = b.add(PartKind::Breaker, "CB-M", {{"trip_a", 1200.0}, {"interrupting_ka", 65.0}});
+                    {{"kva", 75.0}, {"pri_v", 13800.0}, {"sec_v", 480.0}, {"z_pct", 5.75}});
+    // 430.62(A): one 25 hp motor (FLC 34 A) behind an 80 A branch breaker allows an 80 A main.
+    auto main = b.add(PartKind::Breaker, "CB-M", {{"trip_a", 80.0}, {"interrupting_ka", 65.0}});
     auto bus = b.add(PartKind::Bus, "MCC", {{"volts", 480.0}, {"amps", 1200.0}});
     auto cb = b.add(PartKind::Breaker, "CB-1", {{"trip_a", 80.0}, {"interrupting_ka", 65.0}});
     auto k = b.add(PartKind::Contactor, "K-1", {{"nema_size", std::string("2")}});

@@ -2,6 +2,7 @@
 #pragma once
 
 #include "model/drawing.h"
+#include "tables/tables.h"
 
 #include <string>
 
@@ -19,6 +20,9 @@ public:
 private:
     Drawing m_d;
 };
+
+/// The built-in tables, loaded once for the test run.
+const Tables& testTables();
 
 /// Whole file as a string; empty when missing.
 std::string readFile(const std::string& path);

@@ -14,7 +14,7 @@ namespace {
 
 std::vector<std::string> rulesOf(const Drawing& d) {
     std::vector<std::string> ids;
-    for (const auto& f : checkDrawing(d).findings)
+    for (const auto& f : checkDrawing(d, testTables()).findings)
         ids.push_back(f.ruleId);
     std::sort(ids.begin(), ids.end());
     return ids;
@@ -67,7 +67,7 @@ TEST(Topology, OpenBreakerDeEnergizesButDoesNotUnfeed) {
     ASSERT_FALSE(d.part(PartId(5))->set("open", true));
     EXPECT_EQ(countRule(d, "topology.deenergized"), 1);
     EXPECT_EQ(countRule(d, "topology.unfed"), 0);
-    const auto r = checkDrawing(d);
+    const auto r = checkDrawing(d, testTables());
     EXPECT_FALSE(r.hasOpenAtLeast(Severity::Caution)); // a note only
 }
 
@@ -98,7 +98,7 @@ TEST(Topology, TwoSourcesOnOneClosedNetworkAreALoop) {
     src2.tag = "GEN";
     d.addPart(src2);
     d.addWire(Wire{d.nextWireId(), {src2.id, 0}, {PartId(2), 0}});
-    const auto r = checkDrawing(d);
+    const auto r = checkDrawing(d, testTables());
     auto it = std::find_if(r.findings.begin(), r.findings.end(),
                            [](const Finding& f) { return f.ruleId == "topology.loop"; });
     ASSERT_NE(it, r.findings.end());
@@ -125,7 +125,7 @@ INSTANTIATE_TEST_SUITE_P(NemaUtilisation, MotorVoltage,
 TEST(Topology, TransformerPrimaryMustMatchItsSystem) {
     Drawing d = smallLineup();
     ASSERT_FALSE(d.part(PartId(2))->set("pri_v", 4160.0));
-    const auto r = checkDrawing(d);
+    const auto r = checkDrawing(d, testTables());
     ASSERT_EQ(countRule(d, "topology.voltage.mismatch"), 1);
     auto it = std::find_if(r.findings.begin(), r.findings.end(), [](const Finding& f) {
         return f.ruleId == "topology.voltage.mismatch";
@@ -180,22 +180,27 @@ TEST(Topology, InstantaneousBreakerNeedsOverloadInItsBucket) {
 
 TEST(Check, AcceptedDeviationIsMarkedAndNotCounted) {
     Drawing d = smallLineup();
-    ASSERT_FALSE(d.part(PartId(9))->set("volts", 230.0));
-    auto r = checkDrawing(d);
-    EXPECT_TRUE(r.hasOpenAtLeast(Severity::Violation));
+    ASSERT_FALSE(d.part(PartId(9))->set("volts", 400.0)); // 13 % off a 460 V rating
+    auto r = checkDrawing(d, testTables());
+    ASSERT_EQ(countRule(d, "topology.voltage.mismatch"), 1);
+    const int before = r.openCounts[2];
     d.accepted().push_back({"topology.voltage.mismatch", {PartId(9)}, "R. Quill", "2026-12-01",
-                            "step-down transformer supplied loose with the motor"});
-    r = checkDrawing(d);
-    EXPECT_FALSE(r.hasOpenAtLeast(Severity::Violation));
+                            "motor rewound for 480 V; nameplate to be replaced"});
+    r = checkDrawing(d, testTables());
+    EXPECT_EQ(r.openCounts[2], before - 1);
     EXPECT_EQ(r.acceptedCount, 1);
-    ASSERT_FALSE(r.findings.empty());
-    EXPECT_TRUE(r.findings.front().accepted);
+    auto it = std::find_if(r.findings.begin(), r.findings.end(), [](const Finding& f) {
+        return f.ruleId == "topology.voltage.mismatch";
+    });
+    ASSERT_NE(it, r.findings.end());
+    EXPECT_TRUE(it->accepted);
+    EXPECT_NE(it->acceptedNote.find("R. Quill"), std::string::npos);
 }
 
 TEST(DrawingRules, DuplicateTagsAreACaution) {
     Drawing d = smallLineup();
     d.part(PartId(8))->tag = "M-1"; // cable given the motor's tag
-    const auto r = checkDrawing(d);
+    const auto r = checkDrawing(d, testTables());
     ASSERT_EQ(countRule(d, "drawing.tag.duplicate"), 1);
     auto it = std::find_if(r.findings.begin(), r.findings.end(), [](const Finding& f) {
         return f.ruleId == "drawing.tag.duplicate";

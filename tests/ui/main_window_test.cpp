@@ -15,13 +15,17 @@ using namespace lineward;
 using namespace lineward::ui;
 
 namespace {
+std::shared_ptr<const Tables> sharedTables() {
+    static auto t = loadBuiltinTables();
+    return t;
+}
 QString sample(const char* name) {
     return QString(LINEWARD_SOURCE_DIR) + "/samples/" + name;
 }
 } // namespace
 
 TEST(MainWindow, OpensSampleShowsBadgesAndFindings) {
-    MainWindow w;
+    MainWindow w(sharedTables());
     w.show();
     ASSERT_TRUE(w.openFile(sample("kestrel-mill-mcc1-review.lineward"), true).isEmpty());
     const auto& report = w.document().report();
@@ -50,7 +54,7 @@ TEST(MainWindow, OpensSampleShowsBadgesAndFindings) {
 }
 
 TEST(MainWindow, CleanSampleHasNoBadges) {
-    MainWindow w;
+    MainWindow w(sharedTables());
     ASSERT_TRUE(w.openFile(sample("kestrel-mill-mcc1.lineward"), true).isEmpty());
     for (const auto* gi : w.scene()->items()) {
         if (auto* pi = qgraphicsitem_cast<const PartItem*>(gi)) {
@@ -60,7 +64,7 @@ TEST(MainWindow, CleanSampleHasNoBadges) {
 }
 
 TEST(MainWindow, BrokenFileGivesLocatedMessageAndKeepsDrawing) {
-    MainWindow w;
+    MainWindow w(sharedTables());
     ASSERT_TRUE(w.openFile(sample("kestrel-mill-mcc1.lineward"), true).isEmpty());
     const auto parts = w.document().drawing().parts().size();
     const QString why = w.openFile(QString(LINEWARD_SOURCE_DIR) + "/README.md", true);

@@ -1,0 +1,35 @@
+// One motor branch under check: shared by the two files of the branch.* family.
+#pragma once
+
+#include "rules/rule_catalog.h"
+#include "rules/rule_context.h"
+#include "sizing/motor_sizing.h"
+
+namespace lineward {
+
+/// The branch, its FLC and where findings go.
+struct BranchCheck {
+    const RuleContext& ctx;
+    const MotorBranch& b;
+    const MotorFlc& flc;
+    std::vector<Finding>& out;
+
+    /// Adds a finding about `about` (and the motor), starting its trace with the FLC steps.
+    Finding& add(std::string_view rule, const Part& about, std::string message) {
+        std::vector<PartId> parts{about.id};
+        if (about.id != b.motor->id)
+            parts.push_back(b.motor->id);
+        out.push_back(makeFinding(rule, parts, std::move(message)));
+        out.back().trace = flc.trace;
+        return out.back();
+    }
+    std::string motorName() const {
+        return b.motor->tag + " (" + fmt(motorHp(*b.motor), 2) + " hp, " +
+               fmt(b.motor->number("volts").value_or(0), 0) + " V)";
+    }
+};
+
+/// Overload relay, contactor, disconnect and EGC checks (motor_branch_devices.cpp).
+void checkBranchDevices(BranchCheck& c);
+
+} // namespace lineward

@@ -1,0 +1,160 @@
+// branch.* rules for the devices of a motor branch: overload relay (430.32), contactor
+// (NEMA ICS 2), disconnect (430.109, 430.110) and equipment grounding conductor (250.122).
+#include "rules/branch_check.h"
+
+#include <cmath>
+
+namespace lineward {
+
+namespace {
+
+void overload(BranchCheck& c) {
+    const Part* ol = c.b.overload;
+    if (!ol)
+        return; // topology.motor.no_overload reports it
+    auto fla = c.b.motor->number("fla");
+    if (!fla) {
+        auto& f = c.add("branch.overload.no_fla", *ol,
+                        c.motorName() + " has no nameplate FLA; the setting of " + ol->tag +
+                            " cannot be judged (NEC 430.6(A)(2))");
+        f.fix = Fix{"enter the nameplate full-load current (fla)", {}};
+        return;
+    }
+    const auto lim = overloadLimit(*c.b.motor, *fla);
+    const double setting = ol->number("setting_a").value_or(0);
+    if (setting <= lim.maxA + 1e-9)
+        return;
+    const bool withinC = setting <= lim.maxC + 1e-9;
+    auto& f = c.add(withinC ? "branch.overload.exception" : "branch.overload.setting", *ol,
+                    ol->tag + " set at " + fmt(setting) + " A exceeds " + fmt(lim.pctA, 0) + " % of FLA " +
+                        fmt(*fla) + " A = " + fmt(lim.maxA) + " A" +
+                        (withinC ? "; 430.32(C) allows up to " + fmt(lim.maxC) +
+                                       " A only where the lower setting will not let the motor start"
+                                 : ""));
+    f.trace = {{"nameplate FLA", fmt(*fla) + " A (NEC 430.6(A)(2))"},
+               {"basis", lim.basis},
+               {"430.32(A)(1)", fmt(lim.pctA, 0) + " % × " + fmt(*fla) + " = " + fmt(lim.maxA) + " A"},
+               {"430.32(C)", fmt(lim.pctC, 0) + " % × " + fmt(*fla) + " = " + fmt(lim.maxC) + " A"}};
+    f.computed = setting;
+    f.limit = withinC ? lim.maxC : lim.maxA;
+    f.unit = "A";
+    const double fixTo = std::floor(lim.maxA * 10.0) / 10.0;
+    if (fixTo >= ol->number("range_min_a").value_or(0))
+        f.fix = Fix{"set " + ol->tag + " to " + fmt(fixTo) + " A", {{ol->id, "setting_a", fixTo}}};
+    else
+        f.fix = Fix{"choose a relay whose range reaches " + fmt(fixTo) + " A", {}};
+}
+
+void contactor(BranchCheck& c) {
+    const Part* k = c.b.contactor;
+    if (!k)
+        return;
+    const double hp = motorHp(*c.b.motor), v = c.b.motor->number("volts").value_or(0);
+    const int ph = static_cast<int>(c.b.motor->number("phases").value_or(3));
+    const double amps = std::max(c.flc.amps, c.b.motor->number("fla").value_or(0));
+    if (auto ac3 = k->number("ac3_a")) {
+        if (*ac3 >= amps - 1e-9)
+            return;
+        auto& f = c.add("branch.contactor.size", *k, k->tag + " AC-3 rating " + fmt(*ac3) +
+                                                         " A is below the motor current " + fmt(amps) + " A");
+        f.computed = *ac3;
+        f.limit = amps;
+        f.unit = "A";
+        f.fix = Fix{"use a contactor rated at least " + fmt(amps) + " A AC-3", {{k->id, "ac3_a", std::ceil(amps)}}};
+        return;
+    }
+    const auto size = k->word("nema_size").value_or("");
+    const NemaRow* row = c.ctx.tables.nemaRow(size);
+    auto rated = row ? c.ctx.tables.nemaHp(*row, v, ph) : std::nullopt;
+    if (row && rated && *rated >= hp - 1e-9 && row->continuousA >= amps - 1e-9)
+        return;
+    auto& f = c.add("branch.contactor.size", *k,
+                    k->tag + " NEMA size " + size + " is rated " +
+                        (rated ? fmt(*rated, 2) + " hp" : std::string("no hp")) + " at " + fmt(v, 0) +
+                        " V and " + (row ? fmt(row->continuousA, 0) : std::string("?")) + " A; " +
+                        c.motorName() + " needs " + fmt(hp, 2) + " hp and " + fmt(amps) + " A");
+    f.computed = rated.value_or(0);
+    f.limit = hp;
+    f.unit = "hp";
+    f.trace.push_back({"NEMA ICS 2 size " + size, row ? fmt(row->continuousA, 0) + " A continuous" : "unknown"});
+    if (auto next = smallestNemaSize(hp, v, ph, amps, c.ctx.tables))
+        f.fix = Fix{"use NEMA size " + *next, {{k->id, "nema_size", *next}}};
+}
+
+// Disconnect ratings sold as standard (common practice).
+constexpr double kDisconnectSizes[] = {30, 60, 100, 200, 400, 600, 800, 1200, 1600, 2000};
+
+void disconnect(BranchCheck& c) {
+    const Part* ds = c.b.disconnect;
+    if (!ds)
+        return;
+    const double need = 1.15 * c.flc.amps, amps = ds->number("amps").value_or(0);
+    if (amps < need - 1e-9) {
+        auto& f = c.add("branch.disconnect.rating", *ds, ds->tag + " rated " + fmt(amps, 0) +
+                                                             " A is below 115 % of FLC = " + fmt(need) + " A");
+        f.computed = amps;
+        f.limit = need;
+        f.unit = "A";
+        f.trace.push_back({"430.110(A)", "1.15 × " + fmt(c.flc.amps) + " A = " + fmt(need) + " A"});
+        for (double s : kDisconnectSizes)
+            if (s >= need) {
+                f.fix = Fix{"use a " + fmt(s, 0) + " A switch", {{ds->id, "amps", s}}};
+                break;
+            }
+    }
+    const double hp = motorHp(*c.b.motor);
+    const auto hpRating = ds->number("hp_rating");
+    if (hpRating && *hpRating >= hp - 1e-9)
+        return;
+    auto& f = c.add("branch.disconnect.hp", *ds,
+                    ds->tag + (hpRating ? " is rated " + fmt(*hpRating, 2) + " hp" : std::string(" has no hp rating")) +
+                        "; " + c.motorName() + " needs a switch rated at least " + fmt(hp, 2) + " hp");
+    f.computed = hpRating.value_or(0);
+    f.limit = hp;
+    f.unit = "hp";
+    f.fix = Fix{"use a switch rated " + fmt(hp, 2) + " hp or more", {{ds->id, "hp_rating", hp}}};
+}
+
+void groundingConductor(BranchCheck& c) {
+    if (!c.b.scpd)
+        return;
+    const auto type = *scpdTypeOf(*c.b.scpd);
+    const double deviceA = egcDeviceRating(*c.b.scpd, type, motorTypeOf(*c.b.motor), c.flc.amps, c.ctx.tables);
+    for (const Part* cable : c.b.cables) {
+        const auto given = cable->word("egc_size").value_or("");
+        const auto phase = cable->word("size").value_or("");
+        if (given.empty())
+            continue; // the raceway is the EGC (250.118)
+        const auto cond = conditionsOf(*cable, c.ctx.settings());
+        CableConditions one = cond;
+        one.sets = 1;
+        auto minPhase = smallestCable(1.25 * c.flc.amps / cond.sets, one, c.ctx.tables);
+        auto need = egcSize(deviceA, cond.material, phase, minPhase ? minPhase->first : phase, c.ctx.tables);
+        auto needArea = need ? c.ctx.tables.areaCmil(need->size) : std::nullopt;
+        auto givenArea = c.ctx.tables.areaCmil(given);
+        if (!need || !needArea || !givenArea || *givenArea >= *needArea - 1e-6)
+            continue;
+        auto& f = c.add("branch.egc.size", *cable, cable->tag + " equipment grounding conductor " + given +
+                                                       " is smaller than " + need->size);
+        f.computed = *givenArea;
+        f.limit = *needArea;
+        f.unit = "cmil";
+        f.trace.push_back({"device rating for the EGC", fmt(deviceA, 0) + " A" +
+                                                            (type == ScpdType::InstantaneousBreaker
+                                                                 ? " (time-delay fuse maximum, 250.122(D)(1))"
+                                                                 : "")});
+        f.trace.insert(f.trace.end(), need->trace.begin(), need->trace.end());
+        f.fix = Fix{"use " + need->size, {{cable->id, "egc_size", need->size}}};
+    }
+}
+
+} // namespace
+
+void checkBranchDevices(BranchCheck& c) {
+    overload(c);
+    contactor(c);
+    disconnect(c);
+    groundingConductor(c);
+}
+
+} // namespace lineward

@@ -1,0 +1,252 @@
+// Article 430 calculations. Each returns the numbers a finding or a proposal needs, and a trace
+// naming the table or clause behind every step.
+#include "sizing/motor_sizing.h"
+
+#include "model/conductor.h"
+
+#include <cmath>
+#include <cstdio>
+
+namespace lineward {
+
+std::string fmt(double v, int decimals) {
+    char buf[64];
+    std::snprintf(buf, sizeof buf, "%.*f", decimals, v);
+    std::string s(buf);
+    if (s.find('.') != std::string::npos) {
+        while (s.back() == '0')
+            s.pop_back();
+        if (s.back() == '.')
+            s.pop_back();
+    }
+    return s;
+}
+
+double motorHp(const Part& m) {
+    if (auto hp = m.number("hp"))
+        return *hp;
+    return m.number("kw").value_or(0) / 0.746;
+}
+
+MotorType motorTypeOf(const Part& m) {
+    if (m.number("phases").value_or(3) == 1)
+        return MotorType::SinglePhase;
+    if (m.flag("premium_eff") || m.word("design").value_or("B") == "E")
+        return MotorType::DesignBPremium;
+    return MotorType::SquirrelCage;
+}
+
+std::optional<MotorFlc> motorFlc(const Part& m, const Tables& t) {
+    MotorFlc r;
+    const int phases = static_cast<int>(m.number("phases").value_or(3));
+    const double volts = m.number("volts").value_or(0);
+    const FlcTable& table = phases == 1 ? t.flc1 : t.flc3;
+    double hp = m.number("hp").value_or(0);
+    if (!m.number("hp")) {
+        // A kW rating takes the next hp row at or above its equivalent (common practice).
+        const double eq = m.number("kw").value_or(0) / 0.746;
+        for (double row : table.hp)
+            if (row >= eq - 1e-6) {
+                hp = row;
+                break;
+            }
+        r.trace.push_back({"kW as hp", fmt(*m.number("kw"), 2) + " kW / 0.746 = " + fmt(eq, 2) +
+                                           " hp → table row " + fmt(hp, 2) + " hp"});
+    }
+    if (auto a = t.flc(hp, volts, phases, &r.columnV)) {
+        r.amps = *a;
+        r.hpUsed = hp;
+        r.trace.push_back({"FLC", fmt(*a, 1) + " A (NEC Table " +
+                                      std::string(phases == 1 ? "430.248" : "430.250") + ", " +
+                                      fmt(hp, 2) + " hp, " + fmt(r.columnV, 0) + " V column)"});
+        return r;
+    }
+    if (auto fla = m.number("fla")) {
+        r.amps = *fla;
+        r.fromTable = false;
+        r.trace.push_back({"FLC", fmt(*fla, 1) + " A from the nameplate: the table has no row for " +
+                                      fmt(hp, 2) + " hp at " + fmt(volts, 0) + " V"});
+        return r;
+    }
+    return std::nullopt;
+}
+
+std::optional<ScpdType> scpdTypeOf(const Part& d) {
+    switch (d.kind) {
+    case PartKind::Breaker:
+        return ScpdType::InverseTimeBreaker;
+    case PartKind::InstBreaker:
+        return ScpdType::InstantaneousBreaker;
+    case PartKind::Fuse:
+        return d.word("fuse_type").value_or("time_delay") == "fast" ? ScpdType::NonTimeDelayFuse
+                                                                   : ScpdType::TimeDelayFuse;
+    default:
+        return std::nullopt;
+    }
+}
+
+ScpdLimit scpdLimit(ScpdType type, MotorType motor, double flc, const Tables& t) {
+    const auto& row = t.scpdRow(motor);
+    const auto i = static_cast<std::size_t>(type);
+    ScpdLimit l;
+    l.pct = row.pct[i];
+    l.rawA = l.pct / 100.0 * flc;
+    l.excPct = row.excPct[i];
+    if (type == ScpdType::InverseTimeBreaker && flc > 100)
+        l.excPct = row.excItbAbove100;
+    if (type == ScpdType::InstantaneousBreaker) {
+        l.maxA = l.rawA; // a setting: no standard sizes
+        l.excMaxA = l.excPct / 100.0 * flc;
+        return l;
+    }
+    // 430.52(C)(1) Exception No. 1: the next higher standard size is permitted.
+    l.maxA = t.nextStandardAtOrAbove(l.rawA).value_or(l.rawA);
+    l.roundedUp = l.maxA > l.rawA + 1e-9;
+    // Exception No. 2 sets a ceiling ("shall in no case exceed"): round down.
+    l.excMaxA = t.standardAtOrBelow(l.excPct / 100.0 * flc).value_or(l.maxA);
+    l.excMaxA = std::max(l.excMaxA, l.maxA);
+    return l;
+}
+
+std::optional<double> lockedRotorA(const Part& m, const Tables& t, std::vector<TraceStep>* trace) {
+    if (auto lra = m.number("lra")) {
+        if (trace)
+            trace->push_back({"locked-rotor current", fmt(*lra, 0) + " A (given)"});
+        return *lra;
+    }
+    auto letter = m.word("code_letter");
+    if (!letter || letter->empty())
+        return std::nullopt;
+    auto kvaHp = t.codeLetterKvaPerHp((*letter)[0]);
+    if (!kvaHp)
+        return std::nullopt;
+    const double hp = motorHp(m), v = m.number("volts").value_or(0);
+    const bool one = m.number("phases").value_or(3) == 1;
+    const double lra = *kvaHp * hp * 1000.0 / (one ? v : std::sqrt(3.0) * v);
+    if (trace)
+        trace->push_back({"locked-rotor current",
+                          fmt(lra, 0) + " A = " + fmt(*kvaHp, 2) + " kVA/hp (code letter " + *letter +
+                              ", NEC Table 430.7(B), top of range) × " + fmt(hp, 2) + " hp × 1000 / (" +
+                              (one ? "" : "√3 × ") + fmt(v, 0) + " V)"});
+    return lra;
+}
+
+CableConditions conditionsOf(const Part& c, const Settings& s) {
+    CableConditions k;
+    k.material = c.word("material").value_or("cu") == "al" ? Material::Al : Material::Cu;
+    k.insulationC = static_cast<int>(c.number("insulation_c").value_or(90));
+    k.terminationC = static_cast<int>(c.number("termination_c").value_or(75));
+    k.ambientC = c.number("ambient_c").value_or(s.ambientC);
+    k.conductors = static_cast<int>(c.number("conductors").value_or(3));
+    k.sets = static_cast<int>(c.number("sets").value_or(1));
+    return k;
+}
+
+std::optional<Ampacity> cableAmpacity(const std::string& size, const CableConditions& c, const Tables& t) {
+    Ampacity a;
+    const char* mat = c.material == Material::Cu ? "Cu" : "Al";
+    auto ins = t.ampacityAt(size, c.material, c.insulationC);
+    auto term = t.ampacityAt(size, c.material, std::min(c.insulationC, c.terminationC));
+    auto amb = t.ambientFactor(c.ambientC, c.insulationC);
+    if (!ins || !term || !amb)
+        return std::nullopt;
+    const double adj = t.adjustmentFactor(c.conductors);
+    const double derated = *ins * *amb * adj;
+    const double perSet = std::min(derated, *term);
+    a.amps = perSet * c.sets;
+    a.trace.push_back({"conductor", size + " " + mat + ", " + std::to_string(c.insulationC) +
+                                        " °C insulation, " + std::to_string(c.terminationC) +
+                                        " °C terminations" +
+                                        (c.sets > 1 ? ", " + std::to_string(c.sets) + " sets" : "")});
+    a.trace.push_back({"table ampacity", fmt(*ins, 0) + " A in the " + std::to_string(c.insulationC) +
+                                             " °C column (NEC Table 310.16)"});
+    a.trace.push_back({"ambient factor", fmt(*amb, 2) + " at " + fmt(c.ambientC, 0) +
+                                             " °C (NEC Table 310.15(B)(1)(1))"});
+    a.trace.push_back({"adjustment factor", fmt(adj, 2) + " for " + std::to_string(c.conductors) +
+                                                " current-carrying conductors (NEC Table 310.15(C)(1))"});
+    a.trace.push_back({"termination limit", fmt(*term, 0) + " A in the " +
+                                                std::to_string(std::min(c.insulationC, c.terminationC)) +
+                                                " °C column (NEC 110.14(C)(1))"});
+    a.trace.push_back({"ampacity", "min(" + fmt(*ins, 0) + " × " + fmt(*amb, 2) + " × " + fmt(adj, 2) +
+                                       ", " + fmt(*term, 0) + ")" +
+                                       (c.sets > 1 ? " × " + std::to_string(c.sets) : "") + " = " +
+                                       fmt(a.amps, 1) + " A"});
+    return a;
+}
+
+std::optional<std::pair<std::string, Ampacity>> smallestCable(double requiredA, const CableConditions& c,
+                                                              const Tables& t, const std::string& minSize) {
+    bool started = false;
+    for (auto size : awgSizes()) {
+        started = started || size == minSize;
+        if (!started)
+            continue;
+        if (auto a = cableAmpacity(std::string(size), c, t); a && a->amps >= requiredA - 1e-9)
+            return std::pair{std::string(size), *a};
+    }
+    return std::nullopt;
+}
+
+OverloadLimit overloadLimit(const Part& m, double fla) {
+    OverloadLimit l;
+    const double sf = m.number("sf").value_or(1.0);
+    const auto rise = m.number("temp_rise_c");
+    const bool high = sf >= 1.15 - 1e-9 || (rise && *rise <= 40);
+    l.pctA = high ? 125 : 115;
+    l.pctC = high ? 140 : 130;
+    l.maxA = l.pctA / 100.0 * fla;
+    l.maxC = l.pctC / 100.0 * fla;
+    l.basis = high ? (sf >= 1.15 - 1e-9 ? "service factor " + fmt(sf, 2) + " ≥ 1.15"
+                                        : "marked temperature rise ≤ 40 °C")
+                   : "service factor " + fmt(sf, 2) + " < 1.15, no marked rise ≤ 40 °C";
+    return l;
+}
+
+std::optional<std::string> smallestNemaSize(double hp, double volts, int phases, double amps,
+                                            const Tables& t) {
+    for (const auto& row : t.nema) {
+        auto rated = t.nemaHp(row, volts, phases);
+        if (rated && *rated >= hp - 1e-9 && row.continuousA >= amps - 1e-9)
+            return row.size;
+    }
+    return std::nullopt;
+}
+
+double egcDeviceRating(const Part& device, ScpdType type, MotorType motor, double flc, const Tables& t) {
+    if (type == ScpdType::InstantaneousBreaker)
+        return scpdLimit(ScpdType::TimeDelayFuse, motor, flc, t).maxA;
+    return device.number(device.kind == PartKind::Breaker ? "trip_a" : "amps").value_or(0);
+}
+
+std::optional<EgcSize> egcSize(double deviceA, Material m, const std::string& phaseSize,
+                               const std::string& minPhaseSize, const Tables& t) {
+    auto base = t.egcFor(deviceA, m);
+    if (!base)
+        return std::nullopt;
+    EgcSize e{*base, {}};
+    e.trace.push_back({"EGC from device rating", *base + " for " + fmt(deviceA, 0) +
+                                                     " A (NEC Table 250.122)"});
+    auto phase = t.areaCmil(phaseSize), minPhase = t.areaCmil(minPhaseSize), egc = t.areaCmil(*base);
+    if (phase && minPhase && egc && *phase > *minPhase) {
+        // 250.122(B): increase the EGC in proportion to the phase conductors' circular mils.
+        const double ratio = *phase / *minPhase;
+        const double need = *egc * ratio;
+        for (auto size : awgSizes()) {
+            auto a = t.areaCmil(std::string(size));
+            if (a && *a >= need - 1e-6) {
+                e.size = std::string(size);
+                break;
+            }
+        }
+        e.trace.push_back({"proportional increase", fmt(*phase, 0) + " / " + fmt(*minPhase, 0) +
+                                                        " cmil = " + fmt(ratio, 2) + " × " + fmt(*egc, 0) +
+                                                        " cmil → " + e.size + " (NEC 250.122(B))"});
+    }
+    if (auto a = t.areaCmil(e.size); a && phase && *a > *phase) {
+        e.size = phaseSize;
+        e.trace.push_back({"250.122(A)", "not larger than the circuit conductors: " + phaseSize});
+    }
+    return e;
+}
+
+} // namespace lineward

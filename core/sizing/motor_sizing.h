@@ -1,0 +1,91 @@
+// Motor branch-circuit sizing by NEC 2023 Article 430: the calculations shared by the rules,
+// the auto-size proposal and `lineward-cli size`. Each result carries its trace.
+#pragma once
+
+#include "model/drawing.h"
+#include "rules/finding.h"
+#include "tables/tables.h"
+
+#include <optional>
+#include <string>
+#include <vector>
+
+namespace lineward {
+
+/// Full-load current used for conductors, short-circuit device and disconnect (430.6(A)(1)).
+struct MotorFlc {
+    double amps = 0;
+    bool fromTable = true; ///< false where the table has no row and the nameplate was used
+    double hpUsed = 0;     ///< table row (kW motors use the next hp row at or above kW/0.746)
+    double columnV = 0;
+    std::vector<TraceStep> trace;
+};
+std::optional<MotorFlc> motorFlc(const Part& motor, const Tables& t);
+double motorHp(const Part& motor); ///< hp, or kW / 0.746
+MotorType motorTypeOf(const Part& motor);
+
+/// Largest permitted rating or setting by Table 430.52(C)(1).
+struct ScpdLimit {
+    double pct = 0;       ///< table percentage
+    double rawA = 0;      ///< pct × FLC
+    double maxA = 0;      ///< after the next-standard-size rule (Exc. 1); the raw value for settings
+    bool roundedUp = false;
+    double excPct = 0;    ///< Exception No. 2 or 430.52(C)(3) percentage
+    double excMaxA = 0;   ///< largest rating the exception permits (rounded down for ratings)
+};
+ScpdLimit scpdLimit(ScpdType type, MotorType motor, double flc, const Tables& t);
+std::optional<ScpdType> scpdTypeOf(const Part& device);
+
+/// Locked-rotor current: the given LRA, else from the code letter (upper end of its range).
+std::optional<double> lockedRotorA(const Part& motor, const Tables& t, std::vector<TraceStep>* trace);
+/// Instantaneous pickup tolerance assumed below the setting (common practice: ±20 %).
+inline constexpr double kInstantaneousTolerance = 0.20;
+
+/// Installation conditions of a conductor.
+struct CableConditions {
+    Material material = Material::Cu;
+    int insulationC = 90, terminationC = 75;
+    double ambientC = 30;
+    int conductors = 3;
+    int sets = 1;
+};
+CableConditions conditionsOf(const Part& cable, const Settings& s);
+
+/// Ampacity after 110.14(C), 310.15(B)(1) and 310.15(C)(1), times parallel sets.
+struct Ampacity {
+    double amps = 0;
+    std::vector<TraceStep> trace;
+};
+std::optional<Ampacity> cableAmpacity(const std::string& size, const CableConditions& c, const Tables& t);
+/// Smallest US size (from `minSize`) whose ampacity reaches `requiredA`.
+std::optional<std::pair<std::string, Ampacity>> smallestCable(double requiredA, const CableConditions& c,
+                                                              const Tables& t,
+                                                              const std::string& minSize = "14 AWG");
+
+/// Overload limits of 430.32(A)(1) and (C) from the nameplate FLA.
+struct OverloadLimit {
+    double pctA = 0, maxA = 0; ///< 125 % or 115 %
+    double pctC = 0, maxC = 0; ///< 140 % or 130 %
+    std::string basis;
+};
+OverloadLimit overloadLimit(const Part& motor, double fla);
+
+/// Smallest NEMA size rated for the hp at the voltage and the current.
+std::optional<std::string> smallestNemaSize(double hp, double volts, int phases, double amps,
+                                            const Tables& t);
+
+/// Equipment grounding conductor by Table 250.122, increased by 250.122(B) in proportion to the
+/// phase conductor's area over the minimum size.
+struct EgcSize {
+    std::string size;
+    std::vector<TraceStep> trace;
+};
+std::optional<EgcSize> egcSize(double deviceA, Material m, const std::string& phaseSize,
+                               const std::string& minPhaseSize, const Tables& t);
+/// Device rating used for the EGC (250.122(D)(1): a time-delay fuse rating for instantaneous
+/// breakers).
+double egcDeviceRating(const Part& device, ScpdType type, MotorType motor, double flc, const Tables& t);
+
+std::string fmt(double v, int decimals = 1);
+
+} // namespace lineward

@@ -1,0 +1,188 @@
+// Turns the table files into typed tables; every cell is checked as it is read.
+#include "tables/tables.h"
+
+#include <algorithm>
+
+namespace lineward {
+
+namespace {
+
+using tables::CsvTable;
+using tables::TableError;
+
+FlcTable buildFlc(const CsvTable& t) {
+    FlcTable f;
+    f.source = t.source;
+    for (std::size_t c = 1; c < t.header.size(); ++c)
+        f.volts.push_back(std::stod(t.header[c]));
+    for (std::size_t r = 0; r < t.rows.size(); ++r) {
+        f.hp.push_back(t.required(r, 0));
+        std::vector<std::optional<double>> row;
+        for (std::size_t c = 1; c < t.header.size(); ++c)
+            row.push_back(t.number(r, c));
+        f.amps.push_back(std::move(row));
+    }
+    return f;
+}
+
+MotorType motorTypeFrom(const CsvTable& t, std::size_t r) {
+    const auto& k = t.rows[r][0];
+    if (k == "single_phase")
+        return MotorType::SinglePhase;
+    if (k == "squirrel_cage")
+        return MotorType::SquirrelCage;
+    if (k == "design_b_premium")
+        return MotorType::DesignBPremium;
+    if (k == "synchronous")
+        return MotorType::Synchronous;
+    if (k == "wound_rotor")
+        return MotorType::WoundRotor;
+    t.fail(r, "unknown motor type '" + k + "'");
+}
+
+std::vector<ScpdRow> buildScpd(const CsvTable& t) {
+    std::vector<ScpdRow> out;
+    const char* cols[4] = {"non_time_delay_fuse", "time_delay_fuse", "instantaneous_trip_breaker",
+                           "inverse_time_breaker"};
+    const char* exc[4] = {"exc_non_time_delay_fuse", "exc_time_delay_fuse",
+                          "exc_instantaneous_trip_breaker", "exc_inverse_time_breaker_le100"};
+    for (std::size_t r = 0; r < t.rows.size(); ++r) {
+        ScpdRow row{motorTypeFrom(t, r), {}, {}, 300};
+        for (int i = 0; i < 4; ++i) {
+            row.pct[i] = t.required(r, t.column(cols[i]));
+            row.excPct[i] = t.required(r, t.column(exc[i]));
+        }
+        row.excItbAbove100 = t.required(r, t.column("exc_inverse_time_breaker_gt100"));
+        out.push_back(row);
+    }
+    return out;
+}
+
+std::array<std::optional<double>, 3> three(const CsvTable& t, std::size_t r, std::size_t first) {
+    return {t.number(r, first), t.number(r, first + 1), t.number(r, first + 2)};
+}
+
+void checkIncreasing(const CsvTable& t, const std::vector<double>& v) {
+    for (std::size_t i = 1; i < v.size(); ++i)
+        if (v[i] <= v[i - 1])
+            t.fail(i, "values must increase from row to row");
+}
+
+Material materialFrom(const CsvTable& t, std::size_t r, const std::string& s) {
+    if (s == "cu")
+        return Material::Cu;
+    if (s == "al")
+        return Material::Al;
+    t.fail(r, "material must be cu or al, found '" + s + "'");
+}
+
+void buildRest(Tables& tb, const CsvTable& t) {
+    const auto& n = t.name;
+    if (n == "code_letters") {
+        for (std::size_t r = 0; r < t.rows.size(); ++r) {
+            if (t.rows[r][0].size() != 1)
+                t.fail(r, "code letter must be one letter");
+            tb.codeLetters.push_back({t.rows[r][0][0], {t.required(r, 1), t.required(r, 2)}});
+        }
+    } else if (n == "ampacity") {
+        for (std::size_t r = 0; r < t.rows.size(); ++r)
+            tb.ampacity.push_back({t.rows[r][0], three(t, r, 1), three(t, r, 4)});
+    } else if (n == "ambient_correction") {
+        for (std::size_t r = 0; r < t.rows.size(); ++r)
+            tb.ambient.push_back({t.required(r, 0), three(t, r, 1)});
+    } else if (n == "conductor_adjustment") {
+        std::vector<double> keys;
+        for (std::size_t r = 0; r < t.rows.size(); ++r) {
+            tb.adjustment.push_back({t.required(r, 0), t.required(r, 1)});
+            keys.push_back(t.required(r, 0));
+        }
+        checkIncreasing(t, keys);
+    } else if (n == "standard_ratings") {
+        for (std::size_t r = 0; r < t.rows.size(); ++r)
+            tb.standardRatings.push_back(t.required(r, 0));
+        checkIncreasing(t, tb.standardRatings);
+    } else if (n == "small_conductor") {
+        for (std::size_t r = 0; r < t.rows.size(); ++r)
+            tb.smallConductor.push_back(
+                {t.rows[r][0], materialFrom(t, r, t.rows[r][1]), t.required(r, 2)});
+    } else if (n == "egc") {
+        for (std::size_t r = 0; r < t.rows.size(); ++r)
+            tb.egc.push_back({t.required(r, 0), t.rows[r][1], t.rows[r][2]});
+    } else if (n == "conductor_properties") {
+        for (std::size_t r = 0; r < t.rows.size(); ++r)
+            tb.conductors.push_back(
+                {t.rows[r][0], t.required(r, 1), t.required(r, 2), t.required(r, 3)});
+    } else if (n == "conductor_impedance") {
+        for (std::size_t r = 0; r < t.rows.size(); ++r)
+            tb.impedance.push_back({t.rows[r][0], t.required(r, 1), t.required(r, 2),
+                                    three(t, r, 3), three(t, r, 6)});
+    } else if (n == "transformer_protection") {
+        for (std::size_t r = 0; r < t.rows.size(); ++r)
+            tb.transformerProtection.push_back(
+                {t.rows[r][0] == "primary_only", t.rows[r][1] == "primary", t.required(r, 2),
+                 t.required(r, 3), t.required(r, 4), t.required(r, 5) != 0});
+    } else if (n == "nema_sizes") {
+        for (std::size_t r = 0; r < t.rows.size(); ++r) {
+            NemaRow row{t.rows[r][0], t.required(r, 1), {}, {}};
+            for (int v : {200, 230, 460, 575})
+                if (auto hp = t.number(r, t.column("hp_3ph_" + std::to_string(v))))
+                    row.hp3ph[v] = *hp;
+            for (int v : {115, 230})
+                if (auto hp = t.number(r, t.column("hp_1ph_" + std::to_string(v))))
+                    row.hp1ph[v] = *hp;
+            tb.nema.push_back(row);
+        }
+    } else if (n == "trip_classes") {
+        for (std::size_t r = 0; r < t.rows.size(); ++r)
+            tb.tripClasses.push_back(
+                {t.rows[r][0], t.required(r, 1), t.required(r, 2), t.required(r, 3)});
+    } else {
+        throw TableError(t.file, 0, "unknown table '" + n + "'");
+    }
+}
+
+} // namespace
+
+std::string_view scpdTypeKey(ScpdType t) {
+    switch (t) {
+    case ScpdType::NonTimeDelayFuse:
+        return "non_time_delay_fuse";
+    case ScpdType::TimeDelayFuse:
+        return "time_delay_fuse";
+    case ScpdType::InstantaneousBreaker:
+        return "instantaneous_trip_breaker";
+    case ScpdType::InverseTimeBreaker:
+        return "inverse_time_breaker";
+    }
+    return "";
+}
+
+std::shared_ptr<const Tables> loadTables(std::span<const tables::EmbeddedFile> files) {
+    auto tb = std::make_shared<Tables>();
+    for (const auto& f : files) {
+        const CsvTable t = tables::parseCsvTable(f.text, std::string(f.name));
+        if (tb->sources.count(t.name))
+            throw TableError(t.file, 0, "table '" + t.name + "' is defined twice");
+        tb->sources[t.name] = t.source;
+        if (t.name == "flc_3ph")
+            tb->flc3 = buildFlc(t);
+        else if (t.name == "flc_1ph")
+            tb->flc1 = buildFlc(t);
+        else if (t.name == "scpd_pct")
+            tb->scpd = buildScpd(t);
+        else
+            buildRest(*tb, t);
+    }
+    for (const char* needed :
+         {"flc_3ph", "flc_1ph", "scpd_pct", "code_letters", "ampacity", "ambient_correction",
+          "conductor_adjustment", "standard_ratings", "small_conductor", "egc",
+          "conductor_properties", "conductor_impedance", "transformer_protection", "nema_sizes",
+          "trip_classes"})
+        if (!tb->sources.count(needed))
+            throw TableError("resources/tables", 0, std::string("table '") + needed + "' is missing");
+    return tb;
+}
+
+std::shared_ptr<const Tables> loadBuiltinTables() { return loadTables(tables::embeddedTableFiles()); }
+
+} // namespace lineward

@@ -1,0 +1,116 @@
+// Typed reference tables (NEC 2023, NEMA ICS 2, IEC 60947-4-1), loaded once at start-up and
+// passed explicitly to the rules and sizing functions.
+#pragma once
+
+#include "tables/csv_table.h"
+#include "tables/embedded.h"
+
+#include <array>
+#include <map>
+#include <memory>
+#include <optional>
+#include <span>
+#include <string>
+#include <vector>
+
+namespace lineward {
+
+enum class Material { Cu, Al };
+/// Short-circuit and ground-fault device types of NEC Table 430.52(C)(1).
+enum class ScpdType { NonTimeDelayFuse, TimeDelayFuse, InstantaneousBreaker, InverseTimeBreaker };
+/// Motor rows of NEC Table 430.52(C)(1).
+enum class MotorType { SinglePhase, SquirrelCage, DesignBPremium, Synchronous, WoundRotor };
+
+std::string_view scpdTypeKey(ScpdType t);
+
+/// Full-load current table: rows by hp, columns by rated motor voltage.
+struct FlcTable {
+    std::vector<double> volts;               ///< column voltages
+    std::vector<double> hp;                  ///< row horsepower
+    std::vector<std::vector<std::optional<double>>> amps; ///< [row][column]
+    std::string source;
+};
+
+struct ScpdRow {
+    MotorType motor;
+    std::array<double, 4> pct;     ///< by ScpdType
+    std::array<double, 4> excPct;  ///< Exception No. 2 / 430.52(C)(3) maxima; ITB: FLC ≤ 100 A
+    double excItbAbove100 = 300;   ///< ITB exception above 100 A FLC
+};
+
+struct AmpacityRow {
+    std::string size;
+    std::array<std::optional<double>, 3> cu, al; ///< 60, 75, 90 °C
+};
+
+struct NemaRow {
+    std::string size;
+    double continuousA = 0;
+    std::map<int, double> hp3ph; ///< by voltage column 200, 230, 460, 575
+    std::map<int, double> hp1ph; ///< by voltage column 115, 230
+};
+
+struct TripClassRow {
+    std::string name;
+    double tpMinS = 0, tpMaxS = 0, trip15xMaxMin = 0;
+};
+
+struct ImpedanceRow {
+    std::string size;
+    double xlPvcAl = 0, xlSteel = 0;
+    std::array<std::optional<double>, 3> cuR, alR; ///< pvc, aluminum, steel conduit
+};
+
+struct TransformerProtectionRow {
+    bool primaryOnly = true, primarySide = true;
+    double currentMinA = 0, currentMaxA = 0, pct = 0;
+    bool nextSize = false;
+};
+
+/// Every reference table. Build with loadTables(); copy-free sharing through shared_ptr.
+struct Tables {
+    FlcTable flc3, flc1;
+    std::vector<ScpdRow> scpd;
+    std::vector<std::pair<char, std::array<double, 2>>> codeLetters; ///< letter -> kVA/hp min, max
+    std::vector<AmpacityRow> ampacity;
+    std::vector<std::pair<double, std::array<std::optional<double>, 3>>> ambient; ///< max °C -> 60/75/90
+    std::vector<std::pair<double, double>> adjustment; ///< conductors up to -> percent
+    std::vector<double> standardRatings;
+    std::vector<std::tuple<std::string, Material, double>> smallConductor;
+    std::vector<std::tuple<double, std::string, std::string>> egc; ///< device max A, cu, al
+    std::vector<std::tuple<std::string, double, double, double>> conductors; ///< size, cmil, cu, al ohm/kft
+    std::vector<ImpedanceRow> impedance;
+    std::vector<TransformerProtectionRow> transformerProtection;
+    std::vector<NemaRow> nema;
+    std::vector<TripClassRow> tripClasses;
+    std::map<std::string, std::string> sources; ///< table name -> source line
+
+    // --- lookups ---
+    /// Table FLC for hp at a rated voltage (column chosen by the code's voltage ranges).
+    std::optional<double> flc(double hp, double ratedVolts, int phases, double* columnV = nullptr) const;
+    const ScpdRow& scpdRow(MotorType m) const;
+    /// kVA/hp (upper bound of the letter's range); nothing for an unknown letter.
+    std::optional<double> codeLetterKvaPerHp(char letter) const;
+    std::optional<double> ampacityAt(const std::string& size, Material m, int columnC) const;
+    /// Ambient correction factor; nothing where the conductor may not be used at that ambient.
+    std::optional<double> ambientFactor(double ambientC, int columnC) const;
+    double adjustmentFactor(int currentCarryingConductors) const;
+    std::optional<double> nextStandardAtOrAbove(double amps) const;
+    std::optional<double> standardAtOrBelow(double amps) const;
+    bool isStandardRating(double amps) const;
+    std::optional<double> smallConductorLimit(const std::string& size, Material m) const;
+    std::optional<std::string> egcFor(double deviceA, Material m) const;
+    std::optional<double> areaCmil(const std::string& size) const;
+    const ImpedanceRow* impedanceRow(const std::string& size) const;
+    const TripClassRow* tripClass(const std::string& name) const;
+    const NemaRow* nemaRow(const std::string& size) const;
+    /// Horsepower a NEMA size may start at a voltage (column by the code's ranges).
+    std::optional<double> nemaHp(const NemaRow& row, double volts, int phases) const;
+};
+
+/// Builds typed tables from table files; throws tables::TableError naming file and line.
+std::shared_ptr<const Tables> loadTables(std::span<const tables::EmbeddedFile> files);
+/// The tables built into the program.
+std::shared_ptr<const Tables> loadBuiltinTables();
+
+} // namespace lineward
