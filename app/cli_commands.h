@@ -17,5 +17,7 @@ using TablesRef = std::shared_ptr<const Tables>;
 
 /// `check FILE... [--json] [--fail-on violation|caution|note]`
 void addCheckCommand(CLI::App& app, const TablesRef& tables, int& exitCode);
+/// `size --hp HP | --kw KW --volts V [...]`
+void addSizeCommand(CLI::App& app, const TablesRef& tables, int& exitCode);
 
 } // namespace lineward::cli

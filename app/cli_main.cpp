@@ -19,6 +19,7 @@ int main(int argc, char** argv) {
         return lineward::cli::kBadInput;
     }
     lineward::cli::addCheckCommand(app, tables, exitCode);
+    lineward::cli::addSizeCommand(app, tables, exitCode);
     try {
         app.parse(argc, argv);
     } catch (const CLI::CallForHelp& e) {

@@ -121,7 +121,7 @@ const std::array<FieldSpec, 10> kCableFields{{
      "blank: the raceway serves as the EGC (NEC 250.118)"},
 }};
 
-const std::array<FieldSpec, 15> kMotorFields{{
+const std::array<FieldSpec, 16> kMotorFields{{
     {"hp", "Rated output", "hp", FT::Number, 0, 5000, true, false, {}, {},
      "give this or kw"},
     {"kw", "Rated output", "kW", FT::Number, 0, 4000, true, false, {}, {}, "give this or hp"},
@@ -131,6 +131,8 @@ const std::array<FieldSpec, 15> kMotorFields{{
     {"sf", "Service factor", "", FT::Number, 1, 1.5, false, false, 1.15},
     {"design", "Design letter", "", FT::Choice, 0, 0, false, false, std::string("B"),
      {"A", "B", "C", "D", "E"}},
+    {"rotor", "Motor type", "", FT::Choice, 0, 0, false, false, std::string("squirrel_cage"),
+     {"squirrel_cage", "wound_rotor", "synchronous"}, "row of NEC Table 430.52(C)(1)"},
     {"code_letter", "Code letter", "", FT::Choice, 0, 0, false, false, {},
      {"A", "B", "C", "D", "E", "F", "G", "H", "J", "K", "L", "M", "N", "P", "R", "S", "T",
       "U", "V"}},

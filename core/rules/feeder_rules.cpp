@@ -52,6 +52,10 @@ void feederConductor(FeederCheck& c, const Part& cable) {
 }
 
 void conductorProtection(FeederCheck& c, const Part& cable) {
+    // Motor feeders follow Article 430 Part V, not 240.4 (240.4(G)); feeder.device.rating
+    // applies to them instead.
+    if (feederLoad(c.ctx, c.motors, c.ctx.flow.loadNode(cable.id)).motors > 0)
+        return;
     auto dev = c.ctx.flow.protectionAbove(c.ctx.flow.lineNode(cable.id));
     if (!dev)
         return;

@@ -31,6 +31,11 @@ double motorHp(const Part& m) {
 MotorType motorTypeOf(const Part& m) {
     if (m.number("phases").value_or(3) == 1)
         return MotorType::SinglePhase;
+    const auto rotor = m.word("rotor").value_or("squirrel_cage");
+    if (rotor == "wound_rotor")
+        return MotorType::WoundRotor;
+    if (rotor == "synchronous")
+        return MotorType::Synchronous;
     if (m.flag("premium_eff") || m.word("design").value_or("B") == "E")
         return MotorType::DesignBPremium;
     return MotorType::SquirrelCage;

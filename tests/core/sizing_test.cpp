@@ -1,0 +1,152 @@
+// Motor branch sizing: worked examples whose method and numbers come from NEC 2023 Article 430
+// and its tables, and the auto-size proposal.
+#include "sizing/auto_size.h"
+#include "test_support.h"
+
+#include <gtest/gtest.h>
+
+using namespace lineward;
+using namespace lineward::test;
+
+namespace {
+
+Part motor(double hp, double volts, std::initializer_list<std::pair<const char*, FieldValue>> more = {}) {
+    Part m = Part::make(PartKind::Motor, PartId(1), "M");
+    EXPECT_FALSE(m.set("hp", hp));
+    EXPECT_FALSE(m.set("volts", volts));
+    for (auto& [k, v] : more)
+        EXPECT_FALSE(m.set(k, v)) << k;
+    return m;
+}
+
+BucketProposal propose(const Part& m, ScpdType device, std::optional<int> termination = 75) {
+    SizeOptions o;
+    o.device = device;
+    o.terminationC = termination;
+    std::string why;
+    auto p = proposeBucket(m, o, testTables(), why);
+    EXPECT_TRUE(p.has_value()) << why;
+    return p.value_or(BucketProposal{});
+}
+
+} // namespace
+
+// NEC 2023 Annex D, Example D8 (from memory): a 25 hp, 460 V, Design B, SF 1.15 squirrel-cage
+// motor, nameplate 32 A, on non-time-delay fuses, 75 °C terminations.
+TEST(WorkedExample, AnnexD8TwentyFiveHorsepower) {
+    const Part m = motor(25, 460, {{"fla", 32.0}, {"sf", 1.15}});
+    const auto p = propose(m, ScpdType::NonTimeDelayFuse);
+    EXPECT_DOUBLE_EQ(p.flc.amps, 34);                     // Table 430.250
+    EXPECT_DOUBLE_EQ(p.conductorMinA, 42.5);              // 430.22: 1.25 × 34
+    EXPECT_EQ(p.conductorSize, "8 AWG");                  // Table 310.16, 75 °C: 50 A
+    EXPECT_DOUBLE_EQ(*p.overloadMaxA, 40);                // 430.32(A)(1): 1.25 × 32
+    EXPECT_DOUBLE_EQ(p.scpdMaxA.at(ScpdType::NonTimeDelayFuse), 110);   // 300 % = 102 → 110
+    EXPECT_DOUBLE_EQ(p.scpdMaxA.at(ScpdType::InverseTimeBreaker), 90);  // 250 % = 85 → 90
+    EXPECT_DOUBLE_EQ(p.scpdMaxA.at(ScpdType::TimeDelayFuse), 60);       // 175 % = 59.5 → 60
+    EXPECT_DOUBLE_EQ(p.scpdMaxA.at(ScpdType::InstantaneousBreaker), 272); // 800 % setting
+    EXPECT_DOUBLE_EQ(p.disconnectMinA, 39.1);             // 430.110(A): 1.15 × 34
+    EXPECT_EQ(p.nemaSize, "2");                           // NEMA ICS 2: size 2 = 25 hp at 460 V
+    // Table 250.122 gives 6 AWG for a 110 A device, but 250.122(A) never asks for more than
+    // the 8 AWG circuit conductors.
+    EXPECT_EQ(p.egcSize, "8 AWG");
+}
+
+// Same example, the two 30 hp wound-rotor motors: FLC 40 A, nameplate 38 A, 40 °C rise.
+TEST(WorkedExample, AnnexD8WoundRotor) {
+    const Part m = motor(30, 460, {{"fla", 38.0}, {"sf", 1.0}, {"temp_rise_c", 40.0},
+                                   {"rotor", std::string("wound_rotor")}});
+    const auto p = propose(m, ScpdType::NonTimeDelayFuse);
+    EXPECT_DOUBLE_EQ(p.flc.amps, 40);
+    EXPECT_DOUBLE_EQ(p.conductorMinA, 50);
+    EXPECT_EQ(p.conductorSize, "8 AWG");
+    EXPECT_DOUBLE_EQ(*p.overloadMaxA, 47.5);              // 125 %: marked rise ≤ 40 °C
+    EXPECT_DOUBLE_EQ(p.scpdMaxA.at(ScpdType::NonTimeDelayFuse), 60); // wound rotor 150 % = 60
+}
+
+// 10 hp at 208 V: the 208 V column of Table 430.250, inverse-time breaker, 60 °C terminations
+// (110.14(C)(1)(a), circuit under 100 A).
+TEST(WorkedExample, TenHorsepower208V) {
+    const Part m = motor(10, 208);
+    const auto p = propose(m, ScpdType::InverseTimeBreaker, std::nullopt);
+    EXPECT_DOUBLE_EQ(p.flc.amps, 30.8);
+    EXPECT_DOUBLE_EQ(p.conductorMinA, 38.5);
+    EXPECT_EQ(p.terminationC, 60);
+    EXPECT_EQ(p.conductorSize, "8 AWG");                  // 60 °C: 10 AWG 30 A, 8 AWG 40 A
+    EXPECT_DOUBLE_EQ(p.deviceRatingA, 80);                // 250 % = 77 → 80
+    EXPECT_DOUBLE_EQ(p.scpdMaxA.at(ScpdType::TimeDelayFuse), 60); // 175 % = 53.9 → 60
+    EXPECT_EQ(p.nemaSize, "2");                           // size 1 = 7.5 hp at 200 V
+    EXPECT_EQ(p.egcSize, "8 AWG");                        // 80 A → 8 AWG
+}
+
+// 100 hp at 460 V above 100 A: 75 °C terminations by default (110.14(C)(1)(b)).
+TEST(WorkedExample, HundredHorsepower460V) {
+    const Part m = motor(100, 460, {{"fla", 120.0}, {"sf", 1.15}});
+    const auto p = propose(m, ScpdType::InverseTimeBreaker, std::nullopt);
+    EXPECT_DOUBLE_EQ(p.flc.amps, 124);
+    EXPECT_DOUBLE_EQ(p.conductorMinA, 155);
+    EXPECT_EQ(p.terminationC, 75);
+    EXPECT_EQ(p.conductorSize, "2/0 AWG");                // 1/0 = 150 A < 155; 2/0 = 175 A
+    EXPECT_DOUBLE_EQ(p.deviceRatingA, 350);               // 250 % = 310 → 350
+    EXPECT_DOUBLE_EQ(p.scpdMaxA.at(ScpdType::NonTimeDelayFuse), 400); // 300 % = 372 → 400
+    EXPECT_DOUBLE_EQ(*p.overloadMaxA, 150);
+    EXPECT_EQ(p.nemaSize, "4");
+    EXPECT_EQ(p.egcSize, "3 AWG");                        // 350 A → 3 AWG
+}
+
+// 2 hp single-phase 230 V: Table 430.248 gives 12 A.
+TEST(WorkedExample, TwoHorsepowerSinglePhase) {
+    const Part m = motor(2, 230, {{"phases", 1.0}});
+    const auto p = propose(m, ScpdType::TimeDelayFuse, std::nullopt);
+    EXPECT_DOUBLE_EQ(p.flc.amps, 12);
+    EXPECT_EQ(p.conductorSize, "14 AWG");                 // 15 A needed, 60 °C 14 AWG = 15 A
+    EXPECT_DOUBLE_EQ(p.deviceRatingA, 25);                // 175 % = 21 → 25
+    EXPECT_EQ(p.nemaSize, "0");                           // size 00 = 1 hp at 230 V single-phase
+}
+
+TEST(Sizing, KilowattMotorUsesNextHorsepowerRow) {
+    Part m = Part::make(PartKind::Motor, PartId(1), "M");
+    ASSERT_FALSE(m.set("kw", 15.0)); // 20.1 hp → 25 hp row
+    ASSERT_FALSE(m.set("volts", 460.0));
+    auto flc = motorFlc(m, testTables());
+    ASSERT_TRUE(flc);
+    EXPECT_DOUBLE_EQ(flc->hpUsed, 25);
+    EXPECT_DOUBLE_EQ(flc->amps, 34);
+}
+
+TEST(Sizing, AmpacityAppliesAmbientAdjustmentAndTerminationLimit) {
+    // Example of domain.md §7 (invented numbers): 10 AWG Cu, 90 °C insulation, 75 °C
+    // terminations, 40 °C ambient, 3 conductors: min(40 × 0.91, 35) = 35 A. With 6 conductors:
+    // 40 × 0.91 × 0.8 = 29.1 A.
+    CableConditions c{Material::Cu, 90, 75, 40, 3, 1};
+    EXPECT_NEAR(cableAmpacity("10 AWG", c, testTables())->amps, 35.0, 1e-9);
+    c.conductors = 6;
+    EXPECT_NEAR(cableAmpacity("10 AWG", c, testTables())->amps, 29.12, 1e-9);
+    c.sets = 2;
+    EXPECT_NEAR(cableAmpacity("10 AWG", c, testTables())->amps, 58.24, 1e-9);
+}
+
+TEST(Sizing, LockedRotorCurrentFromCodeLetter) {
+    // NEC 2023 Table 430.7(B), letter G upper bound 6.29 kVA/hp: 25 hp at 460 V →
+    // 6.29 × 25 × 1000 / (√3 × 460) = 197.4 A.
+    const Part m = motor(25, 460, {{"code_letter", std::string("G")}});
+    EXPECT_NEAR(*lockedRotorA(m, testTables(), nullptr), 197.4, 0.1);
+    const Part given = motor(25, 460, {{"lra", 210.0}});
+    EXPECT_DOUBLE_EQ(*lockedRotorA(given, testTables(), nullptr), 210);
+}
+
+TEST(Sizing, ProportionalEgcIncrease) {
+    // NEC 2023 250.122(B) with Chapter 9 Table 8 areas: phase 6 AWG (26,240 cmil) instead of
+    // the minimum 8 AWG (16,510): ratio 1.589 × 10 AWG (10,380 cmil) = 16,497 cmil → 8 AWG.
+    auto e = egcSize(60, Material::Cu, "6 AWG", "8 AWG", testTables());
+    ASSERT_TRUE(e);
+    EXPECT_EQ(e->size, "8 AWG");
+    // Phase 4 AWG (41,740): ratio 2.528 × 10,380 = 26,243 cmil, just above 6 AWG → 4 AWG.
+    EXPECT_EQ(egcSize(60, Material::Cu, "4 AWG", "8 AWG", testTables())->size, "4 AWG");
+}
+
+TEST(Sizing, InstantaneousProposalClearsInrushWithinCode) {
+    const Part m = motor(25, 460, {{"code_letter", std::string("G")}});
+    const auto p = propose(m, ScpdType::InstantaneousBreaker);
+    // 197.4 A × 1.5 / 0.8 = 370.1 → 375 A; above 800 % (272 A), within 1300 % (442 A).
+    EXPECT_DOUBLE_EQ(p.deviceRatingA, 375);
+}
