@@ -13,18 +13,28 @@ MotorFactMap motorFacts(const RuleContext& ctx, const std::vector<MotorBranch>& 
     return m;
 }
 
+namespace {
+double voltageRatio(const RuleContext& ctx, PartId load, NodeIndex from) {
+    const double there = ctx.net.graph()[ctx.net.nodeOf(load, 0)].nominalV;
+    const double here = ctx.net.graph()[from].nominalV;
+    return here > 0 && there > 0 ? there / here : 1.0;
+}
+} // namespace
+
 FeederLoad feederLoad(const RuleContext& ctx, const MotorFactMap& motors, NodeIndex from) {
     FeederLoad l;
     std::vector<std::pair<double, PartId>> flcs;
     for (auto id : ctx.flow.loadsBelow(from)) {
         const Part& p = *ctx.drawing.part(id);
+        // Loads beyond a transformer count at this node's voltage (current × V_there / V_here).
+        const double ratio = voltageRatio(ctx, id, from);
         if (p.kind == PartKind::Motor) {
             auto it = motors.find(id);
             if (it == motors.end())
                 continue;
-            flcs.push_back({it->second.flc, id});
+            flcs.push_back({it->second.flc * ratio, id});
         } else {
-            (p.flag("continuous") ? l.continuousA : l.nonContinuousA) += loadAmps(p);
+            (p.flag("continuous") ? l.continuousA : l.nonContinuousA) += loadAmps(p) * ratio;
             ++l.loads;
         }
     }
@@ -61,14 +71,15 @@ FeederDeviceLimit feederDeviceLimit(const RuleContext& ctx, const MotorFactMap& 
     std::string bestTag;
     for (auto id : ctx.flow.loadsBelow(from)) {
         const Part& p = *ctx.drawing.part(id);
+        const double ratio = voltageRatio(ctx, id, from);
         if (p.kind != PartKind::Motor) {
-            other += (p.flag("continuous") ? 1.25 : 1.0) * loadAmps(p);
+            other += (p.flag("continuous") ? 1.25 : 1.0) * loadAmps(p) * ratio;
             continue;
         }
         auto it = motors.find(id);
         if (it == motors.end())
             continue;
-        const double flc = it->second.flc;
+        const double flc = it->second.flc * ratio;
         sumFlc += flc;
         double rating = flc;
         if (const Part* d = it->second.scpd) {
@@ -76,7 +87,7 @@ FeederDeviceLimit feederDeviceLimit(const RuleContext& ctx, const MotorFactMap& 
             if (type == ScpdType::InstantaneousBreaker)
                 rating = scpdLimit(feederType, motorTypeOf(p), flc, ctx.tables).rawA;
             else
-                rating = d->number(d->kind == PartKind::Breaker ? "trip_a" : "amps").value_or(flc);
+                rating = d->number(d->kind == PartKind::Breaker ? "trip_a" : "amps").value_or(flc) * ratio;
         }
         // The largest-rated branch device counts in full (ties: the one adding most).
         if (rating > bestRating + 1e-9 || (rating > bestRating - 1e-9 && rating - flc > bestExtra)) {
