@@ -19,5 +19,7 @@ using TablesRef = std::shared_ptr<const Tables>;
 void addCheckCommand(CLI::App& app, const TablesRef& tables, int& exitCode);
 /// `size --hp HP | --kw KW --volts V [...]`
 void addSizeCommand(CLI::App& app, const TablesRef& tables, int& exitCode);
+/// `study FILE [--json]`
+void addStudyCommand(CLI::App& app, const TablesRef& tables, int& exitCode);
 
 } // namespace lineward::cli

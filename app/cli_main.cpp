@@ -20,6 +20,7 @@ int main(int argc, char** argv) {
     }
     lineward::cli::addCheckCommand(app, tables, exitCode);
     lineward::cli::addSizeCommand(app, tables, exitCode);
+    lineward::cli::addStudyCommand(app, tables, exitCode);
     try {
         app.parse(argc, argv);
     } catch (const CLI::CallForHelp& e) {

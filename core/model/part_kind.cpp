@@ -16,6 +16,12 @@ constexpr std::array<std::string_view, 1> kBar{"bar"};
 constexpr std::array<std::string_view, 2> kLineLoad{"line", "load"};
 constexpr std::array<std::string_view, 2> kPriSec{"pri", "sec"};
 
+const FieldSpec kLetThrough{"let_through_a2s", "Let-through I²t at the available fault", "A²s",
+                           FT::Number, 0, 1e10, true, false, {}, {},
+                           "from the manufacturer's data; judges cable withstand"};
+const FieldSpec kClearS{"clear_s", "Clearing time at high fault current", "s", FT::Number, 0, 10,
+                        true, false, {}, {}, "stated by the manufacturer"};
+
 const FieldSpec kOpen{"open", "Open", "", FT::Flag, 0, 0, false, false, false, {},
                       "true where the device is open (an open tie, a spare)"};
 
@@ -45,7 +51,7 @@ const std::array<FieldSpec, 5> kBusFields{{
     {"phases", "Phases", "", FT::Integer, 1, 3, false, false, 3.0},
 }};
 
-const std::array<FieldSpec, 10> kBreakerFields{{
+const std::array<FieldSpec, 12> kBreakerFields{{
     {"trip_type", "Trip unit", "", FT::Choice, 0, 0, false, true,
      std::string("thermal_magnetic"), {"thermal_magnetic", "electronic"}},
     {"frame_a", "Frame", "A", FT::Number, 0, 6000, true, false},
@@ -57,19 +63,23 @@ const std::array<FieldSpec, 10> kBreakerFields{{
     {"lt_delay_s", "Long-time delay at 6x", "s", FT::Number, 0, 60, true, false},
     {"st_pickup_x", "Short-time pickup", "x trip", FT::Number, 1, 12, false, false},
     {"st_delay_s", "Short-time delay", "s", FT::Number, 0, 1, false, false},
+    kLetThrough,
+    kClearS,
     kOpen,
 }};
 
-const std::array<FieldSpec, 6> kInstBreakerFields{{
+const std::array<FieldSpec, 8> kInstBreakerFields{{
     {"amps", "Continuous rating", "A", FT::Number, 0, 1200, true, true},
     {"pickup_a", "Pickup setting", "A", FT::Number, 0, 20000, true, true},
     {"pickup_min_a", "Lowest adjustable pickup", "A", FT::Number, 0, 20000, true, false},
     {"pickup_max_a", "Highest adjustable pickup", "A", FT::Number, 0, 20000, true, false},
     {"interrupting_ka", "Interrupting rating", "kA", FT::Number, 0, 300, true, true},
+    kLetThrough,
+    kClearS,
     kOpen,
 }};
 
-const std::array<FieldSpec, 4> kFuseFields{{
+const std::array<FieldSpec, 6> kFuseFields{{
     {"fuse_type", "Fuse type", "", FT::Choice, 0, 0, false, true, std::string("time_delay"),
      {"time_delay", "fast"}},
     {"fuse_class", "Fuse class", "", FT::Choice, 0, 0, false, false, {},
@@ -77,6 +87,8 @@ const std::array<FieldSpec, 4> kFuseFields{{
      "UL 248 class or IEC 60269 utilisation category"},
     {"amps", "Rating", "A", FT::Number, 0, 6000, true, true},
     {"interrupting_ka", "Interrupting rating", "kA", FT::Number, 0, 300, true, true},
+    kLetThrough,
+    kClearS,
 }};
 
 const std::array<FieldSpec, 4> kDisconnectFields{{

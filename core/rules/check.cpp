@@ -42,11 +42,15 @@ CheckReport checkDrawing(const Drawing& drawing, const Tables& tables) {
     CheckReport report;
     Network net(drawing);
     Flow flow(net);
-    const RuleContext ctx{drawing, net, flow, tables};
+    const StudyResults study = runStudies(net, flow, tables, drawing.settings);
+    const RuleContext ctx{drawing, net, flow, tables, study};
     checkDrawingRules(drawing, report.findings);
     checkTopology(net, report.findings);
     checkMotorBranches(ctx, report.findings);
     checkFeeders(ctx, report.findings);
+    checkDuty(ctx, report.findings);
+    checkVoltage(ctx, report.findings);
+    report.findings.insert(report.findings.end(), study.notes.begin(), study.notes.end());
     markAccepted(drawing, report.findings);
     std::stable_sort(report.findings.begin(), report.findings.end(),
                      [](const Finding& a, const Finding& b) {

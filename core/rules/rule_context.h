@@ -3,6 +3,7 @@
 
 #include "model/drawing.h"
 #include "rules/finding.h"
+#include "studies/study.h"
 #include "tables/tables.h"
 #include "topology/flow.h"
 #include "topology/network.h"
@@ -18,6 +19,7 @@ struct RuleContext {
     const Network& net;
     const Flow& flow;
     const Tables& tables;
+    const StudyResults& study;
     const Settings& settings() const { return drawing.settings; }
     std::string tag(PartId id) const;
 };
@@ -39,5 +41,7 @@ double loadAmps(const Part& load);
 
 void checkMotorBranches(const RuleContext& ctx, std::vector<Finding>& out);
 void checkFeeders(const RuleContext& ctx, std::vector<Finding>& out);
+void checkDuty(const RuleContext& ctx, std::vector<Finding>& out);
+void checkVoltage(const RuleContext& ctx, std::vector<Finding>& out);
 
 } // namespace lineward

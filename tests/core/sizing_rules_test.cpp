@@ -237,7 +237,8 @@ TEST(FeederRules, AnnexD8ThreeMotorFeeder) {
     const Drawing ok = annexD8Feeder(175, "1/0 AWG"); // 1/0: 150 A ≥ 124 A
     auto r = checkDrawing(ok, testTables());
     for (const auto& f : r.findings)
-        ADD_FAILURE() << f.ruleId << ": " << f.message;
+        if (f.ruleId != "duty.withstand.assumed") // no let-through data entered in this example
+            ADD_FAILURE() << f.ruleId << ": " << f.message;
 
     auto cond = findings(annexD8Feeder(175, "1 AWG"), "feeder.conductor.ampacity"); // 130 ≥ 124: ok
     EXPECT_TRUE(cond.empty());
@@ -367,7 +368,8 @@ TEST_P(ProposalChecksClean, NoBranchFindings) {
     b.wire(c, 1, m.id, 0);
     b.bucket("B1", {dev, k, ol});
     for (const auto& f : checkDrawing(b.drawing(), testTables()).findings)
-        ADD_FAILURE() << f.ruleId << ": " << f.message;
+        if (f.ruleId != "duty.withstand.assumed") // sizing does not choose let-through data
+            ADD_FAILURE() << f.ruleId << ": " << f.message;
 }
 INSTANTIATE_TEST_SUITE_P(
     SeveralMotors, ProposalChecksClean,

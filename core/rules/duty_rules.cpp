@@ -1,0 +1,184 @@
+// The duty.* rules: interrupting ratings (110.9), SCCR and bracing (110.10, 430.8, 409.22),
+// and conductor short-circuit withstand (ICEA P-32-382 / IEC adiabatic).
+#include "rules/rule_catalog.h"
+#include "rules/rule_context.h"
+#include "sizing/motor_sizing.h"
+#include "model/conductor.h"
+
+#include <cmath>
+
+namespace lineward {
+
+namespace {
+
+void interrupting(const RuleContext& ctx, const Part& d, std::vector<Finding>& out) {
+    const auto* f = ctx.study.faultAtNode(ctx.flow.lineNode(d.id));
+    const auto rating = d.number("interrupting_ka");
+    if (!f || !rating || *rating >= f->ikKa - 1e-9)
+        return;
+    auto x = makeFinding("duty.interrupting", {d.id}, d.tag + " interrupting rating " + fmt(*rating) +
+                                                          " kA is below the " + fmt(f->ikKa, 2) +
+                                                          " kA available at its line side");
+    x.computed = f->ikKa;
+    x.limit = *rating;
+    x.unit = "kA";
+    x.trace = {{"available fault current", fmt(f->ikKa, 2) + " kA symmetrical, X/R " + fmt(f->xOverR, 1)},
+               {"interrupting rating", fmt(*rating) + " kA"}};
+    const double next = std::ceil(f->ikKa / 5.0) * 5.0 < 10 ? 10 : std::ceil(f->ikKa / 5.0) * 5.0;
+    x.fix = Fix{"use a device rated " + fmt(next, 0) + " kA or more (or series-rated, listed)",
+                {{d.id, "interrupting_ka", next}}};
+    out.push_back(std::move(x));
+}
+
+void bracing(const RuleContext& ctx, const Part& bus, std::vector<Finding>& out) {
+    const auto* f = ctx.study.faultAtNode(ctx.net.nodeOf(bus.id, 0));
+    const auto rating = bus.number("bracing_ka");
+    if (!f || !rating || *rating >= f->ikKa - 1e-9)
+        return;
+    auto x = makeFinding("duty.bracing", {bus.id}, bus.tag + " bus bracing " + fmt(*rating) +
+                                                       " kA is below the " + fmt(f->ikKa, 2) + " kA available");
+    x.computed = f->ikKa;
+    x.limit = *rating;
+    x.unit = "kA";
+    x.trace = {{"available fault current", fmt(f->ikKa, 2) + " kA symmetrical, peak " + fmt(f->peakKa, 2) + " kA"}};
+    const double next = std::ceil(f->ikKa / 5.0) * 5.0;
+    x.fix = Fix{"brace the bus for " + fmt(next, 0) + " kA", {{bus.id, "bracing_ka", next}}};
+    out.push_back(std::move(x));
+}
+
+void sccr(const RuleContext& ctx, const Bucket& b, std::vector<Finding>& out) {
+    if (!b.sccrKa || b.parts.empty())
+        return;
+    const FaultAtBus* worst = nullptr;
+    for (auto id : b.parts) {
+        const Part* p = ctx.drawing.part(id);
+        const NodeIndex n = isTwoTerminal(p->kind) ? ctx.flow.lineNode(id) : ctx.net.nodeOf(id, 0);
+        const auto* f = ctx.study.faultAtNode(n);
+        if (f && (!worst || f->ikKa > worst->ikKa))
+            worst = f;
+    }
+    if (!worst || *b.sccrKa >= worst->ikKa - 1e-9)
+        return;
+    auto x = makeFinding("duty.sccr", {b.parts.front()}, "bucket " + b.tag + " SCCR " + fmt(*b.sccrKa) +
+                                                             " kA is below the " + fmt(worst->ikKa, 2) +
+                                                             " kA available");
+    x.computed = worst->ikKa;
+    x.limit = *b.sccrKa;
+    x.unit = "kA";
+    x.trace = {{"bucket", b.tag}, {"available fault current", fmt(worst->ikKa, 2) + " kA"}};
+    x.fix = Fix{"use a combination listed for " + fmt(std::ceil(worst->ikKa / 5) * 5, 0) + " kA", {}};
+    out.push_back(std::move(x));
+}
+
+// Clearing time of a device at a current, from its ratings, until the time-current curves
+// replace it: instantaneous regions clear in 1.5 cycles (0.025 s) and current-limiting fuses
+// within a half cycle (0.008 s) above 20 × rating (common practice). Nothing where the
+// current falls in an inverse-time region.
+std::optional<double> clearingTime(const Part& d, double amps) {
+    if (d.kind == PartKind::InstBreaker)
+        return amps >= d.number("pickup_a").value_or(1e12) ? std::optional(0.025) : std::nullopt;
+    if (d.kind == PartKind::Fuse)
+        return amps >= 20 * d.number("amps").value_or(1e12) ? std::optional(0.008) : std::nullopt;
+    const double trip = d.number("trip_a").value_or(0);
+    if (auto inst = d.number("inst_x"); inst && amps >= *inst * trip)
+        return 0.025;
+    if (auto st = d.number("st_pickup_x"); st && amps >= *st * trip)
+        return d.number("st_delay_s").value_or(0.1) + 0.05;
+    return std::nullopt;
+}
+
+// What the device lets through at the fault: the stated I²t, else the stated clearing time,
+// else the assumed clearing time; `stated` tells which.
+std::optional<double> letThrough(const Part& d, double amps, bool& stated, std::string& how) {
+    if (auto i2t = d.number("let_through_a2s")) {
+        stated = true;
+        how = fmt(*i2t, 0) + " A²s (stated let-through)";
+        return *i2t;
+    }
+    auto t = d.number("clear_s");
+    stated = t.has_value();
+    if (!t)
+        t = clearingTime(d, amps);
+    if (!t)
+        return std::nullopt;
+    how = fmt(amps, 0) + "² A² × " + fmt(*t, 3) + " s (" + (stated ? "stated" : "assumed, common practice") +
+          " clearing time)";
+    return amps * amps * *t;
+}
+
+// I²t the cable takes: ICEA P-32-382 for AWG/kcmil, IEC adiabatic k²S² for mm² (per set).
+std::optional<double> cableI2t(const RuleContext& ctx, const Part& cable, std::string& how) {
+    const auto size = cable.word("size").value_or("");
+    const double ins = cable.number("insulation_c").value_or(90);
+    const bool al = cable.word("material").value_or("cu") == "al";
+    if (size.ends_with(" mm2")) {
+        const double k = ins >= 90 ? (al ? 94 : 143) : (al ? 76 : 115); // IEC 60364-4-43 Table 43A (from memory)
+        const double s = std::stod(size);
+        how = "k²S² = (" + fmt(k, 0) + " × " + fmt(s, 1) + ")²";
+        return std::pow(k * s, 2);
+    }
+    auto area = ctx.tables.areaCmil(size);
+    if (!area)
+        return std::nullopt;
+    const double t2 = ins >= 90 ? 250 : 150; // thermoset / thermoplastic limits (ICEA, from memory)
+    const double k = al ? 0.0125 : 0.0297, base = al ? 228 : 234;
+    how = fmt(k, 4) + " × log10((" + fmt(t2, 0) + " + " + fmt(base, 0) + ") / (" + fmt(ins, 0) + " + " +
+          fmt(base, 0) + ")) × " + fmt(*area, 0) + "² cmil²";
+    return k * std::log10((t2 + base) / (ins + base)) * *area * *area;
+}
+
+void withstand(const RuleContext& ctx, const Part& cable, std::vector<Finding>& out) {
+    const auto* f = ctx.study.faultAtNode(ctx.flow.lineNode(cable.id));
+    auto devId = ctx.flow.protectionAbove(ctx.flow.lineNode(cable.id));
+    if (!f || !devId)
+        return;
+    const Part& dev = *ctx.drawing.part(*devId);
+    const double sets = cable.number("sets").value_or(1);
+    const double perSet = f->ikKa * 1000.0 / sets;
+    bool stated = false;
+    std::string devHow, cableHow;
+    auto let = letThrough(dev, perSet, stated, devHow);
+    auto limit = cableI2t(ctx, cable, cableHow);
+    if (!let || !limit || *let <= *limit)
+        return;
+    auto x = makeFinding(stated ? "duty.withstand" : "duty.withstand.assumed", {cable.id, dev.id},
+                         cable.tag + " takes " + fmt(*limit, 0) + " A²s; " + dev.tag + " lets through " +
+                             fmt(*let, 0) + " A²s at " + fmt(f->ikKa, 2) + " kA" +
+                             (stated ? "" : " (assumed; enter its let-through I²t)"));
+    x.computed = *let;
+    x.limit = *limit;
+    x.unit = "A²s";
+    x.trace = {{"fault current at the cable", fmt(f->ikKa, 2) + " kA" + (sets > 1 ? ", per set " + fmt(perSet, 0) + " A" : "")},
+               {"cable withstand", cableHow + " = " + fmt(*limit, 0) + " A²s"},
+               {"let-through of " + dev.tag, devHow + " = " + fmt(*let, 0) + " A²s"}};
+    auto cur = ctx.tables.areaCmil(cable.word("size").value_or(""));
+    for (auto s2 : awgSizes()) {
+        auto a = ctx.tables.areaCmil(std::string(s2));
+        if (cur && a && *a > *cur && *a >= *cur * std::sqrt(*let / *limit)) {
+            x.fix = Fix{"use " + std::string(s2), {{cable.id, "size", std::string(s2)}}};
+            break;
+        }
+    }
+    if (!stated && x.fix)
+        x.fix->description += ", or enter " + dev.tag + "'s let-through I²t";
+    out.push_back(std::move(x));
+}
+
+} // namespace
+
+void checkDuty(const RuleContext& ctx, std::vector<Finding>& out) {
+    for (const auto& p : ctx.drawing.parts()) {
+        if (!ctx.net.partEnergized(p.id))
+            continue;
+        if (kindInfo(p.kind).protective)
+            interrupting(ctx, p, out);
+        else if (p.kind == PartKind::Bus)
+            bracing(ctx, p, out);
+        else if (p.kind == PartKind::Cable)
+            withstand(ctx, p, out);
+    }
+    for (const auto& b : ctx.drawing.buckets())
+        sccr(ctx, b, out);
+}
+
+} // namespace lineward

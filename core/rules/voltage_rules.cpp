@@ -1,0 +1,103 @@
+// The voltage.* rules: steady-state drop against the drawing's limits, and motor starting.
+#include "rules/rule_catalog.h"
+#include "rules/rule_context.h"
+#include "sizing/motor_sizing.h"
+
+#include <cmath>
+
+namespace lineward {
+
+namespace {
+
+double vAt(const RuleContext& ctx, NodeIndex n) {
+    const int b = ctx.study.busOf(n);
+    return b >= 0 && static_cast<std::size_t>(b) < ctx.study.voltage.size()
+               ? std::abs(ctx.study.voltage[static_cast<std::size_t>(b)])
+               : 0.0;
+}
+
+void drops(const RuleContext& ctx, const Part& load, std::vector<Finding>& out) {
+    const NodeIndex at = ctx.net.nodeOf(load.id, 0);
+    const int bus = ctx.study.busOf(at);
+    if (bus < 0 || ctx.study.voltage.empty())
+        return;
+    auto chain = ctx.net.branchChain(load.id);
+    const NodeIndex head = chain.empty() ? at : ctx.flow.lineNode(chain.back());
+    const double vLoad = vAt(ctx, at), vHead = vAt(ctx, head);
+    const double branchPct = (vHead - vLoad) * 100.0;
+    const double totalPct = (ctx.study.originVoltagePu[static_cast<std::size_t>(bus)] - vLoad) * 100.0;
+    const auto& s = ctx.settings();
+    if (branchPct > s.vdropBranchPct + 1e-9) {
+        auto f = makeFinding("voltage.drop.branch", {load.id}, load.tag + " branch drop " + fmt(branchPct, 2) +
+                                                                   " % exceeds " + fmt(s.vdropBranchPct, 1) + " %");
+        f.computed = branchPct;
+        f.limit = s.vdropBranchPct;
+        f.unit = "%";
+        f.trace = {{"voltage at the branch's bus", fmt(vHead * 100, 2) + " % of nominal"},
+                   {"voltage at the load", fmt(vLoad * 100, 2) + " % of nominal"},
+                   {"method", "load flow on the nodal admittance matrix, loads at rated current"}};
+        for (auto id : chain)
+            if (ctx.drawing.part(id)->kind == PartKind::Cable)
+                f.fix = Fix{"use a larger cable for " + ctx.tag(id) + " or shorten the run", {}};
+        out.push_back(std::move(f));
+    }
+    if (totalPct > s.vdropTotalPct + 1e-9) {
+        auto f = makeFinding("voltage.drop.total", {load.id}, load.tag + " total drop " + fmt(totalPct, 2) +
+                                                                  " % exceeds " + fmt(s.vdropTotalPct, 1) + " %");
+        f.computed = totalPct;
+        f.limit = s.vdropTotalPct;
+        f.unit = "%";
+        f.trace = {{"voltage at the supplying transformer or source",
+                    fmt(ctx.study.originVoltagePu[static_cast<std::size_t>(bus)] * 100, 2) + " %"},
+                   {"voltage at the load", fmt(vLoad * 100, 2) + " %"}};
+        f.fix = Fix{"use larger feeder or branch conductors", {}};
+        out.push_back(std::move(f));
+    }
+}
+
+void starting(const RuleContext& ctx, const Part& motor, const MotorStart& ms, std::vector<Finding>& out) {
+    const auto& s = ctx.settings();
+    std::vector<TraceStep> trace{
+        {"locked-rotor current", fmt(ms.lockedRotorA, 0) + " A" + (ms.lraAssumed ? " (6 × FLC assumed, common practice)" : "")},
+        {"starting power factor", fmt(s.startPf, 2) + " (setting)"},
+        {"method", "superposition on the load-flow state: the motor at locked-rotor impedance, others running"}};
+    if (ms.busDipPct > s.startDipPct + 1e-9) {
+        auto f = makeFinding("voltage.start.dip", {motor.id}, "starting " + motor.tag + " dips its bus " +
+                                                                  fmt(ms.busDipPct, 1) + " % (limit " +
+                                                                  fmt(s.startDipPct, 0) + " %)");
+        f.computed = ms.busDipPct;
+        f.limit = s.startDipPct;
+        f.unit = "%";
+        f.trace = trace;
+        f.fix = Fix{"reduce the starting current (reduced-voltage starter or drive) or stiffen the supply", {}};
+        out.push_back(std::move(f));
+    }
+    if (ms.terminalPctOfRated < s.startTerminalPct - 1e-9) {
+        auto f = makeFinding("voltage.start.terminal", {motor.id},
+                             motor.tag + " sees " + fmt(ms.terminalPctOfRated, 1) + " % of its rated voltage while "
+                                                                                     "starting (limit " +
+                                 fmt(s.startTerminalPct, 0) + " %)");
+        f.computed = ms.terminalPctOfRated;
+        f.limit = s.startTerminalPct;
+        f.unit = "%";
+        f.trace = trace;
+        f.fix = Fix{"use a larger branch cable or a stiffer supply", {}};
+        out.push_back(std::move(f));
+    }
+}
+
+} // namespace
+
+void checkVoltage(const RuleContext& ctx, std::vector<Finding>& out) {
+    if (!ctx.study.loadFlowConverged)
+        return;
+    for (const auto& p : ctx.drawing.parts()) {
+        if (p.kind != PartKind::Motor && p.kind != PartKind::Load)
+            continue;
+        drops(ctx, p, out);
+        if (auto it = ctx.study.starts.find(p.id); it != ctx.study.starts.end())
+            starting(ctx, p, it->second, out);
+    }
+}
+
+} // namespace lineward

@@ -1,0 +1,136 @@
+// Per-unit model: closed switching devices, fuses and overload relays have no impedance, so the
+// nodes they join become one solve bus; cables and transformers are branches.
+#include "studies/network_model.h"
+
+#include "rules/rule_catalog.h"
+#include "rules/rule_context.h"
+#include "sizing/motor_sizing.h"
+
+#include <cmath>
+#include <numeric>
+
+namespace lineward {
+
+namespace {
+
+Complex fromMagnitude(double mag, double xr) {
+    const double angle = std::atan(xr);
+    return std::polar(mag, angle);
+}
+
+int find(std::vector<int>& p, int x) {
+    while (p[x] != x)
+        x = p[x] = p[p[x]];
+    return x;
+}
+
+bool hasImpedance(PartKind k) { return k == PartKind::Cable || k == PartKind::Transformer; }
+
+double zBase(double volts) { return volts * volts / (kBaseMva * 1e6); }
+
+} // namespace
+
+double NetworkModel::baseAmps(int bus) const {
+    return kBaseMva * 1e6 / (std::sqrt(3.0) * baseV[static_cast<std::size_t>(bus)]);
+}
+
+std::optional<Complex> cableOhms(const Part& c, const Tables& t) {
+    const auto size = c.word("size").value_or("");
+    const double lengthFt = c.number("length_ft").value_or(0);
+    const double sets = c.number("sets").value_or(1);
+    const bool al = c.word("material").value_or("cu") == "al";
+    const auto raceway = c.word("raceway").value_or("steel");
+    if (size.ends_with(" mm2")) {
+        // Resistivity at 75 °C (Cu 0.0210, Al 0.0346 ohm·mm²/m, from memory) and 0.08 ohm/km
+        // reactance (common practice) where IEC tables are not loaded.
+        const double area = std::stod(size);
+        const double rPerM = (al ? 0.0346 : 0.0210) / area;
+        return Complex(rPerM, 0.08e-3) * (lengthFt * 0.3048) / sets;
+    }
+    const ImpedanceRow* row = t.impedanceRow(size);
+    if (!row)
+        return std::nullopt;
+    const int col = raceway == "pvc" ? 0 : raceway == "aluminum" ? 1 : 2;
+    const auto r = (al ? row->alR : row->cuR)[col];
+    if (!r)
+        return std::nullopt;
+    const double x = raceway == "steel" ? row->xlSteel : row->xlPvcAl;
+    return Complex(*r, x) * (lengthFt / 1000.0) / sets;
+}
+
+NetworkModel buildNetworkModel(const Network& net, const Tables& t, const Settings& s) {
+    NetworkModel m;
+    const Drawing& d = net.drawing();
+    const auto& g = net.graph();
+    const int n = static_cast<int>(net.nodeCount());
+    std::vector<int> parent(static_cast<std::size_t>(n));
+    std::iota(parent.begin(), parent.end(), 0);
+    for (auto [e, end] = boost::edges(g); e != end; ++e) {
+        const Part& p = *d.part(g[*e].part);
+        if (g[*e].closed && !hasImpedance(p.kind))
+            parent[static_cast<std::size_t>(find(parent, static_cast<int>(boost::source(*e, g))))] =
+                find(parent, static_cast<int>(boost::target(*e, g)));
+    }
+    m.busOfNode.assign(static_cast<std::size_t>(n), -1);
+    std::vector<int> busOfRoot(static_cast<std::size_t>(n), -1);
+    for (int v = 0; v < n; ++v) {
+        if (!g[static_cast<std::size_t>(v)].energized || g[static_cast<std::size_t>(v)].nominalV <= 0)
+            continue;
+        const int r = find(parent, v);
+        if (busOfRoot[static_cast<std::size_t>(r)] < 0) {
+            busOfRoot[static_cast<std::size_t>(r)] = m.busCount();
+            m.baseV.push_back(g[static_cast<std::size_t>(v)].nominalV);
+        }
+        m.busOfNode[static_cast<std::size_t>(v)] = busOfRoot[static_cast<std::size_t>(r)];
+    }
+    for (auto [e, end] = boost::edges(g); e != end; ++e) {
+        const Part& p = *d.part(g[*e].part);
+        const int a = m.busOfNode[boost::source(*e, g)], b = m.busOfNode[boost::target(*e, g)];
+        if (!g[*e].closed || !hasImpedance(p.kind) || a < 0 || b < 0)
+            continue;
+        Complex z;
+        if (p.kind == PartKind::Transformer) {
+            const double zpu = p.number("z_pct").value_or(5) / 100.0 * kBaseMva / (p.number("kva").value_or(1) / 1000.0);
+            z = fromMagnitude(zpu, p.number("x_over_r").value_or(6));
+        } else if (auto ohms = cableOhms(p, t)) {
+            z = *ohms / zBase(m.baseV[static_cast<std::size_t>(a)]);
+        } else {
+            auto f = makeFinding("study.cable.no_data", {p.id},
+                                 p.tag + ": no impedance data for " + p.word("size").value_or("?") +
+                                     "; the studies treat it as having none");
+            m.notes.push_back(std::move(f));
+            z = Complex(1e-9, 1e-9);
+        }
+        m.branches.push_back({a, b, z, p.id});
+    }
+    for (const auto& p : d.parts()) {
+        const int bus = isTwoTerminal(p.kind) ? -1 : m.busOfNode[net.nodeOf(p.id, 0)];
+        if (bus < 0)
+            continue;
+        const double vb = m.baseV[static_cast<std::size_t>(bus)];
+        if (p.kind == PartKind::Source) {
+            const double mva = p.number("fault_mva").value_or(std::sqrt(3.0) * p.number("kv").value_or(0) *
+                                                             p.number("fault_ka").value_or(0));
+            m.sources.push_back({bus, fromMagnitude(kBaseMva / mva, p.number("x_over_r").value_or(15)), p.id});
+        } else if (p.kind == PartKind::Motor) {
+            auto flc = motorFlc(p, t);
+            const double amps = p.number("fla").value_or(flc ? flc->amps : 0);
+            if (amps <= 0)
+                continue;
+            const double rated = p.number("volts").value_or(vb);
+            const double sPu = std::sqrt(3.0) * rated * amps / (kBaseMva * 1e6);
+            m.loads.push_back({bus, std::polar(sPu, std::acos(kRunningPf)), p.id});
+            if (s.motorContributionX > 0) {
+                const double zOhm = rated / std::sqrt(3.0) / (s.motorContributionX * (flc ? flc->amps : amps));
+                m.motors.push_back({bus, fromMagnitude(zOhm / zBase(vb), kMotorXr), p.id});
+            }
+        } else if (p.kind == PartKind::Load) {
+            const double pf = p.number("pf").value_or(0.9);
+            const double kva = p.number("kva").value_or(p.number("kw").value_or(0) / pf);
+            m.loads.push_back({bus, std::polar(kva / 1000.0 / kBaseMva, std::acos(pf)), p.id});
+        }
+    }
+    return m;
+}
+
+} // namespace lineward

@@ -1,0 +1,67 @@
+// The electrical model of a drawing for the studies: solve buses (network nodes joined by
+// closed zero-impedance devices), branch impedances in per unit, sources, motors and loads.
+#pragma once
+
+#include "rules/finding.h"
+#include "tables/tables.h"
+#include "topology/network.h"
+
+#include <complex>
+#include <optional>
+#include <vector>
+
+namespace lineward {
+
+using Complex = std::complex<double>;
+
+/// System base of every per-unit value.
+inline constexpr double kBaseMva = 100.0;
+
+/// A series element between two solve buses.
+struct ModelBranch {
+    int from = -1, to = -1;
+    Complex z;      ///< per unit on kBaseMva and the buses' nominal voltage
+    PartId part;
+};
+
+/// A source or motor seen as an EMF of 1 per unit behind an impedance to ground.
+struct ModelShunt {
+    int bus = -1;
+    Complex z;
+    PartId part;
+};
+
+/// A load drawing constant power at its bus.
+struct ModelLoad {
+    int bus = -1;
+    Complex s;       ///< per unit (P + jQ)
+    PartId part;
+};
+
+/// Per-unit model of the energized network.
+struct NetworkModel {
+    std::vector<int> busOfNode;       ///< network node → solve bus (−1 when not energized)
+    std::vector<double> baseV;        ///< by solve bus: nominal line-to-line volts
+    std::vector<ModelBranch> branches;
+    std::vector<ModelShunt> sources, motors;
+    std::vector<ModelLoad> loads;     ///< motors running and static loads
+    std::vector<Finding> notes;       ///< parts the model could not represent
+    int busCount() const { return static_cast<int>(baseV.size()); }
+    /// Base current in amperes at a bus.
+    double baseAmps(int bus) const;
+};
+
+/// Builds the model. Motors contribute `motorContributionX` × FLC to faults; running motors
+/// draw FLA at `runningPf`.
+NetworkModel buildNetworkModel(const Network& net, const Tables& tables, const Settings& s);
+
+/// Series impedance of a cable in ohms per phase (NEC Chapter 9 Table 9; mm² sizes from
+/// resistivity). Nothing when the size has no data.
+std::optional<Complex> cableOhms(const Part& cable, const Tables& tables);
+
+/// Power factor of running motors (common practice).
+inline constexpr double kRunningPf = 0.85;
+/// X/R of a motor's fault contribution (common practice for low-voltage induction motors).
+inline constexpr double kMotorXr = 6.0;
+
+} // namespace lineward

@@ -1,0 +1,183 @@
+// Fault study (Thevenin impedance from Z = Y⁻¹ at each bus), load flow (fixed-point on the
+// same factorised Y) and motor starting (superposition on the load-flow state).
+#include "studies/study.h"
+
+#include "studies/admittance.h"
+#include "rules/rule_context.h"
+#include "sizing/motor_sizing.h"
+
+#include <cmath>
+
+namespace lineward {
+
+double peakFactor(double xOverR) {
+    if (xOverR <= 0)
+        return 1.02; // purely resistive: no DC offset beyond the formula's floor
+    return 1.02 + 0.98 * std::exp(-3.0 / xOverR);
+}
+
+int StudyResults::busOf(NodeIndex n) const {
+    return n < model.busOfNode.size() ? model.busOfNode[n] : -1;
+}
+
+const FaultAtBus* StudyResults::faultAtNode(NodeIndex n) const {
+    const int b = busOf(n);
+    return b >= 0 && static_cast<std::size_t>(b) < fault.size() ? &fault[static_cast<std::size_t>(b)] : nullptr;
+}
+
+namespace {
+
+void faultStudy(StudyResults& r) {
+    Admittance y(r.model, true);
+    r.fault.assign(static_cast<std::size_t>(r.model.busCount()), {});
+    if (!y.ok())
+        return;
+    for (int k = 0; k < r.model.busCount(); ++k) {
+        const Complex zth = y.zColumn(k)[k];
+        FaultAtBus f;
+        f.ikKa = 1.0 / std::abs(zth) * r.model.baseAmps(k) / 1000.0;
+        f.xOverR = zth.real() > 0 ? zth.imag() / zth.real() : 1e6;
+        f.kappa = peakFactor(f.xOverR);
+        f.peakKa = f.kappa * std::sqrt(2.0) * f.ikKa;
+        r.fault[static_cast<std::size_t>(k)] = f;
+    }
+}
+
+Eigen::VectorXcd loadCurrents(const NetworkModel& m, const Eigen::VectorXcd& v) {
+    Eigen::VectorXcd i = Eigen::VectorXcd::Zero(m.busCount());
+    for (const auto& l : m.loads)
+        i[l.bus] += std::conj(l.s / v[l.bus]);
+    return i;
+}
+
+void loadFlow(StudyResults& r, const Admittance& y) {
+    const auto& m = r.model;
+    const int n = m.busCount();
+    Eigen::VectorXcd src = Eigen::VectorXcd::Zero(n);
+    for (const auto& s : m.sources)
+        src[s.bus] += 1.0 / s.z; // EMF of 1 per unit behind the source impedance
+    Eigen::VectorXcd v = Eigen::VectorXcd::Constant(n, Complex(1, 0));
+    for (int it = 0; it < 50; ++it) {
+        const Eigen::VectorXcd next = y.solve(src - loadCurrents(m, v));
+        const double change = (next - v).cwiseAbs().maxCoeff();
+        v = next;
+        if (change < 1e-9) {
+            r.loadFlowConverged = true;
+            break;
+        }
+    }
+    r.voltage.assign(v.data(), v.data() + n);
+}
+
+void originVoltages(StudyResults& r, const Network& net, const Flow& flow) {
+    const auto& g = net.graph();
+    const Drawing& d = net.drawing();
+    r.originVoltagePu.assign(static_cast<std::size_t>(r.model.busCount()), 1.0);
+    for (std::size_t node = 0; node < net.nodeCount(); ++node) {
+        const int bus = r.model.busOfNode[node];
+        if (bus < 0)
+            continue;
+        NodeIndex v = node;
+        // Walk up to the node fed by a transformer, or to the source node.
+        for (std::size_t guard = 0; guard < net.nodeCount(); ++guard) {
+            auto feed = flow.feedingBranch(v);
+            if (!feed || d.part(*feed)->kind == PartKind::Transformer)
+                break;
+            v = flow.lineNode(*feed);
+        }
+        const int ob = r.model.busOfNode[v];
+        r.originVoltagePu[static_cast<std::size_t>(bus)] =
+            ob >= 0 ? std::abs(r.voltage[static_cast<std::size_t>(ob)]) : 1.0;
+        (void)g;
+    }
+}
+
+void partCurrents(StudyResults& r, const Network& net, const Flow& flow) {
+    const Drawing& d = net.drawing();
+    std::unordered_map<PartId, Complex> own;
+    for (const auto& l : r.model.loads)
+        own[l.part] = std::conj(l.s / r.voltage[static_cast<std::size_t>(l.bus)]);
+    for (const auto& p : d.parts()) {
+        const NodeIndex at = isTwoTerminal(p.kind) ? flow.lineNode(p.id) : net.nodeOf(p.id, 0);
+        const int bus = r.busOf(at);
+        if (bus < 0)
+            continue;
+        Complex i = 0;
+        if (isTwoTerminal(p.kind)) {
+            if (p.isOpen())
+                continue;
+            for (auto id : flow.loadsBelow(flow.loadNode(p.id)))
+                if (auto it = own.find(id); it != own.end())
+                    i += it->second;
+        } else if (auto it = own.find(p.id); it != own.end()) {
+            i = it->second;
+        } else if (p.kind == PartKind::Bus) {
+            for (auto id : flow.loadsBelow(at))
+                if (auto it2 = own.find(id); it2 != own.end())
+                    i += it2->second;
+        } else {
+            continue;
+        }
+        r.loadAmps[p.id] = std::abs(i) * r.model.baseAmps(bus);
+    }
+}
+
+void motorStarting(StudyResults& r, const Network& net, const Flow& flow, const Admittance& y, const Tables& t,
+                   const Settings& s) {
+    const Drawing& d = net.drawing();
+    for (const auto& l : r.model.loads) {
+        const Part& p = *d.part(l.part);
+        if (p.kind != PartKind::Motor)
+            continue;
+        MotorStart ms;
+        auto flc = motorFlc(p, t);
+        auto lra = lockedRotorA(p, t, nullptr);
+        if (!lra) {
+            lra = 6.0 * (flc ? flc->amps : p.number("fla").value_or(0)); // common practice
+            ms.lraAssumed = true;
+        }
+        ms.lockedRotorA = *lra;
+        const int m = l.bus;
+        const double vb = r.model.baseV[static_cast<std::size_t>(m)];
+        const double rated = p.number("volts").value_or(vb);
+        const double zOhm = rated / std::sqrt(3.0) / *lra;
+        const Complex zlr = std::polar(zOhm / (vb * vb / (kBaseMva * 1e6)), std::acos(s.startPf));
+        const Eigen::VectorXcd zcol = y.zColumn(m);
+        const Complex zth = zcol[m];
+        const Complex iRun = std::conj(l.s / r.voltage[static_cast<std::size_t>(m)]);
+        const Complex vOpen = r.voltage[static_cast<std::size_t>(m)] + zth * iRun;
+        const Complex iStart = vOpen / (zlr + zth);
+        const Complex vTerm = vOpen - zth * iStart;
+        ms.terminalPctOfRated = std::abs(vTerm) * vb / rated * 100.0;
+        auto chain = net.branchChain(p.id);
+        const NodeIndex busNode = chain.empty() ? net.nodeOf(p.id, 0) : flow.lineNode(chain.back());
+        ms.bus = r.busOf(busNode);
+        if (ms.bus >= 0) {
+            const Complex before = r.voltage[static_cast<std::size_t>(ms.bus)];
+            const Complex during = before - zcol[ms.bus] * (iStart - iRun);
+            ms.busDipPct = (std::abs(before) - std::abs(during)) / std::abs(before) * 100.0;
+        }
+        r.starts[p.id] = ms;
+    }
+}
+
+} // namespace
+
+StudyResults runStudies(const Network& net, const Flow& flow, const Tables& t, const Settings& s) {
+    StudyResults r;
+    r.model = buildNetworkModel(net, t, s);
+    r.notes = r.model.notes;
+    if (r.model.busCount() == 0)
+        return r;
+    faultStudy(r);
+    Admittance y(r.model, false);
+    if (!y.ok())
+        return r;
+    loadFlow(r, y);
+    originVoltages(r, net, flow);
+    partCurrents(r, net, flow);
+    motorStarting(r, net, flow, y, t, s);
+    return r;
+}
+
+} // namespace lineward
