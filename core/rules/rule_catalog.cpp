@@ -104,6 +104,8 @@ constexpr std::array kRules{
              "primary ≤ 125 % (next size) alone, or ≤ 250 % with secondary ≤ 125 % (next size)"},
     RuleInfo{"study.cable.no_data", "cable without impedance data", "common practice",
              Severity::Caution, "the cable's size has a row in NEC Chapter 9 Table 9 (or is a mm² size)"},
+    RuleInfo{"study.loadflow.diverged", "load flow did not settle", "common practice",
+             Severity::Caution, "the fixed-point load flow converges within 200 iterations to 1e−9 per unit"},
     RuleInfo{"duty.interrupting", "interrupting rating below available fault", "NEC 2023 110.9",
              Severity::Violation, "interrupting rating ≥ symmetrical fault current at the line side"},
     RuleInfo{"duty.sccr", "bucket SCCR below available fault", "NEC 2023 110.10; 430.8; 409.22",

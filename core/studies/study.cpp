@@ -3,6 +3,7 @@
 #include "studies/study.h"
 
 #include "studies/admittance.h"
+#include "rules/rule_catalog.h"
 #include "rules/rule_context.h"
 #include "sizing/motor_sizing.h"
 
@@ -57,7 +58,7 @@ void loadFlow(StudyResults& r, const Admittance& y) {
     for (const auto& s : m.sources)
         src[s.bus] += 1.0 / s.z; // EMF of 1 per unit behind the source impedance
     Eigen::VectorXcd v = Eigen::VectorXcd::Constant(n, Complex(1, 0));
-    for (int it = 0; it < 50; ++it) {
+    for (int it = 0; it < 200; ++it) {
         const Eigen::VectorXcd next = y.solve(src - loadCurrents(m, v));
         const double change = (next - v).cwiseAbs().maxCoeff();
         v = next;
@@ -174,6 +175,12 @@ StudyResults runStudies(const Network& net, const Flow& flow, const Tables& t, c
     if (!y.ok())
         return r;
     loadFlow(r, y);
+    if (!r.loadFlowConverged) {
+        auto f = makeFinding("study.loadflow.diverged", {},
+                             "the load flow did not settle: the network cannot carry its loads at a "
+                             "usable voltage (look for long, small feeders); voltage checks are skipped");
+        r.notes.push_back(std::move(f));
+    }
     originVoltages(r, net, flow);
     partCurrents(r, net, flow);
     motorStarting(r, net, flow, y, t, s);

@@ -1,0 +1,293 @@
+// Studies against published methods and analytic results: infinite-bus transformer faults,
+// an independent series (point-to-point) calculation, ties, κ, voltage drop, motor starting,
+// and properties on generated radial networks.
+#include "rules/check.h"
+#include "studies/study.h"
+#include "test_support.h"
+
+#include <gtest/gtest.h>
+
+#include <cmath>
+#include <complex>
+#include <random>
+
+using namespace lineward;
+using namespace lineward::test;
+
+namespace {
+
+struct Studied {
+    Drawing d;
+    std::unique_ptr<Network> net;
+    std::unique_ptr<Flow> flow;
+    StudyResults r;
+    explicit Studied(Drawing dr) : d(std::move(dr)) {
+        net = std::make_unique<Network>(d);
+        flow = std::make_unique<Flow>(*net);
+        r = runStudies(*net, *flow, testTables(), d.settings);
+    }
+    const FaultAtBus& faultAt(PartId part, int terminal = 0) const {
+        return *r.faultAtNode(net->nodeOf(part, terminal));
+    }
+    double vAt(PartId part, int terminal = 0) const {
+        return std::abs(r.voltage[static_cast<std::size_t>(r.busOf(net->nodeOf(part, terminal)))]);
+    }
+};
+
+// Source → transformer → bus, optionally → cable → second bus.
+Drawing transformerLineup(double sourceMva, double kva, double zPct, double xr,
+                          const char* cableSize = nullptr, double lengthFt = 0, double sets = 1) {
+    DrawingBuilder b;
+    auto src = b.add(PartKind::Source, "U", {{"kv", 13.8}, {"fault_mva", sourceMva}, {"x_over_r", 15.0}});
+    auto tx = b.add(PartKind::Transformer, "TX", {{"kva", kva}, {"pri_v", 13800.0}, {"sec_v", 480.0},
+                                                  {"z_pct", zPct}, {"x_over_r", xr}});
+    auto bus = b.add(PartKind::Bus, "SWBD", {{"volts", 480.0}, {"amps", 3000.0}});
+    b.wire(src, 0, tx, 0);
+    b.wire(tx, 1, bus, 0);
+    if (cableSize) {
+        auto c = b.add(PartKind::Cable, "C", {{"size", std::string(cableSize)}, {"length_ft", lengthFt},
+                                              {"sets", sets}, {"raceway", std::string("steel")}});
+        auto bus2 = b.add(PartKind::Bus, "MCC", {{"volts", 480.0}, {"amps", 800.0}});
+        b.wire(bus, 0, c, 0);
+        b.wire(c, 1, bus2, 0);
+    }
+    b.drawing().settings.motorContributionX = 0;
+    return b.drawing();
+}
+
+} // namespace
+
+TEST(FaultStudy, InfiniteBusTransformer) {
+    // I = FLA × 100 / %Z: 1000 kVA at 480 V, FLA = 1000 / (√3 × 0.48) = 1202.8 A;
+    // 5.75 %Z → 20.92 kA (the infinite-bus method taught with NEC 110.9 / 110.10 duty checks).
+    Studied s(transformerLineup(1e5, 1000, 5.75, 6));
+    EXPECT_NEAR(s.faultAt(PartId(3)).ikKa, 20.92, 0.02);
+    EXPECT_NEAR(s.faultAt(PartId(3)).xOverR, 6.0, 0.05); // source X/R barely shifts it
+}
+
+TEST(FaultStudy, SeriesSumAndPointToPointAgreeWithNodalSolve) {
+    // 1500 kVA, 5.75 %Z, X/R 6.5 behind a 500 MVA source (X/R 15); then 200 ft of 2 sets of
+    // 500 kcmil Cu in steel conduit (NEC Chapter 9 Table 9: R 0.029, X 0.048 Ω/1000 ft).
+    Studied s(transformerLineup(500, 1500, 5.75, 6.5, "500 kcmil", 200, 2));
+    const double v = 480, zb = v * v / 1.5e6; // ohm base on the transformer rating
+    auto polar = [](double mag, double xr) { return std::polar(mag, std::atan(xr)); };
+    // Independent series sum in ohms at 480 V.
+    const std::complex<double> zSrc = polar(v * v / 500e6, 15), zTx = polar(0.0575 * zb, 6.5);
+    const std::complex<double> zCable = std::complex<double>(0.029, 0.048) * 0.2 / 2.0;
+    const double iSwbd = v / std::sqrt(3.0) / std::abs(zSrc + zTx) / 1000;
+    const double iMcc = v / std::sqrt(3.0) / std::abs(zSrc + zTx + zCable) / 1000;
+    EXPECT_NEAR(s.faultAt(PartId(3)).ikKa, iSwbd, iSwbd * 1e-6);
+    EXPECT_NEAR(s.faultAt(PartId(5)).ikKa, iMcc, iMcc * 1e-6);
+    // The published point-to-point method (from memory): f = √3·L·I / (C·n·E), M = 1/(1+f),
+    // with C = 1000 / |Z per 1000 ft per phase| (ft/Ω); it adds magnitudes, so it reads a
+    // little low. Agreement within 5 % is expected.
+    const double c = 1000.0 / std::abs(std::complex<double>(0.029, 0.048));
+    const double f = std::sqrt(3.0) * 200 * iSwbd * 1000 / (c * 2 * v);
+    const double pointToPoint = iSwbd / (1 + f);
+    EXPECT_NEAR(s.faultAt(PartId(5)).ikKa, pointToPoint, pointToPoint * 0.05);
+    EXPECT_LT(s.faultAt(PartId(5)).ikKa, s.faultAt(PartId(3)).ikKa);
+}
+
+namespace {
+// Two equal sources and transformers on two buses joined by a tie breaker.
+Drawing doubleEnded(bool tieOpen) {
+    DrawingBuilder b;
+    std::vector<PartId> buses;
+    for (const char* side : {"A", "B"}) {
+        auto src = b.add(PartKind::Source, std::string("U-") + side, {{"kv", 13.8}, {"fault_mva", 250.0}});
+        auto tx = b.add(PartKind::Transformer, std::string("TX-") + side,
+                        {{"kva", 1500.0}, {"pri_v", 13800.0}, {"sec_v", 480.0}, {"z_pct", 5.75}});
+        auto bus = b.add(PartKind::Bus, std::string("BUS-") + side, {{"volts", 480.0}, {"amps", 2000.0}});
+        b.wire(src, 0, tx, 0);
+        b.wire(tx, 1, bus, 0);
+        buses.push_back(bus);
+    }
+    auto tie = b.add(PartKind::Breaker, "TIE", {{"trip_a", 2000.0}, {"interrupting_ka", 65.0}, {"open", tieOpen}});
+    b.wire(buses[0], 0, tie, 0);
+    b.wire(tie, 1, buses[1], 0);
+    b.drawing().settings.motorContributionX = 0;
+    return b.drawing();
+}
+} // namespace
+
+TEST(FaultStudy, ClosedTieDoublesOpenTieSeparates) {
+    Studied open(doubleEnded(true));
+    Studied closed(doubleEnded(false));
+    const double single = open.faultAt(PartId(3)).ikKa;
+    EXPECT_NEAR(open.faultAt(PartId(6)).ikKa, single, 1e-9); // each side alone, equal
+    // Two identical paths in parallel: half the impedance, twice the current (analytic).
+    EXPECT_NEAR(closed.faultAt(PartId(3)).ikKa, 2 * single, 2 * single * 1e-9);
+    EXPECT_NEAR(closed.faultAt(PartId(6)).ikKa, 2 * single, 2 * single * 1e-9);
+}
+
+TEST(FaultStudy, PeakFactorByIec60909) {
+    // IEC 60909-0, κ = 1.02 + 0.98·e^(−3R/X)
+    EXPECT_NEAR(peakFactor(1.0), 1.02 + 0.98 * std::exp(-3.0), 1e-12); // 1.0688
+    EXPECT_NEAR(peakFactor(10.0), 1.746, 1e-3);
+    EXPECT_NEAR(peakFactor(1e9), 2.0, 1e-6);
+    EXPECT_NEAR(peakFactor(0.1), 1.02, 1e-6);
+    Studied s(transformerLineup(1e5, 1000, 5.75, 6));
+    const auto& f = s.faultAt(PartId(3));
+    EXPECT_NEAR(f.peakKa, peakFactor(f.xOverR) * std::sqrt(2.0) * f.ikKa, 1e-9);
+}
+
+TEST(FaultStudy, MotorsContribute) {
+    Drawing d = smallLineup();
+    const double without = [&] { Drawing x = d; x.settings.motorContributionX = 0; return Studied(x).faultAt(PartId(4)).ikKa; }();
+    Studied with(d);
+    EXPECT_GT(with.faultAt(PartId(4)).ikKa, without);
+    // 4 × 34 A at the 460 V rating is 4 × 34 × 480/460 = 141.9 A on the 480 V bus, less the
+    // 8 AWG cable's share: a contribution of at most 0.1419 kA.
+    EXPECT_LT(with.faultAt(PartId(4)).ikKa - without, 0.1419);
+}
+
+TEST(VoltageStudy, MatchesTable9EffectiveImpedanceMethod) {
+    // NEC Chapter 9 Table 9, Note 2 method: Ze = R·cos θ + X·sin θ. 6 AWG Cu in steel conduit
+    // (R 0.49, X 0.064 Ω/1000 ft) at 0.85 pf: Ze = 0.4503 Ω/1000 ft. A 40 kVA, 0.85 pf load at
+    // 480 V (48.1 A) over 200 ft: ΔV = √3 × 48.1 × 0.4503 × 0.2 = 7.50 V = 1.56 %.
+    Drawing d = transformerLineup(1e5, 1000, 5.75, 6, "6 AWG", 200, 1);
+    Part load = Part::make(PartKind::Load, d.nextPartId(), "LD");
+    ASSERT_FALSE(load.set("kva", 40.0));
+    ASSERT_FALSE(load.set("pf", 0.85));
+    ASSERT_FALSE(load.set("volts", 480.0));
+    d.addPart(load);
+    d.addWire(Wire{d.nextWireId(), {PartId(5), 0}, {load.id, 0}});
+    Studied s(d);
+    ASSERT_TRUE(s.r.loadFlowConverged);
+    const double dropPct = (s.vAt(PartId(3)) - s.vAt(PartId(5))) * 100;
+    const double ze = 0.49 * 0.85 + 0.064 * std::sin(std::acos(0.85));
+    const double amps = 40e3 / (std::sqrt(3.0) * 480);
+    const double formula = std::sqrt(3.0) * amps * ze * 0.2 / 480 * 100;
+    EXPECT_NEAR(formula, 1.56, 0.01);
+    // The load flow holds power constant, so the current rises a little as voltage falls.
+    EXPECT_NEAR(dropPct, formula, 0.05);
+}
+
+TEST(VoltageStudy, MotorStartingDipMatchesSourceRatio) {
+    // A motor at locked rotor on a transformer behind an infinite bus: with no other load the
+    // terminal voltage is |Z_LR / (Z_LR + Z_T)| (voltage divider; the classic
+    // short-circuit-ratio estimate of starting dip). 500 kVA, 5 %Z, X/R 5; 100 hp, 460 V
+    // motor, LRA 750 A (given), starting pf 0.3, bolted to the secondary bus.
+    DrawingBuilder b;
+    auto src = b.add(PartKind::Source, "U", {{"kv", 13.8}, {"fault_mva", 1e5}});
+    auto tx = b.add(PartKind::Transformer, "TX", {{"kva", 500.0}, {"pri_v", 13800.0}, {"sec_v", 480.0},
+                                                  {"z_pct", 5.0}, {"x_over_r", 5.0}});
+    auto bus = b.add(PartKind::Bus, "B", {{"volts", 480.0}, {"amps", 800.0}});
+    auto m = b.add(PartKind::Motor, "M", {{"hp", 100.0}, {"volts", 480.0}, {"lra", 750.0}, {"fla", 120.0}});
+    b.wire(src, 0, tx, 0);
+    b.wire(tx, 1, bus, 0);
+    b.wire(bus, 0, m, 0);
+    Studied s(b.drawing());
+    const auto& ms = s.r.starts.at(m);
+    const double zb = 480.0 * 480 / 500e3;
+    const std::complex<double> zt = std::polar(0.05 * zb, std::atan(5.0));
+    const std::complex<double> zlr = std::polar(480 / std::sqrt(3.0) / 750, std::acos(0.3));
+    const double expectTerminal = std::abs(zlr / (zlr + zt)) * 100;
+    // Before the start the bus sits slightly below 1 pu (the motor was running); the divider
+    // applies to the open-circuit voltage, so compare within 0.2 %.
+    EXPECT_NEAR(ms.terminalPctOfRated, expectTerminal, 0.2);
+    EXPECT_GT(ms.busDipPct, 5.0);
+}
+
+TEST(DutyRules, IceaWithstandLimit) {
+    // ICEA P-32-382 (from memory): (I/A)²·t = 0.0297·log10((T2+234)/(T1+234)) for copper.
+    // 1/0 AWG (105,600 cmil), 90 °C → 250 °C: I²t = 105600² × 0.0297 × log10(484/324) = 5.76e7 A²s.
+    Drawing d = transformerLineup(1e5, 1000, 5.75, 6, "1/0 AWG", 10, 1);
+    // Feeder breaker stated to clear in 0.5 s at this fault: lets through about 20.9 kA² × 0.5.
+    Part cb = Part::make(PartKind::Breaker, d.nextPartId(), "CB");
+    ASSERT_FALSE(cb.set("trip_a", 150.0));
+    ASSERT_FALSE(cb.set("interrupting_ka", 65.0));
+    ASSERT_FALSE(cb.set("clear_s", 0.5));
+    d.addPart(cb);
+    const auto w = std::find_if(d.wires().begin(), d.wires().end(), [](const Wire& x) { return x.b.part == PartId(4); });
+    ASSERT_NE(w, d.wires().end());
+    const auto bus = w->a;
+    d.removeWire(w->id);
+    d.addWire(Wire{d.nextWireId(), bus, {cb.id, 0}});
+    d.addWire(Wire{d.nextWireId(), {cb.id, 1}, {PartId(4), 0}});
+    const auto r = checkDrawing(d, testTables());
+    auto it = std::find_if(r.findings.begin(), r.findings.end(), [](const Finding& f) { return f.ruleId == "duty.withstand"; });
+    ASSERT_NE(it, r.findings.end());
+    EXPECT_NEAR(*it->limit, 105600.0 * 105600 * 0.0297 * std::log10(484.0 / 324.0), 1.0);
+    // With a stated let-through below the limit the cable passes.
+    ASSERT_FALSE(d.part(cb.id)->set("let_through_a2s", 5e7));
+    const auto r2 = checkDrawing(d, testTables());
+    EXPECT_TRUE(std::none_of(r2.findings.begin(), r2.findings.end(), [](const Finding& f) {
+        return f.ruleId.rfind("duty.withstand", 0) == 0;
+    }));
+}
+
+TEST(DutyRules, InterruptingBracingAndSccr) {
+    Drawing d = smallLineup(); // 75 kVA 5.75 %Z behind 20 kA at 13.8 kV: about 1.5 kA at 480 V
+    ASSERT_FALSE(d.part(PartId(4))->set("bracing_ka", 10.0));
+    auto count = [&](const char* rule) {
+        int n = 0;
+        for (const auto& f : checkDrawing(d, testTables()).findings)
+            n += f.ruleId == rule;
+        return n;
+    };
+    EXPECT_EQ(count("duty.interrupting"), 0);
+    EXPECT_EQ(count("duty.bracing"), 0);
+    EXPECT_EQ(count("duty.sccr"), 0);
+    ASSERT_FALSE(d.part(PartId(2))->set("kva", 2500.0)); // now about 46 kA at the bus
+    EXPECT_EQ(count("duty.bracing"), 1);
+    ASSERT_FALSE(d.part(PartId(5))->set("interrupting_ka", 25.0));
+    EXPECT_EQ(count("duty.interrupting"), 1);
+    EXPECT_EQ(count("duty.sccr"), 0); // bucket rated 65 kA
+    Bucket b = *d.bucket(BucketId(1));
+    b.sccrKa = 22.0;
+    ASSERT_TRUE(d.updateBucket(b));
+    EXPECT_EQ(count("duty.sccr"), 1);
+}
+
+// Property: on generated radial networks without motors, fault current never rises and
+// voltage drop never falls going away from the source.
+class RadialProperty : public ::testing::TestWithParam<int> {};
+TEST_P(RadialProperty, FaultFallsAndDropGrowsDownstream) {
+    std::mt19937 rng(static_cast<unsigned>(GetParam()));
+    // Sizes and loads kept so every feeder can carry what it feeds (a collapsing network is
+    // reported by study.loadflow.diverged and tested below).
+    const char* sizes[] = {"4/0 AWG", "2/0 AWG", "1 AWG", "250 kcmil", "500 kcmil", "350 kcmil"};
+    DrawingBuilder b;
+    auto src = b.add(PartKind::Source, "U", {{"kv", 13.8}, {"fault_mva", 300.0}});
+    auto tx = b.add(PartKind::Transformer, "TX", {{"kva", 1500.0}, {"pri_v", 13800.0}, {"sec_v", 480.0}, {"z_pct", 5.75}});
+    auto root = b.add(PartKind::Bus, "B0", {{"volts", 480.0}, {"amps", 3000.0}});
+    b.wire(src, 0, tx, 0);
+    b.wire(tx, 1, root, 0);
+    std::vector<PartId> buses{root};
+    std::vector<std::pair<PartId, PartId>> links; // (upstream bus, downstream bus)
+    for (int i = 1; i < 25; ++i) {
+        const PartId up = buses[std::uniform_int_distribution<std::size_t>(0, buses.size() - 1)(rng)];
+        auto c = b.add(PartKind::Cable, "C" + std::to_string(i),
+                       {{"size", std::string(sizes[rng() % 6])},
+                        {"length_ft", static_cast<double>(20 + rng() % 300)}});
+        auto bus = b.add(PartKind::Bus, "B" + std::to_string(i), {{"volts", 480.0}, {"amps", 400.0}});
+        auto ld = b.add(PartKind::Load, "L" + std::to_string(i),
+                        {{"kva", static_cast<double>(2 + rng() % 10)}, {"volts", 480.0}});
+        b.wire(up, 0, c, 0);
+        b.wire(c, 1, bus, 0);
+        b.wire(bus, 0, ld, 0);
+        buses.push_back(bus);
+        links.push_back({up, bus});
+    }
+    Studied s(b.drawing());
+    ASSERT_TRUE(s.r.loadFlowConverged);
+    for (auto [up, down] : links) {
+        EXPECT_LE(s.faultAt(down).ikKa, s.faultAt(up).ikKa + 1e-9);
+        EXPECT_LE(s.vAt(down), s.vAt(up) + 1e-12);
+    }
+}
+INSTANTIATE_TEST_SUITE_P(Seeds, RadialProperty, ::testing::Range(1, 9));
+
+TEST(VoltageStudy, CollapsingNetworkIsReported) {
+    // 2 MVA of load through 1000 ft of 8 AWG cannot be carried.
+    Drawing d = transformerLineup(1e5, 2500, 5.75, 6, "8 AWG", 1000, 1);
+    Part load = Part::make(PartKind::Load, d.nextPartId(), "BIG");
+    ASSERT_FALSE(load.set("kva", 2000.0));
+    ASSERT_FALSE(load.set("volts", 480.0));
+    d.addPart(load);
+    d.addWire(Wire{d.nextWireId(), {PartId(5), 0}, {load.id, 0}});
+    const auto r = checkDrawing(d, testTables());
+    EXPECT_TRUE(std::any_of(r.findings.begin(), r.findings.end(),
+                            [](const Finding& f) { return f.ruleId == "study.loadflow.diverged"; }));
+}
