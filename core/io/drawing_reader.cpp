@@ -408,15 +408,20 @@ LoadResult parseDrawing(std::string_view text, std::string_view fileName, const 
                           LoadError{std::string(fileName), 0, 0,
                                     "file is larger than " +
                                         std::to_string(limits.maxFileBytes >> 20) + " MiB"}};
+    // Parse fast first; only a refused file is parsed again with every offset recorded, so
+    // its message can name the line and column.
     JsonSyntaxError syntax;
-    auto doc = parseLocated(text, JsonLimits{}, syntax);
+    JsonLimits fast;
+    fast.recordOffsets = false;
+    auto doc = parseLocated(text, fast, syntax);
     if (!doc)
         return failAt(text, fileName, syntax.offset, syntax.message);
     try {
         Reader reader(*doc, limits);
         return LoadResult{reader.read(), std::nullopt};
     } catch (const Failure& f) {
-        return failAt(text, fileName, doc->offsetOf(f.pointer), f.message);
+        auto located = parseLocated(text, JsonLimits{}, syntax);
+        return failAt(text, fileName, located ? located->offsetOf(f.pointer) : 0, f.message);
     } catch (const std::exception& e) {
         return failAt(text, fileName, 0, e.what());
     }

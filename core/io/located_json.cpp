@@ -95,7 +95,8 @@ public:
         const std::size_t end = here();
         const std::size_t start = end >= k.size() + 2 ? end - k.size() - 2 : 0;
         m_key = k;
-        m_out.offsets[m_paths.back() + "/" + escape(k)] = start;
+        if (m_limits.recordOffsets)
+            m_out.offsets[m_paths.back() + "/" + escape(k)] = start;
         return true;
     }
     bool parse_error(std::size_t position, const std::string&, const nlohmann::detail::exception& ex) {
@@ -147,12 +148,15 @@ private:
         }
         json* parent = m_stack.back();
         if (parent->is_array()) {
-            path = m_paths.back() + "/" + std::to_string(parent->size());
-            m_out.offsets[path] = here() > 0 ? here() - 1 : 0;
+            if (m_limits.recordOffsets) {
+                path = m_paths.back() + "/" + std::to_string(parent->size());
+                m_out.offsets[path] = here() > 0 ? here() - 1 : 0;
+            }
             parent->push_back(std::move(v));
             return &parent->back();
         }
-        path = m_paths.back() + "/" + escape(m_key);
+        if (m_limits.recordOffsets)
+            path = m_paths.back() + "/" + escape(m_key);
         json& slot = (*parent)[m_key];
         slot = std::move(v);
         return &slot;

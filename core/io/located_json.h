@@ -22,6 +22,8 @@ TextPos textPosition(std::string_view text, std::size_t offset);
 struct JsonLimits {
     std::size_t maxDepth = 16;
     std::size_t maxStringBytes = 65536;
+    /// Record the offset of every key and element (costly; needed only to place an error).
+    bool recordOffsets = true;
 };
 
 /// A parsed document with the byte offset of every key ("/parts/3/hp") and array element

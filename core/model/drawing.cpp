@@ -37,10 +37,9 @@ const Wire* Drawing::wire(WireId id) const {
 }
 
 const Bucket* Drawing::bucket(BucketId id) const {
-    for (const auto& b : m_buckets)
-        if (b.id == id)
-            return &b;
-    return nullptr;
+    auto it = std::lower_bound(m_buckets.begin(), m_buckets.end(), id,
+                               [](const Bucket& b, BucketId i) { return b.id < i; });
+    return it != m_buckets.end() && it->id == id ? &*it : nullptr;
 }
 
 bool Drawing::updateBucket(Bucket b) {

@@ -3,6 +3,7 @@
 #include "studies/study.h"
 
 #include "studies/admittance.h"
+#include "studies/tree_solver.h"
 #include "rules/rule_catalog.h"
 #include "rules/rule_context.h"
 #include "sizing/motor_sizing.h"
@@ -29,12 +30,17 @@ const FaultAtBus* StudyResults::faultAtNode(NodeIndex n) const {
 namespace {
 
 void faultStudy(StudyResults& r) {
-    Admittance y(r.model, true);
     r.fault.assign(static_cast<std::size_t>(r.model.busCount()), {});
-    if (!y.ok())
-        return;
+    // Radial networks: linear-time tree recursion; meshed ones: one sparse LU solve per bus.
+    const auto tree = TreeSolver::build(r.model, true);
+    std::unique_ptr<Admittance> y;
+    if (!tree) {
+        y = std::make_unique<Admittance>(r.model, true);
+        if (!y->ok())
+            return;
+    }
     for (int k = 0; k < r.model.busCount(); ++k) {
-        const Complex zth = y.zColumn(k)[k];
+        const Complex zth = tree ? tree->zth(k) : y->zColumn(k)[k];
         FaultAtBus f;
         f.ikKa = 1.0 / std::abs(zth) * r.model.baseAmps(k) / 1000.0;
         f.xOverR = zth.real() > 0 ? zth.imag() / zth.real() : 1e6;
@@ -51,7 +57,20 @@ Eigen::VectorXcd loadCurrents(const NetworkModel& m, const Eigen::VectorXcd& v) 
     return i;
 }
 
-void loadFlow(StudyResults& r, const Admittance& y) {
+// Solves Y v = i with the tree recursion when radial, else the sparse LU.
+struct LoadFlowSolver {
+    const std::optional<TreeSolver>& tree;
+    const Admittance* lu;
+    Eigen::VectorXcd solve(const Eigen::VectorXcd& b) const {
+        if (!tree)
+            return lu->solve(b);
+        const std::vector<Complex> in(b.data(), b.data() + b.size());
+        const auto out = tree->solve(in);
+        return Eigen::Map<const Eigen::VectorXcd>(out.data(), static_cast<Eigen::Index>(out.size()));
+    }
+};
+
+void loadFlow(StudyResults& r, const LoadFlowSolver& y) {
     const auto& m = r.model;
     const int n = m.busCount();
     Eigen::VectorXcd src = Eigen::VectorXcd::Zero(n);
@@ -123,8 +142,8 @@ void partCurrents(StudyResults& r, const Network& net, const Flow& flow) {
     }
 }
 
-void motorStarting(StudyResults& r, const Network& net, const Flow& flow, const Admittance& y, const Tables& t,
-                   const Settings& s) {
+void motorStarting(StudyResults& r, const Network& net, const Flow& flow, const std::optional<TreeSolver>& tree,
+                   const Admittance* lu, const Tables& t, const Settings& s) {
     const Drawing& d = net.drawing();
     for (const auto& l : r.model.loads) {
         const Part& p = *d.part(l.part);
@@ -143,19 +162,32 @@ void motorStarting(StudyResults& r, const Network& net, const Flow& flow, const 
         const double rated = p.number("volts").value_or(vb);
         const double zOhm = rated / std::sqrt(3.0) / *lra;
         const Complex zlr = std::polar(zOhm / (vb * vb / (kBaseMva * 1e6)), std::acos(s.startPf));
-        const Eigen::VectorXcd zcol = y.zColumn(m);
-        const Complex zth = zcol[m];
-        const Complex iRun = std::conj(l.s / r.voltage[static_cast<std::size_t>(m)]);
-        const Complex vOpen = r.voltage[static_cast<std::size_t>(m)] + zth * iRun;
-        const Complex iStart = vOpen / (zlr + zth);
-        const Complex vTerm = vOpen - zth * iStart;
-        ms.terminalPctOfRated = std::abs(vTerm) * vb / rated * 100.0;
         auto chain = net.branchChain(p.id);
         const NodeIndex busNode = chain.empty() ? net.nodeOf(p.id, 0) : flow.lineNode(chain.back());
         ms.bus = r.busOf(busNode);
+        // Driving-point and transfer impedances: from the tree when radial, else a Z column.
+        std::optional<Complex> zth, zbm;
+        if (tree) {
+            zth = tree->zth(m);
+            if (ms.bus >= 0)
+                zbm = tree->transfer(m, ms.bus);
+        }
+        if (!zth || (ms.bus >= 0 && !zbm)) {
+            if (!lu)
+                continue;
+            const Eigen::VectorXcd zcol = lu->zColumn(m);
+            zth = zcol[m];
+            if (ms.bus >= 0)
+                zbm = zcol[ms.bus];
+        }
+        const Complex iRun = std::conj(l.s / r.voltage[static_cast<std::size_t>(m)]);
+        const Complex vOpen = r.voltage[static_cast<std::size_t>(m)] + *zth * iRun;
+        const Complex iStart = vOpen / (zlr + *zth);
+        const Complex vTerm = vOpen - *zth * iStart;
+        ms.terminalPctOfRated = std::abs(vTerm) * vb / rated * 100.0;
         if (ms.bus >= 0) {
             const Complex before = r.voltage[static_cast<std::size_t>(ms.bus)];
-            const Complex during = before - zcol[ms.bus] * (iStart - iRun);
+            const Complex during = before - *zbm * (iStart - iRun);
             ms.busDipPct = (std::abs(before) - std::abs(during)) / std::abs(before) * 100.0;
         }
         r.starts[p.id] = ms;
@@ -171,10 +203,15 @@ StudyResults runStudies(const Network& net, const Flow& flow, const Tables& t, c
     if (r.model.busCount() == 0)
         return r;
     faultStudy(r);
-    Admittance y(r.model, false);
-    if (!y.ok())
-        return r;
-    loadFlow(r, y);
+    // The load flow and starting use Y without motor shunts; radial networks never factorise.
+    const auto tree = TreeSolver::build(r.model, false);
+    std::unique_ptr<Admittance> lu;
+    if (!tree) {
+        lu = std::make_unique<Admittance>(r.model, false);
+        if (!lu->ok())
+            return r;
+    }
+    loadFlow(r, LoadFlowSolver{tree, lu.get()});
     if (!r.loadFlowConverged) {
         auto f = makeFinding("study.loadflow.diverged", {},
                              "the load flow did not settle: the network cannot carry its loads at a "
@@ -183,7 +220,7 @@ StudyResults runStudies(const Network& net, const Flow& flow, const Tables& t, c
     }
     originVoltages(r, net, flow);
     partCurrents(r, net, flow);
-    motorStarting(r, net, flow, y, t, s);
+    motorStarting(r, net, flow, tree, lu.get(), t, s);
     return r;
 }
 

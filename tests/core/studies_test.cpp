@@ -2,7 +2,9 @@
 // an independent series (point-to-point) calculation, ties, κ, voltage drop, motor starting,
 // and properties on generated radial networks.
 #include "rules/check.h"
+#include "studies/admittance.h"
 #include "studies/study.h"
+#include "studies/tree_solver.h"
 #include "test_support.h"
 
 #include <gtest/gtest.h>
@@ -290,4 +292,45 @@ TEST(VoltageStudy, CollapsingNetworkIsReported) {
     const auto r = checkDrawing(d, testTables());
     EXPECT_TRUE(std::any_of(r.findings.begin(), r.findings.end(),
                             [](const Finding& f) { return f.ruleId == "study.loadflow.diverged"; }));
+}
+
+TEST(FaultStudy, TreeRecursionEqualsSparseLu) {
+    // The linear-time tree path must give what one LU solve per bus gives.
+    Drawing d = smallLineup();
+    Network net(d);
+    Flow flow(net);
+    const auto model = buildNetworkModel(net, testTables(), d.settings);
+    auto tree = TreeSolver::build(model, true);
+    ASSERT_TRUE(tree.has_value());
+    Admittance y(model, true);
+    ASSERT_TRUE(y.ok());
+    for (int k = 0; k < model.busCount(); ++k) {
+        const auto col = y.zColumn(k);
+        EXPECT_NEAR(std::abs(tree->zth(k) - col[k]), 0.0, 1e-9 * std::abs(col[k]));
+        for (int b = 0; b < model.busCount(); ++b)
+            if (auto t = tree->transfer(k, b))
+                EXPECT_NEAR(std::abs(*t - col[b]), 0.0, 1e-9 * std::abs(col[b]));
+    }
+    // Solving Y v = i: the tree recursion equals the LU solve.
+    Eigen::VectorXcd inj = Eigen::VectorXcd::Zero(model.busCount());
+    for (int k = 0; k < model.busCount(); ++k)
+        inj[k] = Complex(0.01 * k, -0.02);
+    const auto lu = y.solve(inj);
+    const auto tv = tree->solve(std::vector<Complex>(inj.data(), inj.data() + inj.size()));
+    for (int k = 0; k < model.busCount(); ++k)
+        EXPECT_NEAR(std::abs(tv[static_cast<std::size_t>(k)] - lu[k]), 0.0, 1e-9);
+    // Two sources on one closed tie are still a tree of branches (sources are shunts)...
+    Studied closed(doubleEnded(false));
+    EXPECT_TRUE(TreeSolver::build(closed.r.model, true).has_value());
+    // ...but two cables in parallel make a loop: the LU path takes over.
+    Part twin = *d.part(PartId(8));
+    twin.id = d.nextPartId();
+    twin.tag = "C-1B";
+    d.addPart(twin);
+    d.addWire(Wire{d.nextWireId(), {PartId(7), 1}, {twin.id, 0}});
+    d.addWire(Wire{d.nextWireId(), {twin.id, 1}, {PartId(9), 0}});
+    Studied meshed(d);
+    EXPECT_FALSE(TreeSolver::build(meshed.r.model, true).has_value());
+    // Two equal cables in parallel: the motor terminal sees half the cable impedance.
+    EXPECT_GT(meshed.faultAt(PartId(9)).ikKa, Studied(smallLineup()).faultAt(PartId(9)).ikKa);
 }

@@ -1,0 +1,21 @@
+// The generated plants behind the benchmarks are realistic: they check clean and round-trip.
+#include "io/drawing_file.h"
+#include "plant_generator.h"
+#include "rules/check.h"
+#include "test_support.h"
+
+#include <gtest/gtest.h>
+
+using namespace lineward;
+
+TEST(PlantGenerator, ChecksCleanAndRoundTrips) {
+    const Drawing d = bench::makePlant(2000);
+    EXPECT_GE(d.parts().size(), 2000u);
+    EXPECT_LT(d.parts().size(), 2100u);
+    for (const auto& f : checkDrawing(d, test::testTables()).findings)
+        ADD_FAILURE() << f.ruleId << ": " << f.message;
+    const std::string text = io::serializeDrawing(d);
+    auto back = io::parseDrawing(text);
+    ASSERT_TRUE(back) << back.error->text();
+    EXPECT_EQ(io::serializeDrawing(*back.drawing), text);
+}
