@@ -7,20 +7,19 @@
 namespace lineward {
 
 const Part* Drawing::part(PartId id) const {
-    auto it = m_partIndex.find(id);
-    return it == m_partIndex.end() ? nullptr : &m_parts[it->second];
+    auto i = indexOf(id);
+    return i ? &m_parts[*i] : nullptr;
 }
 
 Part* Drawing::part(PartId id) {
-    auto it = m_partIndex.find(id);
-    return it == m_partIndex.end() ? nullptr : &m_parts[it->second];
+    auto i = indexOf(id);
+    return i ? &m_parts[*i] : nullptr;
 }
 
 std::optional<std::size_t> Drawing::indexOf(PartId id) const {
-    auto it = m_partIndex.find(id);
-    if (it == m_partIndex.end())
+    if (id.value >= m_partIndex.size() || m_partIndex[id.value] < 0)
         return std::nullopt;
-    return it->second;
+    return static_cast<std::size_t>(m_partIndex[id.value]);
 }
 
 const Part* Drawing::partByTag(std::string_view tag) const {
@@ -62,7 +61,9 @@ void Drawing::addPart(Part p) {
         throw std::invalid_argument("part id " + std::to_string(p.id.value) + " is in use");
     m_maxPart = std::max(m_maxPart, p.id.value);
     if (m_parts.empty() || m_parts.back().id < p.id) { // the common case: no reindex
-        m_partIndex[p.id] = m_parts.size();
+        if (m_partIndex.size() <= p.id.value)
+            m_partIndex.resize(std::max<std::size_t>(p.id.value + 1, m_partIndex.size() * 2), -1);
+        m_partIndex[p.id.value] = static_cast<std::int64_t>(m_parts.size());
         m_parts.push_back(std::move(p));
         return;
     }
@@ -131,9 +132,9 @@ std::optional<Bucket> Drawing::removeBucket(BucketId id) {
 }
 
 void Drawing::reindex() {
-    m_partIndex.clear();
+    m_partIndex.assign(m_maxPart + 1, -1);
     for (std::size_t i = 0; i < m_parts.size(); ++i)
-        m_partIndex[m_parts[i].id] = i;
+        m_partIndex[m_parts[i].id.value] = static_cast<std::int64_t>(i);
     m_bucketOfPart.clear();
     for (std::size_t i = 0; i < m_buckets.size(); ++i)
         for (auto pid : m_buckets[i].parts)

@@ -123,7 +123,7 @@ private:
     std::vector<Wire> m_wires;
     std::vector<Bucket> m_buckets;
     std::vector<Accepted> m_accepted;
-    std::unordered_map<PartId, std::size_t> m_partIndex;
+    std::vector<std::int64_t> m_partIndex; ///< by id value: position in m_parts, or −1
     std::unordered_map<std::uint32_t, std::size_t> m_bucketOfPart;
     std::uint32_t m_maxPart = 0, m_maxWire = 0, m_maxBucket = 0;
 };

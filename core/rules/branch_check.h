@@ -20,7 +20,7 @@ struct BranchCheck {
         if (about.id != b.motor->id)
             parts.push_back(b.motor->id);
         out.push_back(makeFinding(rule, parts, std::move(message)));
-        out.back().trace = flc.trace;
+        out.back().trace = motorFlc(*b.motor, ctx.tables)->trace; // the text only when reporting
         return out.back();
     }
     std::string motorName() const {

@@ -89,10 +89,11 @@ std::optional<double> clearingTime(const Part& d, double amps) {
 
 // What the device lets through at the fault: the stated I²t, else the stated clearing time,
 // else the assumed clearing time; `stated` tells which.
-std::optional<double> letThrough(const Part& d, double amps, bool& stated, std::string& how) {
+std::optional<double> letThrough(const Part& d, double amps, bool& stated, std::string* how) {
     if (auto i2t = d.number("let_through_a2s")) {
         stated = true;
-        how = fmt(*i2t, 0) + " A²s (stated let-through)";
+        if (how)
+            *how = fmt(*i2t, 0) + " A²s (stated let-through)";
         return *i2t;
     }
     auto t = d.number("clear_s");
@@ -101,20 +102,22 @@ std::optional<double> letThrough(const Part& d, double amps, bool& stated, std::
         t = clearingTime(d, amps);
     if (!t)
         return std::nullopt;
-    how = fmt(amps, 0) + "² A² × " + fmt(*t, 3) + " s (" + (stated ? "stated" : "assumed, common practice") +
-          " clearing time)";
+    if (how)
+        *how = fmt(amps, 0) + "² A² × " + fmt(*t, 3) + " s (" + (stated ? "stated" : "assumed, common practice") +
+               " clearing time)";
     return amps * amps * *t;
 }
 
 // I²t the cable takes: ICEA P-32-382 for AWG/kcmil, IEC adiabatic k²S² for mm² (per set).
-std::optional<double> cableI2t(const RuleContext& ctx, const Part& cable, std::string& how) {
+std::optional<double> cableI2t(const RuleContext& ctx, const Part& cable, std::string* how) {
     const auto size = cable.word("size").value_or("");
     const double ins = cable.number("insulation_c").value_or(90);
     const bool al = cable.word("material").value_or("cu") == "al";
     if (size.ends_with(" mm2")) {
         const double k = ins >= 90 ? (al ? 94 : 143) : (al ? 76 : 115); // IEC 60364-4-43 Table 43A (from memory)
         const double s = std::stod(size);
-        how = "k²S² = (" + fmt(k, 0) + " × " + fmt(s, 1) + ")²";
+        if (how)
+            *how = "k²S² = (" + fmt(k, 0) + " × " + fmt(s, 1) + ")²";
         return std::pow(k * s, 2);
     }
     auto area = ctx.tables.areaCmil(size);
@@ -122,8 +125,9 @@ std::optional<double> cableI2t(const RuleContext& ctx, const Part& cable, std::s
         return std::nullopt;
     const double t2 = ins >= 90 ? 250 : 150; // thermoset / thermoplastic limits (ICEA, from memory)
     const double k = al ? 0.0125 : 0.0297, base = al ? 228 : 234;
-    how = fmt(k, 4) + " × log10((" + fmt(t2, 0) + " + " + fmt(base, 0) + ") / (" + fmt(ins, 0) + " + " +
-          fmt(base, 0) + ")) × " + fmt(*area, 0) + "² cmil²";
+    if (how)
+        *how = fmt(k, 4) + " × log10((" + fmt(t2, 0) + " + " + fmt(base, 0) + ") / (" + fmt(ins, 0) + " + " +
+               fmt(base, 0) + ")) × " + fmt(*area, 0) + "² cmil²";
     return k * std::log10((t2 + base) / (ins + base)) * *area * *area;
 }
 
@@ -137,10 +141,12 @@ void withstand(const RuleContext& ctx, const Part& cable, std::vector<Finding>& 
     const double perSet = f->ikKa * 1000.0 / sets;
     bool stated = false;
     std::string devHow, cableHow;
-    auto let = letThrough(dev, perSet, stated, devHow);
-    auto limit = cableI2t(ctx, cable, cableHow);
+    auto let = letThrough(dev, perSet, stated, nullptr);
+    auto limit = cableI2t(ctx, cable, nullptr);
     if (!let || !limit || *let <= *limit)
         return;
+    letThrough(dev, perSet, stated, &devHow); // the explanations only when reporting
+    cableI2t(ctx, cable, &cableHow);
     auto x = makeFinding(stated ? "duty.withstand" : "duty.withstand.assumed", {cable.id, dev.id},
                          cable.tag + " takes " + fmt(*limit, 0) + " A²s; " + dev.tag + " lets through " +
                              fmt(*let, 0) + " A²s at " + fmt(f->ikKa, 2) + " kA" +

@@ -8,7 +8,7 @@ namespace lineward {
 MotorFactMap motorFacts(const RuleContext& ctx, const std::vector<MotorBranch>& branches) {
     MotorFactMap m;
     for (const auto& b : branches)
-        if (auto flc = motorFlc(*b.motor, ctx.tables))
+        if (auto flc = motorFlc(*b.motor, ctx.tables, false))
             m[b.motor->id] = MotorFacts{flc->amps, b.scpd};
     return m;
 }

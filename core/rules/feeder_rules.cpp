@@ -31,10 +31,11 @@ void feederConductor(FeederCheck& c, const Part& cable) {
         return;
     const auto size = cable.word("size").value_or("");
     const auto cond = conditionsOf(cable, c.ctx.settings());
-    auto amp = cableAmpacity(size, cond, c.ctx.tables);
+    auto amp = cableAmpacity(size, cond, c.ctx.tables, false);
     const double need = load.required();
     if (!amp || amp->amps >= need - 1e-9)
         return;
+    amp = cableAmpacity(size, cond, c.ctx.tables); // again, with its trace
     auto f = makeFinding("feeder.conductor.ampacity", {cable.id},
                          "cable " + cable.tag + " carries " + fmt(amp->amps) + " A; its loads need " +
                              fmt(need) + " A");
@@ -63,7 +64,7 @@ void conductorProtection(FeederCheck& c, const Part& cable) {
     auto rating = deviceRating(d);
     const auto size = cable.word("size").value_or("");
     const auto cond = conditionsOf(cable, c.ctx.settings());
-    auto amp = cableAmpacity(size, cond, c.ctx.tables);
+    auto amp = cableAmpacity(size, cond, c.ctx.tables, false);
     if (!rating || !amp)
         return;
     auto small = cond.sets == 1 ? c.ctx.tables.smallConductorLimit(size, cond.material) : std::nullopt;
@@ -73,6 +74,7 @@ void conductorProtection(FeederCheck& c, const Part& cable) {
     const bool smallOk = !small || *rating <= *small + 1e-9;
     if (ampOk && smallOk)
         return;
+    amp = cableAmpacity(size, cond, c.ctx.tables); // again, with its trace
     const double limit = smallOk ? (nextUpOk ? *rating : amp->amps) : std::min(amp->amps, *small);
     auto f = makeFinding("conductor.protection", {cable.id, d.id},
                          "cable " + cable.tag + " (" + fmt(amp->amps) + " A) is protected by " + d.tag +

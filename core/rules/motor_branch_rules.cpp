@@ -12,9 +12,10 @@ void conductor(BranchCheck& c) {
     for (const Part* cable : c.b.cables) {
         const auto size = cable->word("size").value_or("");
         const auto cond = conditionsOf(*cable, c.ctx.settings());
-        auto amp = cableAmpacity(size, cond, c.ctx.tables);
+        auto amp = cableAmpacity(size, cond, c.ctx.tables, false);
         if (!amp || amp->amps >= need - 1e-9)
             continue; // metric sizes and sizes outside Table 310.16 are not judged here
+        amp = cableAmpacity(size, cond, c.ctx.tables); // again, with its trace
         auto& f = c.add("branch.conductor.ampacity", *cable,
                         "cable " + cable->tag + " feeding " + c.motorName() + " needs 1.25 × " +
                             fmt(c.flc.amps) + " A = " + fmt(need) + " A; " + size + " carries " +
@@ -135,7 +136,7 @@ void scpd(BranchCheck& c) {
 
 void checkMotorBranches(const RuleContext& ctx, std::vector<Finding>& out) {
     for (const auto& b : motorBranches(ctx)) {
-        auto flc = motorFlc(*b.motor, ctx.tables);
+        auto flc = motorFlc(*b.motor, ctx.tables, false);
         if (!flc) {
             auto f = makeFinding("branch.flc.unknown", {b.motor->id},
                                  b.motor->tag + ": no table full-load current for " +
@@ -150,7 +151,7 @@ void checkMotorBranches(const RuleContext& ctx, std::vector<Finding>& out) {
             auto f = makeFinding("branch.flc.nameplate", {b.motor->id},
                                  b.motor->tag + ": no row in the FLC table; sized from nameplate FLA " +
                                      fmt(flc->amps) + " A");
-            f.trace = flc->trace;
+            f.trace = motorFlc(*b.motor, ctx.tables)->trace;
             out.push_back(std::move(f));
         }
         BranchCheck c{ctx, b, *flc, out};

@@ -57,6 +57,8 @@ void drops(const RuleContext& ctx, const Part& load, std::vector<Finding>& out) 
 
 void starting(const RuleContext& ctx, const Part& motor, const MotorStart& ms, std::vector<Finding>& out) {
     const auto& s = ctx.settings();
+    if (ms.busDipPct <= s.startDipPct + 1e-9 && ms.terminalPctOfRated >= s.startTerminalPct - 1e-9)
+        return;
     std::vector<TraceStep> trace{
         {"locked-rotor current", fmt(ms.lockedRotorA, 0) + " A" + (ms.lraAssumed ? " (6 × FLC assumed, common practice)" : "")},
         {"starting power factor", fmt(s.startPf, 2) + " (setting)"},

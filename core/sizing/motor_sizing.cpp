@@ -41,7 +41,7 @@ MotorType motorTypeOf(const Part& m) {
     return MotorType::SquirrelCage;
 }
 
-std::optional<MotorFlc> motorFlc(const Part& m, const Tables& t) {
+std::optional<MotorFlc> motorFlc(const Part& m, const Tables& t, bool withTrace) {
     MotorFlc r;
     const int phases = static_cast<int>(m.number("phases").value_or(3));
     const double volts = m.number("volts").value_or(0);
@@ -55,13 +55,15 @@ std::optional<MotorFlc> motorFlc(const Part& m, const Tables& t) {
                 hp = row;
                 break;
             }
-        r.trace.push_back({"kW as hp", fmt(*m.number("kw"), 2) + " kW / 0.746 = " + fmt(eq, 2) +
+        if (withTrace)
+            r.trace.push_back({"kW as hp", fmt(*m.number("kw"), 2) + " kW / 0.746 = " + fmt(eq, 2) +
                                            " hp → table row " + fmt(hp, 2) + " hp"});
     }
     if (auto a = t.flc(hp, volts, phases, &r.columnV)) {
         r.amps = *a;
         r.hpUsed = hp;
-        r.trace.push_back({"FLC", fmt(*a, 1) + " A (NEC Table " +
+        if (withTrace)
+            r.trace.push_back({"FLC", fmt(*a, 1) + " A (NEC Table " +
                                       std::string(phases == 1 ? "430.248" : "430.250") + ", " +
                                       fmt(hp, 2) + " hp, " + fmt(r.columnV, 0) + " V column)"});
         return r;
@@ -69,7 +71,8 @@ std::optional<MotorFlc> motorFlc(const Part& m, const Tables& t) {
     if (auto fla = m.number("fla")) {
         r.amps = *fla;
         r.fromTable = false;
-        r.trace.push_back({"FLC", fmt(*fla, 1) + " A from the nameplate: the table has no row for " +
+        if (withTrace)
+            r.trace.push_back({"FLC", fmt(*fla, 1) + " A from the nameplate: the table has no row for " +
                                       fmt(hp, 2) + " hp at " + fmt(volts, 0) + " V"});
         return r;
     }
@@ -147,7 +150,8 @@ CableConditions conditionsOf(const Part& c, const Settings& s) {
     return k;
 }
 
-std::optional<Ampacity> cableAmpacity(const std::string& size, const CableConditions& c, const Tables& t) {
+std::optional<Ampacity> cableAmpacity(const std::string& size, const CableConditions& c, const Tables& t,
+                                      bool withTrace) {
     Ampacity a;
     const char* mat = c.material == Material::Cu ? "Cu" : "Al";
     auto ins = t.ampacityAt(size, c.material, c.insulationC);
@@ -159,6 +163,8 @@ std::optional<Ampacity> cableAmpacity(const std::string& size, const CableCondit
     const double derated = *ins * *amb * adj;
     const double perSet = std::min(derated, *term);
     a.amps = perSet * c.sets;
+    if (!withTrace)
+        return a;
     a.trace.push_back({"conductor", size + " " + mat + ", " + std::to_string(c.insulationC) +
                                         " °C insulation, " + std::to_string(c.terminationC) +
                                         " °C terminations" +
@@ -186,8 +192,8 @@ std::optional<std::pair<std::string, Ampacity>> smallestCable(double requiredA, 
         started = started || size == minSize;
         if (!started)
             continue;
-        if (auto a = cableAmpacity(std::string(size), c, t); a && a->amps >= requiredA - 1e-9)
-            return std::pair{std::string(size), *a};
+        if (auto a = cableAmpacity(std::string(size), c, t, false); a && a->amps >= requiredA - 1e-9)
+            return std::pair{std::string(size), *cableAmpacity(std::string(size), c, t)};
     }
     return std::nullopt;
 }

@@ -20,7 +20,7 @@ struct MotorFlc {
     double columnV = 0;
     std::vector<TraceStep> trace;
 };
-std::optional<MotorFlc> motorFlc(const Part& motor, const Tables& t);
+std::optional<MotorFlc> motorFlc(const Part& motor, const Tables& t, bool withTrace = true);
 double motorHp(const Part& motor); ///< hp, or kW / 0.746
 MotorType motorTypeOf(const Part& motor);
 
@@ -56,7 +56,9 @@ struct Ampacity {
     double amps = 0;
     std::vector<TraceStep> trace;
 };
-std::optional<Ampacity> cableAmpacity(const std::string& size, const CableConditions& c, const Tables& t);
+/// `withTrace` false skips building the trace text (the checks ask again when they report).
+std::optional<Ampacity> cableAmpacity(const std::string& size, const CableConditions& c, const Tables& t,
+                                      bool withTrace = true);
 /// Smallest US size (from `minSize`) whose ampacity reaches `requiredA`.
 std::optional<std::pair<std::string, Ampacity>> smallestCable(double requiredA, const CableConditions& c,
                                                               const Tables& t,

@@ -113,7 +113,7 @@ NetworkModel buildNetworkModel(const Network& net, const Tables& t, const Settin
                                                              p.number("fault_ka").value_or(0));
             m.sources.push_back({bus, fromMagnitude(kBaseMva / mva, p.number("x_over_r").value_or(15)), p.id});
         } else if (p.kind == PartKind::Motor) {
-            auto flc = motorFlc(p, t);
+            auto flc = motorFlc(p, t, false);
             const double amps = p.number("fla").value_or(flc ? flc->amps : 0);
             if (amps <= 0)
                 continue;

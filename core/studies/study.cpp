@@ -150,7 +150,7 @@ void motorStarting(StudyResults& r, const Network& net, const Flow& flow, const 
         if (p.kind != PartKind::Motor)
             continue;
         MotorStart ms;
-        auto flc = motorFlc(p, t);
+        auto flc = motorFlc(p, t, false);
         auto lra = lockedRotorA(p, t, nullptr);
         if (!lra) {
             lra = 6.0 * (flc ? flc->amps : p.number("fla").value_or(0)); // common practice
