@@ -1,26 +1,36 @@
-// Document: file I/O and re-checking go through the core only.
+// Document: file I/O and re-checking go through the core only. Small drawings are checked at
+// once; large ones on a worker thread, and a result older than the newest edit is dropped.
 #include "document.h"
 
 #include "io/drawing_file.h"
 
+#include <QCoreApplication>
+#include <QEventLoop>
+#include <QThread>
+#include <QTimer>
+
 #include <spdlog/spdlog.h>
+
+#include <thread>
 
 namespace lineward::ui {
 
 Document::Document(std::shared_ptr<const Tables> tables, QObject* parent)
     : QObject(parent), m_tables(std::move(tables)) {
-    recheck();
+    startCheck();
+}
+
+Document::~Document() {
+    while (m_running.load() > 0)
+        QThread::msleep(5); // let a worker finish before the tables and this object go
 }
 
 QString Document::open(const QString& path) {
     auto loaded = io::loadDrawing(path.toStdString());
     if (!loaded)
         return QString::fromStdString(loaded.error->text());
-    m_drawing = std::move(*loaded.drawing);
-    m_path = path;
+    reset(std::move(*loaded.drawing), path);
     spdlog::info("opened {}", path.toStdString());
-    emit drawingReset();
-    recheck();
     return {};
 }
 
@@ -28,12 +38,131 @@ QString Document::saveAs(const QString& path) {
     if (auto why = io::saveDrawing(m_drawing, path.toStdString()))
         return QString::fromStdString(*why);
     m_path = path;
+    m_undo.setClean();
+    spdlog::info("saved {}", path.toStdString());
     return {};
 }
 
-void Document::recheck() {
-    m_report = checkDrawing(m_drawing, *m_tables);
+void Document::reset(Drawing drawing, const QString& path) {
+    m_drawing = std::move(drawing);
+    m_path = path;
+    m_undo.clear();
+    emit drawingReset();
+    startCheck();
+}
+
+void Document::addPart(const Part& part) {
+    m_drawing.addPart(part);
+    emit partAdded(part.id);
+    changed();
+}
+
+void Document::removePart(PartId id) {
+    // Wires on the part go with it; the command that removes a part restores them itself.
+    std::vector<WireId> wires;
+    for (const auto& w : m_drawing.wires())
+        if (w.a.part == id || w.b.part == id)
+            wires.push_back(w.id);
+    for (auto w : wires)
+        removeWire(w);
+    m_drawing.removePart(id);
+    emit partRemoved(id);
+    emit bucketsChanged();
+    changed();
+}
+
+void Document::replacePart(const Part& part) {
+    if (Part* p = m_drawing.part(part.id)) {
+        *p = part;
+        emit partChanged(part.id);
+        changed();
+    }
+}
+
+void Document::addWire(const Wire& wire) {
+    m_drawing.addWire(wire);
+    emit wireAdded(wire.id);
+    changed();
+}
+
+void Document::removeWire(WireId id) {
+    if (m_drawing.removeWire(id)) {
+        emit wireRemoved(id);
+        changed();
+    }
+}
+
+void Document::addBucket(const Bucket& bucket) {
+    m_drawing.addBucket(bucket);
+    emit bucketsChanged();
+    changed();
+}
+
+void Document::removeBucket(BucketId id) {
+    m_drawing.removeBucket(id);
+    emit bucketsChanged();
+    changed();
+}
+
+void Document::replaceBucket(const Bucket& bucket) {
+    m_drawing.updateBucket(bucket);
+    emit bucketsChanged();
+    changed();
+}
+
+void Document::setSheet(const SheetInfo& sheet) {
+    m_drawing.sheet = sheet;
+    emit sheetChanged();
+    changed();
+}
+
+void Document::setAccepted(const std::vector<Accepted>& accepted) {
+    m_drawing.accepted() = accepted;
+    changed();
+}
+
+void Document::changed() {
+    // Several edits of one command land in one check: queue it for the event loop.
+    const quint64 gen = ++m_generation;
+    QTimer::singleShot(0, this, [this, gen] {
+        if (gen == m_generation)
+            startCheck();
+    });
+}
+
+void Document::startCheck() {
+    const quint64 gen = ++m_generation;
+    if (m_drawing.parts().size() < kBackgroundParts) {
+        finishCheck(gen, checkDrawing(m_drawing, *m_tables));
+        return;
+    }
+    auto copy = std::make_shared<const Drawing>(m_drawing);
+    auto tables = m_tables;
+    ++m_running;
+    std::thread([this, copy, tables, gen] {
+        CheckReport r = checkDrawing(*copy, *tables);
+        QMetaObject::invokeMethod(this, [this, gen, r = std::move(r)]() mutable {
+            finishCheck(gen, std::move(r));
+        }, Qt::QueuedConnection);
+        --m_running;
+    }).detach();
+}
+
+void Document::finishCheck(quint64 generation, CheckReport report) {
+    if (generation != m_generation)
+        return; // a newer edit is being checked; this result is stale
+    m_report = std::move(report);
     emit reportChanged();
+}
+
+void Document::waitForCheck() {
+    QCoreApplication::processEvents();
+    QEventLoop loop;
+    for (int i = 0; i < 2000 && (m_running.load() > 0); ++i) {
+        loop.processEvents(QEventLoop::AllEvents, 10);
+        QThread::msleep(2);
+    }
+    QCoreApplication::processEvents();
 }
 
 } // namespace lineward::ui

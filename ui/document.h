@@ -1,45 +1,91 @@
-// The open drawing in the editor: the core Drawing, its file, and its latest check report.
+// The open drawing in the editor: the core Drawing, its undo stack, its file, and its latest
+// check report. Commands change the drawing only through the methods here; each emits a typed
+// change event that the Sheet and panels follow.
 #pragma once
 
 #include "model/drawing.h"
 #include "rules/check.h"
-
-#include <memory>
+#include "studies/study.h"
 
 #include <QObject>
 #include <QString>
+#include <QUndoStack>
+
+#include <atomic>
+#include <memory>
 
 namespace lineward::ui {
+
+/// Everything one check produced, shared read-only with the panels.
+struct CheckState {
+    CheckReport report;
+    std::shared_ptr<const Drawing> drawing; ///< the drawing the report is about
+};
 
 /// Owns the Drawing of one window; re-checks it through the core after every change.
 class Document : public QObject {
     Q_OBJECT
 public:
     explicit Document(std::shared_ptr<const Tables> tables, QObject* parent = nullptr);
-    const Tables& tables() const { return *m_tables; }
+    ~Document() override;
 
     const Drawing& drawing() const { return m_drawing; }
     const CheckReport& report() const { return m_report; }
+    const Tables& tables() const { return *m_tables; }
+    std::shared_ptr<const Tables> sharedTables() const { return m_tables; }
     const QString& filePath() const { return m_path; }
+    QUndoStack& undoStack() { return m_undo; }
+    bool isModified() const { return !m_undo.isClean(); }
 
     /// Loads a file; on failure returns the message (file:line:column: what) and keeps the
     /// current drawing.
     QString open(const QString& path);
     /// Saves atomically; returns the reason on failure (the old file is kept).
     QString saveAs(const QString& path);
+    /// Replaces the drawing (New, recovery); clears the undo stack.
+    void reset(Drawing drawing, const QString& path = {});
+
+    // --- edits, called by commands only ---
+    void addPart(const Part& part);
+    void removePart(PartId id);
+    void replacePart(const Part& part); ///< same id: new values, tag, position or rotation
+    void addWire(const Wire& wire);
+    void removeWire(WireId id);
+    void addBucket(const Bucket& bucket);
+    void removeBucket(BucketId id);
+    void replaceBucket(const Bucket& bucket);
+    void setSheet(const SheetInfo& sheet);
+    void setAccepted(const std::vector<Accepted>& accepted);
+
+    /// Blocks until the newest check has finished (tests; large drawings check off-thread).
+    void waitForCheck();
+    /// Drawings at least this large are checked on a worker thread.
+    static constexpr std::size_t kBackgroundParts = 600;
 
 signals:
-    /// The drawing was replaced (opened) — scene items are rebuilt.
     void drawingReset();
-    /// The check report changed — badges and lists refresh.
+    void partAdded(lineward::PartId id);
+    void partRemoved(lineward::PartId id);
+    void partChanged(lineward::PartId id);
+    void wireAdded(lineward::WireId id);
+    void wireRemoved(lineward::WireId id);
+    void bucketsChanged();
+    void sheetChanged();
+    /// A new check report is available.
     void reportChanged();
 
 private:
-    void recheck();
+    void changed();
+    void startCheck();
+    void finishCheck(quint64 generation, CheckReport report);
+
     std::shared_ptr<const Tables> m_tables;
     Drawing m_drawing;
     CheckReport m_report;
     QString m_path;
+    QUndoStack m_undo;
+    quint64 m_generation = 0;
+    std::atomic<int> m_running{0};
 };
 
 } // namespace lineward::ui

@@ -1,11 +1,15 @@
-// Findings panel: a tree of findings above a detail pane with the calculation trace.
+// Findings panel: filters above, the list, the detail pane with the calculation trace.
 #include "findings_panel.h"
 
 #include "severity_style.h"
 
+#include <QComboBox>
+#include <QHBoxLayout>
 #include <QHeaderView>
-#include <QPixmap>
+#include <QLineEdit>
 #include <QPainter>
+#include <QPixmap>
+#include <QPushButton>
 #include <QSplitter>
 #include <QTextBrowser>
 #include <QTreeWidget>
@@ -36,65 +40,101 @@ QString partTags(const Drawing& d, const Finding& f) {
 } // namespace
 
 FindingsPanel::FindingsPanel(Document& doc, QWidget* parent)
-    : QWidget(parent), m_doc(doc), m_list(new QTreeWidget), m_detail(new QTextBrowser) {
+    : QWidget(parent), m_doc(doc), m_severity(new QComboBox), m_rule(new QLineEdit),
+      m_apply(new QPushButton(tr("Apply fix"))), m_list(new QTreeWidget), m_detail(new QTextBrowser) {
     m_list->setObjectName("findingsList");
+    m_detail->setObjectName("findingDetail");
+    m_apply->setObjectName("applyFix");
+    m_severity->addItems({tr("All severities"), tr("Violations"), tr("Violations and cautions")});
+    m_rule->setPlaceholderText(tr("Filter by rule or text"));
+    m_rule->setClearButtonEnabled(true);
     m_list->setColumnCount(4);
     m_list->setHeaderLabels({tr("Severity"), tr("Rule"), tr("Parts"), tr("Finding")});
     m_list->setRootIsDecorated(false);
     m_list->header()->setStretchLastSection(true);
-    m_detail->setObjectName("findingDetail");
+    auto* filters = new QHBoxLayout;
+    filters->addWidget(m_severity);
+    filters->addWidget(m_rule, 1);
+    filters->addWidget(m_apply);
     auto* split = new QSplitter(Qt::Vertical);
     split->addWidget(m_list);
     split->addWidget(m_detail);
     split->setStretchFactor(0, 3);
-    split->setStretchFactor(1, 2);
+    split->setStretchFactor(1, 1);
     auto* lay = new QVBoxLayout(this);
     lay->setContentsMargins(0, 0, 0, 0);
+    lay->addLayout(filters);
     lay->addWidget(split);
     connect(&doc, &Document::reportChanged, this, &FindingsPanel::refresh);
     connect(m_list, &QTreeWidget::currentItemChanged, this, &FindingsPanel::showDetail);
+    connect(m_severity, &QComboBox::currentIndexChanged, this, &FindingsPanel::refresh);
+    connect(m_rule, &QLineEdit::textChanged, this, &FindingsPanel::refresh);
+    connect(m_apply, &QPushButton::clicked, this, [this] {
+        if (const Finding* f = current())
+            emit applyFixRequested(*f);
+    });
     refresh();
+}
+
+void FindingsPanel::setSeverityFilter(std::optional<Severity> s) {
+    m_severity->setCurrentIndex(!s ? 0 : *s == Severity::Violation ? 1 : 2);
+}
+
+void FindingsPanel::setRuleFilter(const QString& text) { m_rule->setText(text); }
+
+const Finding* FindingsPanel::current() const {
+    auto* item = m_list->currentItem();
+    if (!item)
+        return nullptr;
+    const auto i = item->data(0, Qt::UserRole).toULongLong();
+    const auto& findings = m_doc.report().findings;
+    return i < findings.size() ? &findings[i] : nullptr;
 }
 
 void FindingsPanel::refresh() {
     m_list->clear();
     const auto& findings = m_doc.report().findings;
+    const int sev = m_severity->currentIndex();
+    const QString text = m_rule->text().trimmed();
     for (std::size_t i = 0; i < findings.size(); ++i) {
         const auto& f = findings[i];
+        if ((sev == 1 && f.severity != Severity::Violation) || (sev == 2 && f.severity == Severity::Note))
+            continue;
+        const QString rule = QString::fromStdString(f.ruleId), msg = QString::fromStdString(f.message);
+        if (!text.isEmpty() && !rule.contains(text, Qt::CaseInsensitive) && !msg.contains(text, Qt::CaseInsensitive))
+            continue;
         auto* item = new QTreeWidgetItem(m_list);
         item->setIcon(0, badgeIcon(f.severity));
         item->setText(0, severityLabel(f.severity) + (f.accepted ? tr(" (accepted)") : ""));
-        item->setText(1, QString::fromStdString(f.ruleId));
+        item->setText(1, rule);
         item->setText(2, partTags(m_doc.drawing(), f));
-        item->setText(3, QString::fromStdString(f.message));
+        item->setText(3, msg);
+        item->setToolTip(3, msg);
         item->setData(0, Qt::UserRole, static_cast<qulonglong>(i));
     }
     for (int c = 0; c < 3; ++c)
         m_list->resizeColumnToContents(c);
     m_detail->clear();
+    m_apply->setEnabled(false);
 }
 
 void FindingsPanel::showDetail() {
-    auto* item = m_list->currentItem();
-    if (!item)
+    const Finding* fp = current();
+    m_apply->setEnabled(fp && fp->fix && !fp->fix->changes.empty());
+    if (!fp)
         return;
-    const auto i = item->data(0, Qt::UserRole).toULongLong();
-    const auto& findings = m_doc.report().findings;
-    if (i >= findings.size())
-        return;
-    const Finding& f = findings[i];
+    const Finding& f = *fp;
     QString html = "<b>" + QString::fromStdString(f.ruleId).toHtmlEscaped() + "</b> · " +
                    QString::fromStdString(f.clause).toHtmlEscaped() + "<br>" +
                    QString::fromStdString(f.message).toHtmlEscaped();
     if (f.computed && f.limit)
-        html += "<br>computed " + QString::fromStdString(formatNumber(*f.computed) + " " + f.unit) +
-                ", limit " + QString::fromStdString(formatNumber(*f.limit) + " " + f.unit);
+        html += "<br>computed " + QString::fromStdString(formatNumber(std::round(*f.computed * 100) / 100) + " " + f.unit) +
+                ", limit " + QString::fromStdString(formatNumber(std::round(*f.limit * 100) / 100) + " " + f.unit);
     if (!f.trace.empty()) {
         html += "<table>";
         for (const auto& t : f.trace)
-            html += "<tr><td>" + QString::fromStdString(t.name).toHtmlEscaped() +
-                    "</td><td>&nbsp;" + QString::fromStdString(t.value).toHtmlEscaped() +
-                    "</td></tr>";
+            html += "<tr><td>" + QString::fromStdString(t.name).toHtmlEscaped() + "</td><td>&nbsp;" +
+                    QString::fromStdString(t.value).toHtmlEscaped() + "</td></tr>";
         html += "</table>";
     }
     if (f.fix)

@@ -1,91 +1,130 @@
-// Main window wiring: the Document feeds the Sheet and the Findings panel through signals.
+// Main window wiring: the Document feeds the Sheet and panels through change events; every
+// user action becomes one command on the undo stack.
 #include "main_window.h"
 
+#include "commands/add_parts_command.h"
+#include "commands/connect_command.h"
+#include "commands/delete_command.h"
+#include "commands/move_parts_command.h"
+#include "commands/set_fields_command.h"
 #include "findings_panel.h"
+#include "inspector.h"
 #include "part_item.h"
+#include "parts_palette.h"
 #include "rules/report_format.h"
+#include "schedules_panel.h"
 #include "sheet_scene.h"
+#include "sheet_view.h"
+#include "title_block_dialog.h"
+#include "util/log.h"
+#include "io/drawing_file.h"
+#include "model/part_defaults.h"
 
 #include <QAction>
 #include <QApplication>
+#include <QCloseEvent>
+#include <QDir>
 #include <QDockWidget>
 #include <QFileDialog>
 #include <QFileInfo>
-#include <QGraphicsView>
 #include <QLabel>
 #include <QMenuBar>
 #include <QMessageBox>
+#include <QMimeData>
+#include <QSettings>
 #include <QStatusBar>
+#include <QTimer>
+#include <QUuid>
 
 namespace lineward::ui {
 
 MainWindow::MainWindow(std::shared_ptr<const Tables> tables, QWidget* parent)
-    : QMainWindow(parent), m_doc(std::move(tables)), m_scene(new SheetScene(m_doc, this)), m_view(new QGraphicsView),
-      m_findings(new FindingsPanel(m_doc)), m_counts(new QLabel) {
+    : QMainWindow(parent), m_doc(std::move(tables)), m_scene(new SheetScene(m_doc, this)),
+      m_view(new SheetView(m_scene)), m_findings(new FindingsPanel(m_doc)), m_inspector(new Inspector(m_doc)),
+      m_palette(new PartsPalette), m_schedules(new SchedulesPanel(m_doc)), m_counts(new QLabel),
+      m_autosave(new QTimer(this)) {
     setObjectName("mainWindow");
-    m_view->setObjectName("sheetView");
-    m_view->setScene(m_scene);
-    m_view->setRenderHint(QPainter::Antialiasing);
-    m_view->setDragMode(QGraphicsView::RubberBandDrag);
+    setAcceptDrops(true);
     setCentralWidget(m_view);
-
-    auto* dock = new QDockWidget(tr("Findings"), this);
-    dock->setObjectName("findingsDock");
-    dock->setWidget(m_findings);
-    addDockWidget(Qt::BottomDockWidgetArea, dock);
-
+    auto dock = [this](QWidget* w, const QString& title, const char* name, Qt::DockWidgetArea area) {
+        auto* d = new QDockWidget(title, this);
+        d->setObjectName(name);
+        d->setWidget(w);
+        addDockWidget(area, d);
+        return d;
+    };
+    dock(m_palette, tr("Parts"), "partsDock", Qt::LeftDockWidgetArea);
+    dock(m_inspector, tr("Inspector"), "inspectorDock", Qt::RightDockWidgetArea);
+    auto* f = dock(m_findings, tr("Findings"), "findingsDock", Qt::BottomDockWidgetArea);
+    auto* s = dock(m_schedules, tr("Schedules"), "schedulesDock", Qt::BottomDockWidgetArea);
+    tabifyDockWidget(f, s);
+    f->raise();
+    resizeDocks({f}, {240}, Qt::Vertical);
     m_counts->setObjectName("severityCounts");
     statusBar()->addPermanentWidget(m_counts);
+
     connect(&m_doc, &Document::reportChanged, this, &MainWindow::refreshStatus);
+    connect(&m_doc.undoStack(), &QUndoStack::cleanChanged, this, &MainWindow::refreshTitle);
     connect(m_findings, &FindingsPanel::locatePart, this, &MainWindow::locate);
-    buildMenus();
+    connect(m_findings, &FindingsPanel::applyFixRequested, this, [this](const Finding& fnd) {
+        if (auto why = applyFix(fnd); !why.isEmpty())
+            QMessageBox::warning(this, tr("Cannot apply fix"), why);
+    });
+    connect(m_palette, &PartsPalette::kindChosen, m_view, [this](PartKind k) { m_view->setPlaceKind(k); });
+    connect(m_view, &SheetView::placeRequested, this, [this](PartKind k, QPointF at) { placePart(k, at); });
+    connect(m_view, &SheetView::connectRequested, this, &MainWindow::connectTerminals);
+    connect(m_view, &SheetView::moveFinished, this,
+            [this](std::vector<PartId> ids, std::vector<QPointF> from, std::vector<QPointF> to) {
+                m_doc.undoStack().push(new MovePartsCommand(m_doc, ids, from, to));
+            });
+    connect(m_view, &SheetView::filesDropped, this, [this](QStringList files) {
+        if (maybeSave())
+            openFile(files.first());
+    });
+    connect(m_inspector, &Inspector::editRequested, this, [this](Part after, QString text) {
+        m_doc.undoStack().push(new SetFieldsCommand(m_doc, {after}, text));
+    });
+    connect(m_scene, &QGraphicsScene::selectionChanged, this, &MainWindow::selectionChanged);
+
+    buildActions();
+    m_recoveryPath = QString::fromStdString((userDataDir() / "recovery").string()) + "/" +
+                     QUuid::createUuid().toString(QUuid::WithoutBraces) + ".lineward";
+    connect(m_autosave, &QTimer::timeout, this, &MainWindow::autosave);
+    m_autosave->start(60 * 1000);
+    QSettings settings;
+    restoreGeometry(settings.value("window/geometry").toByteArray());
+    restoreState(settings.value("window/state").toByteArray());
+    if (!settings.contains("window/geometry"))
+        resize(1400, 900);
     refreshStatus();
-    resize(1280, 860);
-    setWindowTitle(tr("Lineward"));
+    refreshTitle();
 }
 
-void MainWindow::buildMenus() {
-    auto* file = menuBar()->addMenu(tr("&File"));
-    auto* open = file->addAction(tr("&Open…"));
-    open->setShortcut(QKeySequence::Open);
-    connect(open, &QAction::triggered, this, [this] {
-        const auto path = QFileDialog::getOpenFileName(this, tr("Open drawing"), {},
-                                                       tr("Lineward drawings (*.lineward)"));
-        if (!path.isEmpty())
-            openFile(path);
-    });
-    auto* saveAs = file->addAction(tr("Save &As…"));
-    saveAs->setShortcut(QKeySequence::SaveAs);
-    connect(saveAs, &QAction::triggered, this, [this] {
-        const auto path = QFileDialog::getSaveFileName(this, tr("Save drawing"), m_doc.filePath(),
-                                                       tr("Lineward drawings (*.lineward)"));
-        if (path.isEmpty())
-            return;
-        if (auto why = m_doc.saveAs(path); !why.isEmpty())
-            QMessageBox::warning(this, tr("Save failed"), why);
-    });
-    file->addSeparator();
-    auto* quit = file->addAction(tr("&Quit"));
-    quit->setShortcut(QKeySequence::Quit);
-    connect(quit, &QAction::triggered, this, &QWidget::close);
+MainWindow::~MainWindow() { QFile::remove(m_recoveryPath); }
 
-    auto* view = menuBar()->addMenu(tr("&View"));
-    auto* zin = view->addAction(tr("Zoom &In"));
-    zin->setShortcut(QKeySequence::ZoomIn);
-    connect(zin, &QAction::triggered, this, [this] { zoomBy(1.25); });
-    auto* zout = view->addAction(tr("Zoom &Out"));
-    zout->setShortcut(QKeySequence::ZoomOut);
-    connect(zout, &QAction::triggered, this, [this] { zoomBy(0.8); });
-    auto* fit = view->addAction(tr("&Fit Sheet"));
-    fit->setShortcut(QKeySequence(tr("Ctrl+0")));
-    connect(fit, &QAction::triggered, this, [this] {
-        m_view->fitInView(m_scene->itemsBoundingRect().adjusted(-20, -20, 20, 20),
-                          Qt::KeepAspectRatio);
-    });
+QString MainWindow::recoveryPath() const { return m_recoveryPath; }
 
-    auto* help = menuBar()->addMenu(tr("&Help"));
-    auto* about = help->addAction(tr("&About Lineward"));
-    connect(about, &QAction::triggered, this, &MainWindow::showAbout);
+void MainWindow::autosave() {
+    if (!m_doc.isModified())
+        return;
+    QDir().mkpath(QFileInfo(m_recoveryPath).path());
+    if (auto why = saveTo(m_recoveryPath); !why.isEmpty())
+        statusBar()->showMessage(tr("Autosave failed: %1").arg(why), 10000);
+}
+
+QString MainWindow::saveTo(const QString& path) {
+    // The recovery copy must not change the document's own path or clean state.
+    if (path == m_recoveryPath) {
+        if (auto why = io::saveDrawing(m_doc.drawing(), path.toStdString()))
+            return QString::fromStdString(*why);
+        return {};
+    }
+    const QString why = m_doc.saveAs(path);
+    if (why.isEmpty()) {
+        addRecent(path);
+        refreshTitle();
+    }
+    return why;
 }
 
 QString MainWindow::openFile(const QString& path, bool quiet) {
@@ -95,14 +134,82 @@ QString MainWindow::openFile(const QString& path, bool quiet) {
             QMessageBox::warning(this, tr("Cannot open drawing"), why);
         return why;
     }
-    setWindowTitle(QFileInfo(path).fileName() + " — " + tr("Lineward"));
+    addRecent(path);
+    refreshTitle();
     m_view->fitInView(m_scene->itemsBoundingRect().adjusted(-20, -20, 20, 20), Qt::KeepAspectRatio);
     return {};
+}
+
+PartId MainWindow::placePart(PartKind kind, QPointF at) {
+    Part p = makeStarterPart(kind, m_doc.drawing().nextPartId(), nextTag(m_doc.drawing(), kind));
+    p.x = at.x();
+    p.y = at.y();
+    const PartId id = p.id;
+    m_doc.undoStack().push(new AddPartsCommand(m_doc, {p}, {}, {},
+                                               tr("Place %1").arg(QString::fromStdString(p.tag))));
+    m_scene->clearSelection();
+    if (auto* item = m_scene->itemFor(id))
+        item->setSelected(true);
+    return id;
+}
+
+void MainWindow::connectTerminals(WireEnd a, WireEnd b) {
+    for (const auto& w : m_doc.drawing().wires())
+        if ((w.a == a && w.b == b) || (w.a == b && w.b == a))
+            return; // already wired
+    m_doc.undoStack().push(new ConnectCommand(m_doc, a, b));
+}
+
+void MainWindow::deleteSelection() {
+    auto parts = m_scene->selectedParts();
+    auto wires = m_scene->selectedWires();
+    if (!parts.empty() || !wires.empty())
+        m_doc.undoStack().push(new DeleteCommand(m_doc, parts, wires));
+}
+
+void MainWindow::rotateSelection() {
+    std::vector<Part> after;
+    for (auto id : m_scene->selectedParts()) {
+        Part p = *m_doc.drawing().part(id);
+        p.rotation = (p.rotation + 90) % 360;
+        after.push_back(p);
+    }
+    if (!after.empty())
+        m_doc.undoStack().push(new SetFieldsCommand(m_doc, after, tr("Rotate %1 parts").arg(after.size())));
+}
+
+QString MainWindow::applyFix(const Finding& f) {
+    if (!f.fix || f.fix->changes.empty())
+        return tr("This finding's fix is advice only: %1").arg(QString::fromStdString(f.fix ? f.fix->description : ""));
+    std::map<std::uint32_t, Part> edited;
+    for (const auto& c : f.fix->changes) {
+        const Part* p = m_doc.drawing().part(c.part);
+        if (!p)
+            return tr("part %1 no longer exists").arg(c.part.value);
+        auto it = edited.try_emplace(c.part.value, *p).first;
+        if (auto why = it->second.set(c.field, c.value))
+            return QString::fromStdString(*why);
+    }
+    std::vector<Part> after;
+    for (auto& [id, p] : edited)
+        after.push_back(p);
+    m_doc.undoStack().push(new SetFieldsCommand(m_doc, after, tr("Apply fix: %1").arg(QString::fromStdString(f.fix->description))));
+    return {};
+}
+
+void MainWindow::selectionChanged() {
+    const auto parts = m_scene->selectedParts();
+    m_inspector->showPart(parts.size() == 1 ? std::optional(parts.front()) : std::nullopt);
 }
 
 void MainWindow::refreshStatus() {
     const auto& c = m_doc.report().openCounts;
     m_counts->setText(tr("%1 violations · %2 cautions · %3 notes").arg(c[2]).arg(c[1]).arg(c[0]));
+}
+
+void MainWindow::refreshTitle() {
+    const QString name = m_doc.filePath().isEmpty() ? tr("Untitled") : QFileInfo(m_doc.filePath()).fileName();
+    setWindowTitle(name + (m_doc.isModified() ? " *" : "") + " — " + tr("Lineward"));
 }
 
 void MainWindow::locate(PartId id) {
@@ -113,12 +220,86 @@ void MainWindow::locate(PartId id) {
     }
 }
 
-void MainWindow::zoomBy(qreal factor) { m_view->scale(factor, factor); }
-
 void MainWindow::showAbout() {
     QMessageBox::about(this, tr("About Lineward"),
                        tr("<b>Lineward</b> — one-line diagrams with live protection checks.<p>") +
                            QString::fromUtf8(kSafetyCaution));
+}
+
+void MainWindow::editTitleBlock() {
+    TitleBlockDialog dialog(m_doc.drawing().sheet, this);
+    if (dialog.exec() == QDialog::Accepted)
+        dialog.apply(m_doc);
+}
+
+bool MainWindow::maybeSave() {
+    if (!m_doc.isModified())
+        return true;
+    const auto answer = QMessageBox::question(this, tr("Unsaved changes"),
+                                              tr("The drawing has unsaved changes. Save them?"),
+                                              QMessageBox::Save | QMessageBox::Discard | QMessageBox::Cancel);
+    if (answer == QMessageBox::Cancel)
+        return false;
+    if (answer == QMessageBox::Discard)
+        return true;
+    QString path = m_doc.filePath();
+    if (path.isEmpty())
+        path = QFileDialog::getSaveFileName(this, tr("Save drawing"), {}, tr("Lineward drawings (*.lineward)"));
+    if (path.isEmpty())
+        return false;
+    const QString why = saveTo(path);
+    if (!why.isEmpty())
+        QMessageBox::warning(this, tr("Save failed"), why);
+    return why.isEmpty();
+}
+
+void MainWindow::closeEvent(QCloseEvent* e) {
+    if (!maybeSave()) {
+        e->ignore();
+        return;
+    }
+    QSettings settings;
+    settings.setValue("window/geometry", saveGeometry());
+    settings.setValue("window/state", saveState());
+    e->accept();
+}
+
+void MainWindow::dragEnterEvent(QDragEnterEvent* e) {
+    if (e->mimeData()->hasUrls())
+        e->acceptProposedAction();
+}
+
+void MainWindow::dropEvent(QDropEvent* e) {
+    for (const auto& url : e->mimeData()->urls())
+        if (url.isLocalFile() && maybeSave()) {
+            openFile(url.toLocalFile());
+            break;
+        }
+}
+
+void MainWindow::addRecent(const QString& path) {
+    QSettings settings;
+    QStringList recent = settings.value("recentFiles").toStringList();
+    recent.removeAll(QFileInfo(path).absoluteFilePath());
+    recent.prepend(QFileInfo(path).absoluteFilePath());
+    while (recent.size() > 8)
+        recent.removeLast();
+    settings.setValue("recentFiles", recent);
+    rebuildRecentMenu();
+}
+
+void MainWindow::rebuildRecentMenu() {
+    if (!m_recentMenu)
+        return;
+    m_recentMenu->clear();
+    for (const QString& path : QSettings().value("recentFiles").toStringList()) {
+        auto* a = m_recentMenu->addAction(path);
+        connect(a, &QAction::triggered, this, [this, path] {
+            if (maybeSave())
+                openFile(path);
+        });
+    }
+    m_recentMenu->setEnabled(!m_recentMenu->isEmpty());
 }
 
 } // namespace lineward::ui

@@ -1,43 +1,89 @@
-// The main window: Sheet in the centre, Findings dock, status counts, file and help menus.
+// The main window: Sheet in the centre; Parts, Inspector, Findings and Schedules docks; file,
+// edit, view and help menus; autosave and recent files.
 #pragma once
 
 #include "document.h"
 
 #include <QMainWindow>
 
-class QGraphicsView;
 class QLabel;
+class QTimer;
 
 namespace lineward::ui {
 
 class SheetScene;
+class SheetView;
 class FindingsPanel;
+class Inspector;
+class PartsPalette;
+class SchedulesPanel;
 
 /// One window per open drawing.
 class MainWindow : public QMainWindow {
     Q_OBJECT
 public:
     explicit MainWindow(std::shared_ptr<const Tables> tables, QWidget* parent = nullptr);
+    ~MainWindow() override;
     Document& document() { return m_doc; }
     SheetScene* scene() const { return m_scene; }
-    QGraphicsView* view() const { return m_view; }
+    SheetView* view() const { return m_view; }
     FindingsPanel* findings() const { return m_findings; }
+    Inspector* inspector() const { return m_inspector; }
 
     /// Opens a file; shows a message box on failure unless `quiet`. Returns the error text.
     QString openFile(const QString& path, bool quiet = false);
+    /// Saves to `path` (atomic); returns the error text.
+    QString saveTo(const QString& path);
+
+    // User actions, also driven by the tests.
+    PartId placePart(PartKind kind, QPointF at);
+    void connectTerminals(WireEnd a, WireEnd b);
+    void deleteSelection();
+    void rotateSelection();
+    void copySelection();
+    void paste();
+    void groupSelectionAsBucket();
+    /// Applies a finding's proposed fix as one edit; returns the refusal text, if any.
+    QString applyFix(const Finding& f);
+    /// Where autosave writes this window's recovery copy.
+    QString recoveryPath() const;
+    /// Writes the recovery copy now (the autosave timer calls this every minute).
+    void autosave();
+
+protected:
+    void closeEvent(QCloseEvent* e) override;
+    void dragEnterEvent(QDragEnterEvent* e) override;
+    void dropEvent(QDropEvent* e) override;
 
 private:
-    void buildMenus();
+    void buildActions();
+    void buildFileMenu();
+    void buildEditMenu();
+    void buildViewMenu();
     void refreshStatus();
+    void refreshTitle();
     void locate(PartId id);
     void showAbout();
-    void zoomBy(qreal factor);
+    void editTitleBlock();
+    bool maybeSave();
+    void addRecent(const QString& path);
+    void rebuildRecentMenu();
+    void selectionChanged();
 
     Document m_doc;
     SheetScene* m_scene;
-    QGraphicsView* m_view;
+    SheetView* m_view;
     FindingsPanel* m_findings;
+    Inspector* m_inspector;
+    PartsPalette* m_palette;
+    SchedulesPanel* m_schedules;
     QLabel* m_counts;
+    QMenu* m_recentMenu = nullptr;
+    QTimer* m_autosave;
+    QString m_recoveryPath;
 };
+
+/// Mime type of Lineward parts on the clipboard (our JSON file format).
+inline constexpr const char* kClipboardMime = "application/x-lineward";
 
 } // namespace lineward::ui

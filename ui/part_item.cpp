@@ -8,6 +8,8 @@
 #include <QPainter>
 #include <QStyleOptionGraphicsItem>
 
+#include <cmath>
+
 namespace lineward::ui {
 
 namespace {
@@ -25,7 +27,37 @@ PartItem::PartItem(const Part& part) : m_part(part) {
     setPos(part.x, part.y);
     setRotation(part.rotation);
     setFlag(ItemIsSelectable);
+    setFlag(ItemIsMovable);
+    setFlag(ItemSendsGeometryChanges);
     setData(0, QVariant::fromValue<quint32>(part.id.value));
+}
+
+void PartItem::setPart(const Part& part) {
+    prepareGeometryChange();
+    m_part = part;
+    setPos(part.x, part.y);
+    setRotation(part.rotation);
+    update();
+}
+
+int PartItem::terminalCount() const { return static_cast<int>(kindInfo(m_part.kind).terminals.size()); }
+
+QPainterPath PartItem::shape() const {
+    QPainterPath p;
+    if (m_part.kind == PartKind::Bus)
+        p.addRect(QRectF(m_barLeft, -6, m_barRight - m_barLeft, 12));
+    else
+        p.addRect(QRectF(-16, -22, 32, 44));
+    return p;
+}
+
+QVariant PartItem::itemChange(GraphicsItemChange change, const QVariant& value) {
+    // Snap to the 10-unit grid while dragging; the model changes only when the drag ends.
+    if (change == ItemPositionChange) {
+        const QPointF p = value.toPointF();
+        return QPointF(std::round(p.x() / 10.0) * 10.0, std::round(p.y() / 10.0) * 10.0);
+    }
+    return QGraphicsItem::itemChange(change, value);
 }
 
 void PartItem::setBarSpan(qreal left, qreal right) {

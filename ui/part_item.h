@@ -16,6 +16,10 @@ public:
     enum { Type = UserType + 1 };
     explicit PartItem(const Part& part);
     int type() const override { return Type; }
+    /// Refreshes from the model (after an edit); position and rotation included.
+    void setPart(const Part& part);
+    /// All terminals' scene positions, for hit-testing a wire drag.
+    int terminalCount() const;
 
     PartId partId() const { return m_part.id; }
     const Part& part() const { return m_part; }
@@ -28,7 +32,11 @@ public:
     std::optional<Severity> badge() const { return m_badge; }
 
     QRectF boundingRect() const override;
+    QPainterPath shape() const override;
     void paint(QPainter* p, const QStyleOptionGraphicsItem* option, QWidget* widget) override;
+
+protected:
+    QVariant itemChange(GraphicsItemChange change, const QVariant& value) override;
 
 private:
     QString ratingText() const;

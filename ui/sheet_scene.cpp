@@ -1,4 +1,4 @@
-// Sheet scene: items are owned by the scene (deleted with it or on rebuild by clear()).
+// Sheet scene: the scene owns every item; an item is deleted when its part or wire goes.
 #include "sheet_scene.h"
 
 #include "part_item.h"
@@ -6,6 +6,7 @@
 #include "wire_item.h"
 
 #include <QPainter>
+#include <QTimer>
 #include <algorithm>
 #include <cmath>
 
@@ -14,6 +15,11 @@ namespace lineward::ui {
 SheetScene::SheetScene(Document& doc, QObject* parent) : QGraphicsScene(parent), m_doc(doc) {
     connect(&doc, &Document::drawingReset, this, &SheetScene::rebuild);
     connect(&doc, &Document::reportChanged, this, &SheetScene::refreshBadges);
+    connect(&doc, &Document::partAdded, this, &SheetScene::onPartAdded);
+    connect(&doc, &Document::partRemoved, this, &SheetScene::onPartRemoved);
+    connect(&doc, &Document::partChanged, this, &SheetScene::onPartChanged);
+    connect(&doc, &Document::wireAdded, this, &SheetScene::onWireAdded);
+    connect(&doc, &Document::wireRemoved, this, &SheetScene::onWireRemoved);
     rebuild();
 }
 
@@ -22,34 +28,103 @@ PartItem* SheetScene::itemFor(PartId id) const {
     return it == m_parts.end() ? nullptr : it->second;
 }
 
+WireItem* SheetScene::wireItem(WireId id) const {
+    auto it = m_wires.find(id);
+    return it == m_wires.end() ? nullptr : it->second;
+}
+
+std::vector<PartId> SheetScene::selectedParts() const {
+    std::vector<PartId> out;
+    for (auto* gi : selectedItems())
+        if (auto* p = qgraphicsitem_cast<PartItem*>(gi))
+            out.push_back(p->partId());
+    std::sort(out.begin(), out.end());
+    return out;
+}
+
+std::vector<WireId> SheetScene::selectedWires() const {
+    std::vector<WireId> out;
+    for (auto* gi : selectedItems())
+        if (auto* w = qgraphicsitem_cast<WireItem*>(gi))
+            out.push_back(w->wireId());
+    return out;
+}
+
 void SheetScene::rebuild() {
     clear();
     m_parts.clear();
     m_wires.clear();
-    const Drawing& d = m_doc.drawing();
-    for (const auto& p : d.parts()) {
+    for (const auto& p : m_doc.drawing().parts()) {
         auto* item = new PartItem(p);
         addItem(item);
         m_parts[p.id] = item;
     }
-    for (const auto& w : d.wires()) {
+    for (const auto& w : m_doc.drawing().wires()) {
         auto* item = new WireItem(w);
         addItem(item);
-        m_wires.push_back(item);
+        m_wires[w.id] = item;
     }
     routeWires();
     refreshBadges();
-    setSceneRect(itemsBoundingRect().adjusted(-200, -200, 200, 200));
+    setSceneRect(itemsBoundingRect().adjusted(-400, -400, 400, 400));
+}
+
+void SheetScene::onPartAdded(PartId id) {
+    auto* item = new PartItem(*m_doc.drawing().part(id));
+    addItem(item);
+    m_parts[id] = item;
+    scheduleRoute();
+}
+
+void SheetScene::onPartRemoved(PartId id) {
+    if (auto* item = itemFor(id)) {
+        m_parts.erase(id);
+        delete item;
+    }
+    scheduleRoute();
+}
+
+void SheetScene::onPartChanged(PartId id) {
+    if (auto* item = itemFor(id))
+        item->setPart(*m_doc.drawing().part(id));
+    scheduleRoute();
+}
+
+void SheetScene::onWireAdded(WireId id) {
+    auto* item = new WireItem(*m_doc.drawing().wire(id));
+    addItem(item);
+    m_wires[id] = item;
+    scheduleRoute();
+}
+
+void SheetScene::onWireRemoved(WireId id) {
+    if (auto* item = wireItem(id)) {
+        m_wires.erase(id);
+        delete item;
+    }
+    scheduleRoute();
+}
+
+void SheetScene::scheduleRoute() {
+    // One command may change many parts: route once, after it.
+    if (m_routePending)
+        return;
+    m_routePending = true;
+    QTimer::singleShot(0, this, [this] {
+        m_routePending = false;
+        routeWires();
+        setSceneRect(sceneRect().united(itemsBoundingRect().adjusted(-400, -400, 400, 400)));
+    });
 }
 
 void SheetScene::routeWires() {
     // A bus bar spans every part wired to it.
     std::unordered_map<PartId, std::pair<qreal, qreal>> span;
-    for (auto* w : m_wires) {
+    for (auto& [id, w] : m_wires) {
         for (auto [bus, other] : {std::pair{w->wire().a, w->wire().b}, std::pair{w->wire().b, w->wire().a}}) {
             PartItem* bi = itemFor(bus.part);
             PartItem* oi = itemFor(other.part);
-            if (!bi || !oi || bi->part().kind != PartKind::Bus)
+            if (!bi || !oi || bi->part().kind != PartKind::Bus || oi->part().kind == PartKind::Bus)
                 continue;
             const qreal x = bi->mapFromScene(oi->terminalScenePos(other.terminal)).x();
             auto [it, fresh] = span.try_emplace(bus.part, x, x);
@@ -57,13 +132,17 @@ void SheetScene::routeWires() {
             it->second.second = std::max(it->second.second, x);
         }
     }
-    for (auto& [id, s] : span)
-        itemFor(id)->setBarSpan(s.first - 30, s.second + 30);
-    for (auto* w : m_wires) {
+    for (auto& [id, item] : m_parts)
+        if (item->part().kind == PartKind::Bus) {
+            auto it = span.find(id);
+            item->setBarSpan(it == span.end() ? -60 : it->second.first - 30, it == span.end() ? 60 : it->second.second + 30);
+        }
+    for (auto& [id, w] : m_wires) {
         PartItem* a = itemFor(w->wire().a.part);
         PartItem* b = itemFor(w->wire().b.part);
-        const QPointF pa = a->terminalScenePos(w->wire().a.terminal,
-                                               b->terminalScenePos(w->wire().b.terminal));
+        if (!a || !b)
+            continue;
+        const QPointF pa = a->terminalScenePos(w->wire().a.terminal, b->terminalScenePos(w->wire().b.terminal));
         const QPointF pb = b->terminalScenePos(w->wire().b.terminal, pa);
         w->route(pa, pb);
     }

@@ -1,4 +1,5 @@
-// The Sheet: a graphics scene with one item per part and wire, rebuilt from the Document.
+// The Sheet: a graphics scene with one item per part and wire, following the Document's change
+// events.
 #pragma once
 
 #include "document.h"
@@ -17,8 +18,13 @@ class SheetScene : public QGraphicsScene {
 public:
     explicit SheetScene(Document& doc, QObject* parent = nullptr);
     PartItem* itemFor(PartId id) const;
+    WireItem* wireItem(WireId id) const;
+    std::vector<PartId> selectedParts() const;
+    std::vector<WireId> selectedWires() const;
     /// Sheet grid pitch in scene units.
     static constexpr qreal kGrid = 10.0;
+    /// Re-routes wires between the items' current positions (also during a drag).
+    void routeWires();
 
 protected:
     void drawBackground(QPainter* painter, const QRectF& rect) override;
@@ -26,10 +32,16 @@ protected:
 private:
     void rebuild();
     void refreshBadges();
-    void routeWires();
+    void onPartAdded(PartId id);
+    void onPartRemoved(PartId id);
+    void onPartChanged(PartId id);
+    void onWireAdded(WireId id);
+    void onWireRemoved(WireId id);
     Document& m_doc;
     std::unordered_map<PartId, PartItem*> m_parts;
-    std::vector<WireItem*> m_wires;
+    std::unordered_map<WireId, WireItem*> m_wires;
+    bool m_routePending = false;
+    void scheduleRoute();
 };
 
 } // namespace lineward::ui

@@ -9,6 +9,7 @@ namespace lineward::ui {
 WireItem::WireItem(const Wire& wire) : m_wire(wire) {
     setPen(QPen(QColor(0x22, 0x2a, 0x33), 1.4));
     setZValue(-1);
+    setFlag(ItemIsSelectable);
 }
 
 void WireItem::route(QPointF a, QPointF b) {

@@ -4,6 +4,7 @@
 #include "main_window.h"
 #include "part_item.h"
 #include "sheet_scene.h"
+#include "ui_support.h"
 
 #include <QApplication>
 #include <QGraphicsView>
@@ -14,14 +15,9 @@
 using namespace lineward;
 using namespace lineward::ui;
 
+using test::sharedTables;
 namespace {
-std::shared_ptr<const Tables> sharedTables() {
-    static auto t = loadBuiltinTables();
-    return t;
-}
-QString sample(const char* name) {
-    return QString(LINEWARD_SOURCE_DIR) + "/samples/" + name;
-}
+QString sample(const char* name) { return test::samplePath(name); }
 } // namespace
 
 TEST(MainWindow, OpensSampleShowsBadgesAndFindings) {
@@ -72,9 +68,3 @@ TEST(MainWindow, BrokenFileGivesLocatedMessageAndKeepsDrawing) {
     EXPECT_EQ(w.document().drawing().parts().size(), parts);
 }
 
-int main(int argc, char** argv) {
-    qputenv("QT_QPA_PLATFORM", "offscreen");
-    QApplication app(argc, argv);
-    ::testing::InitGoogleTest(&argc, argv);
-    return RUN_ALL_TESTS();
-}

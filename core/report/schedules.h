@@ -1,0 +1,26 @@
+// Schedules: tables of motors, cables and devices with their computed values, for the editor's
+// Schedules panel, CSV export and the Submittal.
+#pragma once
+
+#include "model/drawing.h"
+#include "tables/tables.h"
+
+#include <string>
+#include <vector>
+
+namespace lineward {
+
+/// One schedule: a name, column headers and rows of text cells.
+struct Schedule {
+    std::string name; ///< "motors", "cables", "devices"
+    std::vector<std::string> headers;
+    std::vector<std::vector<std::string>> rows;
+};
+
+/// Motor, cable and device schedules of a drawing (runs the studies it needs).
+std::vector<Schedule> buildSchedules(const Drawing& d, const Tables& t);
+
+/// RFC 4180 CSV: CRLF line ends, fields quoted where they hold a comma, quote or line break.
+std::string toCsv(const Schedule& s);
+
+} // namespace lineward

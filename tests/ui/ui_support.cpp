@@ -1,0 +1,45 @@
+// ui test helpers; main() runs the tests under an offscreen QApplication.
+#include "ui_support.h"
+
+#include <QApplication>
+#include <QDir>
+#include <QStandardPaths>
+#include <fstream>
+#include <gtest/gtest.h>
+#include <sstream>
+
+namespace lineward::ui::test {
+
+std::shared_ptr<const Tables> sharedTables() {
+    static auto t = loadBuiltinTables();
+    return t;
+}
+
+QString samplePath(const char* name) { return QString(LINEWARD_SOURCE_DIR) + "/samples/" + name; }
+
+std::string fileBytes(const QString& path) {
+    std::ifstream in(path.toStdString(), std::ios::binary);
+    std::ostringstream s;
+    s << in.rdbuf();
+    return s.str();
+}
+
+QString tempDir(const char* name) {
+    const QString dir = QDir::tempPath() + "/lineward-ui-" + name;
+    QDir(dir).removeRecursively();
+    QDir().mkpath(dir);
+    return dir;
+}
+
+} // namespace lineward::ui::test
+
+int main(int argc, char** argv) {
+    qputenv("QT_QPA_PLATFORM", "offscreen");
+    qputenv("XDG_DATA_HOME", QByteArray((QDir::tempPath() + "/lineward-ui-data").toUtf8()));
+    QApplication app(argc, argv);
+    QApplication::setOrganizationName("LinewardTests");
+    QApplication::setApplicationName("LinewardTests");
+    QStandardPaths::setTestModeEnabled(true);
+    ::testing::InitGoogleTest(&argc, argv);
+    return RUN_ALL_TESTS();
+}

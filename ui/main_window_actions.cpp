@@ -1,0 +1,216 @@
+// Menus and the edit actions of the main window (clipboard, buckets), with the platform's
+// standard shortcuts.
+#include "main_window.h"
+
+#include "commands/add_parts_command.h"
+#include "commands/bucket_command.h"
+#include "findings_panel.h"
+#include "io/drawing_file.h"
+#include "sheet_scene.h"
+#include "sheet_view.h"
+#include "model/part_defaults.h"
+#include "part_item.h"
+
+#include <QDockWidget>
+#include <QStatusBar>
+#include <functional>
+#include <map>
+
+#include <QAction>
+#include <QApplication>
+#include <QClipboard>
+#include <QFileDialog>
+#include <QInputDialog>
+#include <QMenuBar>
+#include <QMessageBox>
+#include <QMimeData>
+#include <QSettings>
+
+#include <set>
+
+namespace lineward::ui {
+
+namespace {
+QAction* menuAction(QMenu* menu, const QString& text, QKeySequence key, QObject* ctx, std::function<void()> fn) {
+    auto* a = menu->addAction(text);
+    a->setShortcut(key);
+    QObject::connect(a, &QAction::triggered, ctx, std::move(fn));
+    return a;
+}
+} // namespace
+
+void MainWindow::buildActions() {
+    buildFileMenu();
+    buildEditMenu();
+    buildViewMenu();
+    auto* help = menuBar()->addMenu(tr("&Help"));
+    help->addAction(tr("&About Lineward"), this, &MainWindow::showAbout);
+}
+
+void MainWindow::buildFileMenu() {
+    auto* file = menuBar()->addMenu(tr("&File"));
+    menuAction(file, tr("&New"), QKeySequence::New, this, [this] {
+        if (maybeSave())
+            m_doc.reset(Drawing{});
+        refreshTitle();
+    });
+    menuAction(file, tr("&Open…"), QKeySequence::Open, this, [this] {
+        if (!maybeSave())
+            return;
+        const auto path = QFileDialog::getOpenFileName(this, tr("Open drawing"), {}, tr("Lineward drawings (*.lineward)"));
+        if (!path.isEmpty())
+            openFile(path);
+    });
+    m_recentMenu = file->addMenu(tr("Open &Recent"));
+    rebuildRecentMenu();
+    auto saveAs = [this] {
+        const auto path = QFileDialog::getSaveFileName(this, tr("Save drawing"), m_doc.filePath(),
+                                                       tr("Lineward drawings (*.lineward)"));
+        if (!path.isEmpty())
+            if (auto why = saveTo(path.endsWith(".lineward") ? path : path + ".lineward"); !why.isEmpty())
+                QMessageBox::warning(this, tr("Save failed"), why);
+    };
+    menuAction(file, tr("&Save"), QKeySequence::Save, this, [this, saveAs] {
+        if (m_doc.filePath().isEmpty())
+            return saveAs();
+        if (auto why = saveTo(m_doc.filePath()); !why.isEmpty())
+            QMessageBox::warning(this, tr("Save failed"), why);
+    });
+    menuAction(file, tr("Save &As…"), QKeySequence::SaveAs, this, saveAs);
+    file->addSeparator();
+    menuAction(file, tr("&Title Block…"), QKeySequence(), this, [this] { editTitleBlock(); });
+    file->addSeparator();
+    menuAction(file, tr("&Quit"), QKeySequence::Quit, this, [this] { close(); });
+}
+
+void MainWindow::buildEditMenu() {
+    auto* edit = menuBar()->addMenu(tr("&Edit"));
+    auto* undo = m_doc.undoStack().createUndoAction(this, tr("&Undo"));
+    undo->setShortcut(QKeySequence::Undo);
+    auto* redo = m_doc.undoStack().createRedoAction(this, tr("&Redo"));
+    redo->setShortcut(QKeySequence::Redo);
+    edit->addAction(undo);
+    edit->addAction(redo);
+    edit->addSeparator();
+    menuAction(edit, tr("Cu&t"), QKeySequence::Cut, this, [this] {
+        copySelection();
+        deleteSelection();
+    });
+    menuAction(edit, tr("&Copy"), QKeySequence::Copy, this, [this] { copySelection(); });
+    menuAction(edit, tr("&Paste"), QKeySequence::Paste, this, [this] { paste(); });
+    menuAction(edit, tr("&Delete"), QKeySequence::Delete, this, [this] { deleteSelection(); });
+    menuAction(edit, tr("Select &All"), QKeySequence::SelectAll, this, [this] {
+        for (auto* item : m_scene->items())
+            item->setSelected(true);
+    });
+    edit->addSeparator();
+    menuAction(edit, tr("&Rotate"), QKeySequence(tr("Ctrl+R")), this, [this] { rotateSelection(); });
+    menuAction(edit, tr("&Group as Bucket"), QKeySequence(tr("Ctrl+G")), this, [this] { groupSelectionAsBucket(); });
+    menuAction(edit, tr("Cancel Placing"), QKeySequence::Cancel, this, [this] { m_view->setPlaceKind(std::nullopt); });
+}
+
+void MainWindow::buildViewMenu() {
+    auto* view = menuBar()->addMenu(tr("&View"));
+    menuAction(view, tr("Zoom &In"), QKeySequence::ZoomIn, this, [this] { m_view->zoomBy(1.25); });
+    menuAction(view, tr("Zoom &Out"), QKeySequence::ZoomOut, this, [this] { m_view->zoomBy(0.8); });
+    menuAction(view, tr("&Fit Sheet"), QKeySequence(tr("Ctrl+0")), this, [this] {
+        m_view->fitInView(m_scene->itemsBoundingRect().adjusted(-20, -20, 20, 20), Qt::KeepAspectRatio);
+    });
+    view->addSeparator();
+    for (auto* dock : findChildren<QDockWidget*>())
+        view->addAction(dock->toggleViewAction());
+}
+
+void MainWindow::copySelection() {
+    const auto ids = m_scene->selectedParts();
+    if (ids.empty())
+        return;
+    // The clipboard holds a small drawing in our file format: the parts, the wires among them
+    // and the buckets wholly inside the selection.
+    Drawing clip;
+    std::set<std::uint32_t> in;
+    for (auto id : ids) {
+        clip.addPart(*m_doc.drawing().part(id));
+        in.insert(id.value);
+    }
+    for (const auto& w : m_doc.drawing().wires())
+        if (in.count(w.a.part.value) && in.count(w.b.part.value))
+            clip.addWire(w);
+    for (const auto& b : m_doc.drawing().buckets()) {
+        bool all = !b.parts.empty();
+        for (auto p : b.parts)
+            all = all && in.count(p.value);
+        if (all)
+            clip.addBucket(b);
+    }
+    const QByteArray text = QByteArray::fromStdString(io::serializeDrawing(clip));
+    auto* data = new QMimeData;
+    data->setData(kClipboardMime, text);
+    data->setText(QString::fromUtf8(text));
+    QApplication::clipboard()->setMimeData(data);
+}
+
+void MainWindow::paste() {
+    const QMimeData* data = QApplication::clipboard()->mimeData();
+    if (!data)
+        return;
+    const QByteArray text = data->hasFormat(kClipboardMime) ? data->data(kClipboardMime) : data->text().toUtf8();
+    auto loaded = io::parseDrawing(text.toStdString(), "clipboard");
+    if (!loaded) {
+        statusBar()->showMessage(tr("Clipboard holds no Lineward parts: %1").arg(QString::fromStdString(loaded.error->message)), 8000);
+        return;
+    }
+    // New ids and tags after the drawing's own; the copy lands 40 units down and right.
+    const Drawing& src = *loaded.drawing;
+    std::map<std::uint32_t, PartId> newId;
+    std::vector<Part> parts;
+    Drawing probe = m_doc.drawing();
+    for (const auto& p : src.parts()) {
+        Part q = p;
+        q.id = probe.nextPartId();
+        q.x += 40;
+        q.y += 40;
+        if (probe.partByTag(q.tag))
+            q.tag = nextTag(probe, q.kind);
+        newId[p.id.value] = q.id;
+        probe.addPart(q);
+        parts.push_back(q);
+    }
+    std::vector<Wire> wires;
+    WireId nextWire = m_doc.drawing().nextWireId();
+    for (const auto& w : src.wires()) {
+        wires.push_back(Wire{nextWire, {newId[w.a.part.value], w.a.terminal}, {newId[w.b.part.value], w.b.terminal}});
+        nextWire = WireId(nextWire.value + 1);
+    }
+    std::vector<Bucket> buckets;
+    BucketId nextBucket = m_doc.drawing().nextBucketId();
+    for (const auto& b : src.buckets()) {
+        Bucket nb{nextBucket, b.tag + "-copy", b.sccrKa, {}};
+        for (auto p : b.parts)
+            nb.parts.push_back(newId[p.value]);
+        buckets.push_back(nb);
+        nextBucket = BucketId(nextBucket.value + 1);
+    }
+    m_doc.undoStack().push(new AddPartsCommand(m_doc, parts, wires, buckets, tr("Paste %1 parts").arg(parts.size())));
+    m_scene->clearSelection();
+    for (const auto& p : parts)
+        if (auto* item = m_scene->itemFor(p.id))
+            item->setSelected(true);
+}
+
+void MainWindow::groupSelectionAsBucket() {
+    const auto ids = m_scene->selectedParts();
+    if (ids.empty())
+        return;
+    bool ok = false;
+    const QString tag = QInputDialog::getText(this, tr("Group as bucket"), tr("Bucket tag"), QLineEdit::Normal,
+                                              QString("B-%1").arg(m_doc.drawing().nextBucketId().value), &ok);
+    if (!ok || tag.trimmed().isEmpty())
+        return;
+    const double sccr = QInputDialog::getDouble(this, tr("Group as bucket"), tr("Short-circuit current rating (kA)"),
+                                                65, 1, 300, 1, &ok);
+    if (ok)
+        m_doc.undoStack().push(new GroupBucketCommand(m_doc, ids, tag.trimmed().toStdString(), sccr));
+}
+
+} // namespace lineward::ui

@@ -1,0 +1,46 @@
+// SchedulesPanel: rebuilt from the core's schedules after each check.
+#include "schedules_panel.h"
+
+#include "report/schedules.h"
+
+#include <QHeaderView>
+#include <QTableWidget>
+
+namespace lineward::ui {
+
+SchedulesPanel::SchedulesPanel(Document& doc, QWidget* parent) : QTabWidget(parent), m_doc(doc) {
+    setObjectName("schedules");
+    connect(&doc, &Document::reportChanged, this, &SchedulesPanel::refresh);
+    refresh();
+}
+
+void SchedulesPanel::refresh() {
+    const int current = currentIndex();
+    while (count() > 0) {
+        QWidget* w = widget(0);
+        removeTab(0);
+        delete w;
+    }
+    for (const auto& s : buildSchedules(m_doc.drawing(), m_doc.tables())) {
+        auto* table = new QTableWidget(static_cast<int>(s.rows.size()), static_cast<int>(s.headers.size()));
+        table->setObjectName(QString::fromStdString("schedule_" + s.name));
+        QStringList headers;
+        for (const auto& h : s.headers)
+            headers << QString::fromStdString(h);
+        table->setHorizontalHeaderLabels(headers);
+        for (std::size_t r = 0; r < s.rows.size(); ++r)
+            for (std::size_t c = 0; c < s.rows[r].size(); ++c)
+                table->setItem(static_cast<int>(r), static_cast<int>(c),
+                               new QTableWidgetItem(QString::fromStdString(s.rows[r][c])));
+        table->setEditTriggers(QAbstractItemView::NoEditTriggers);
+        table->resizeColumnsToContents();
+        table->verticalHeader()->hide();
+        QString name = QString::fromStdString(s.name);
+        name[0] = name[0].toUpper();
+        addTab(table, name);
+    }
+    if (current >= 0 && current < count())
+        setCurrentIndex(current);
+}
+
+} // namespace lineward::ui
