@@ -5,11 +5,44 @@
 
 #include <QApplication>
 #include <QCommandLineParser>
+#include <QDateTime>
+#include <QDir>
+#include <QFile>
+#include <QFileInfo>
 #include <QMessageBox>
+
+#include "io/drawing_file.h"
 #include <QPixmap>
 #include <QTimer>
 
 #include <spdlog/spdlog.h>
+
+namespace {
+
+// A recovery copy left by a window that did not close normally is offered once.
+void offerRecovery(lineward::ui::MainWindow& window) {
+    const QDir dir(QString::fromStdString((lineward::userDataDir() / "recovery").string()));
+    const auto files = dir.entryInfoList({"*.lineward"}, QDir::Files, QDir::Time);
+    for (const QFileInfo& f : files) {
+        if (f.absoluteFilePath() == QFileInfo(window.recoveryPath()).absoluteFilePath())
+            continue;
+        const auto answer = QMessageBox::question(
+            &window, QObject::tr("Recover drawing"),
+            QObject::tr("Lineward found an autosaved drawing from %1 that was not saved. Open it?")
+                .arg(f.lastModified().toString(Qt::ISODate)),
+            QMessageBox::Open | QMessageBox::Discard | QMessageBox::Ignore);
+        if (answer == QMessageBox::Open) {
+            auto loaded = lineward::io::loadDrawing(f.absoluteFilePath().toStdString());
+            if (loaded)
+                window.document().reset(std::move(*loaded.drawing));
+        }
+        if (answer != QMessageBox::Ignore)
+            QFile::remove(f.absoluteFilePath());
+        break;
+    }
+}
+
+} // namespace
 
 int main(int argc, char** argv) {
     QApplication app(argc, argv);
@@ -33,6 +66,8 @@ int main(int argc, char** argv) {
     }
     lineward::ui::MainWindow window(tables);
     window.show();
+    if (!parser.isSet(shot))
+        offerRecovery(window);
     if (!parser.positionalArguments().isEmpty())
         window.openFile(parser.positionalArguments().first(), parser.isSet(shot));
     if (parser.isSet(shot)) {

@@ -14,6 +14,7 @@
 #include "wire_item.h"
 
 #include <QApplication>
+#include <QFile>
 #include <QTest>
 #include <QTreeWidget>
 #include <gtest/gtest.h>
@@ -281,4 +282,17 @@ TEST(Editor, LargePlantIsCheckedOffTheGuiThread) {
     std::printf("edit on a 2,000-part plant returned to the event loop in %.1f ms\n", ms);
     w.document().waitForCheck();
     EXPECT_NE(findingOf(w, "branch.conductor.ampacity"), nullptr);
+}
+
+TEST(Editor, AutosaveWritesARecoveryCopyWithoutTouchingTheDocument) {
+    MainWindow w(sharedTables());
+    ASSERT_TRUE(w.openFile(test::samplePath("kestrel-mill-mcc1.lineward"), true).isEmpty());
+    w.autosave(); // nothing changed: nothing written
+    EXPECT_FALSE(QFile::exists(w.recoveryPath()));
+    w.placePart(PartKind::Load, QPointF(3000, 0));
+    w.autosave();
+    ASSERT_TRUE(QFile::exists(w.recoveryPath()));
+    EXPECT_EQ(test::fileBytes(w.recoveryPath()), bytes(w));
+    EXPECT_TRUE(w.document().isModified()); // still unsaved; the file path is unchanged
+    EXPECT_TRUE(w.document().filePath().endsWith("kestrel-mill-mcc1.lineward"));
 }

@@ -1,0 +1,11 @@
+#!/usr/bin/env bash
+# Renders the real editor window on the samples, offscreen, into docs/images/ for the user
+# guide. Run after a build: bash docs/make-screenshots.sh
+set -euo pipefail
+cd "$(dirname "$0")/.."
+bin=build/release/app/lineward
+export QT_QPA_PLATFORM=offscreen
+export XDG_DATA_HOME="$(mktemp -d)"   # a clean settings/recovery folder for the shots
+"$bin" samples/kestrel-mill-mcc1.lineward --screenshot docs/images/editor-clean-sample.png
+"$bin" samples/kestrel-mill-mcc1-review.lineward --screenshot docs/images/editor-review-sample.png
+echo "wrote docs/images/editor-clean-sample.png and docs/images/editor-review-sample.png"
