@@ -1,6 +1,7 @@
 // Part field access and the cross-field checks of each kind.
 #include "model/part.h"
 
+#include "curves/trip_curve.h"
 #include "model/conductor.h"
 
 #include <algorithm>
@@ -138,6 +139,12 @@ std::vector<std::string> validatePart(const Part& p) {
     default:
         break;
     }
+    if (auto i = fieldIndex(p.kind, "curve_points"); i && *i < p.values.size())
+        if (auto text = std::get_if<std::string>(&p.values[*i]); text && !text->empty()) {
+            std::vector<CurvePoint> pts;
+            if (auto why = parseCurvePoints(*text, pts))
+                out.push_back(*why);
+        }
     if (p.rotation % 90 != 0 || p.rotation < 0 || p.rotation >= 360)
         out.push_back("rotation must be 0, 90, 180 or 270");
     return out;

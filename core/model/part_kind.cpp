@@ -22,6 +22,9 @@ const FieldSpec kLetThrough{"let_through_a2s", "Let-through I²t at the availabl
 const FieldSpec kClearS{"clear_s", "Clearing time at high fault current", "s", FT::Number, 0, 10,
                         true, false, {}, {}, "stated by the manufacturer"};
 
+const FieldSpec kCurvePoints{"curve_points", "User curve", "", FT::Text, 0, 0, false, false, {}, {},
+                             "replaces the generic curve: amps:min_s:max_s; ... (rising currents)"};
+
 const FieldSpec kOpen{"open", "Open", "", FT::Flag, 0, 0, false, false, false, {},
                       "true where the device is open (an open tie, a spare)"};
 
@@ -51,7 +54,7 @@ const std::array<FieldSpec, 5> kBusFields{{
     {"phases", "Phases", "", FT::Integer, 1, 3, false, false, 3.0},
 }};
 
-const std::array<FieldSpec, 12> kBreakerFields{{
+const std::array<FieldSpec, 13> kBreakerFields{{
     {"trip_type", "Trip unit", "", FT::Choice, 0, 0, false, true,
      std::string("thermal_magnetic"), {"thermal_magnetic", "electronic"}},
     {"frame_a", "Frame", "A", FT::Number, 0, 6000, true, false},
@@ -65,10 +68,11 @@ const std::array<FieldSpec, 12> kBreakerFields{{
     {"st_delay_s", "Short-time delay", "s", FT::Number, 0, 1, false, false},
     kLetThrough,
     kClearS,
+    kCurvePoints,
     kOpen,
 }};
 
-const std::array<FieldSpec, 8> kInstBreakerFields{{
+const std::array<FieldSpec, 9> kInstBreakerFields{{
     {"amps", "Continuous rating", "A", FT::Number, 0, 1200, true, true},
     {"pickup_a", "Pickup setting", "A", FT::Number, 0, 20000, true, true},
     {"pickup_min_a", "Lowest adjustable pickup", "A", FT::Number, 0, 20000, true, false},
@@ -76,10 +80,11 @@ const std::array<FieldSpec, 8> kInstBreakerFields{{
     {"interrupting_ka", "Interrupting rating", "kA", FT::Number, 0, 300, true, true},
     kLetThrough,
     kClearS,
+    kCurvePoints,
     kOpen,
 }};
 
-const std::array<FieldSpec, 6> kFuseFields{{
+const std::array<FieldSpec, 7> kFuseFields{{
     {"fuse_type", "Fuse type", "", FT::Choice, 0, 0, false, true, std::string("time_delay"),
      {"time_delay", "fast"}},
     {"fuse_class", "Fuse class", "", FT::Choice, 0, 0, false, false, {},
@@ -89,6 +94,7 @@ const std::array<FieldSpec, 6> kFuseFields{{
     {"interrupting_ka", "Interrupting rating", "kA", FT::Number, 0, 300, true, true},
     kLetThrough,
     kClearS,
+    kCurvePoints,
 }};
 
 const std::array<FieldSpec, 4> kDisconnectFields{{
@@ -105,12 +111,13 @@ const std::array<FieldSpec, 3> kContactorFields{{
     kOpen,
 }};
 
-const std::array<FieldSpec, 4> kOverloadFields{{
+const std::array<FieldSpec, 5> kOverloadFields{{
     {"setting_a", "Setting", "A", FT::Number, 0, 3000, true, true},
     {"range_min_a", "Lowest setting", "A", FT::Number, 0, 3000, true, false},
     {"range_max_a", "Highest setting", "A", FT::Number, 0, 3000, true, false},
     {"trip_class", "Trip class", "", FT::Choice, 0, 0, false, true, std::string("10"),
      {"10A", "10", "20", "30"}},
+    kCurvePoints,
 }};
 
 const std::array<FieldSpec, 10> kCableFields{{

@@ -50,6 +50,7 @@ CheckReport checkDrawing(const Drawing& drawing, const Tables& tables) {
     checkFeeders(ctx, report.findings);
     checkDuty(ctx, report.findings);
     checkVoltage(ctx, report.findings);
+    checkCurves(ctx, report.findings);
     report.findings.insert(report.findings.end(), study.notes.begin(), study.notes.end());
     markAccepted(drawing, report.findings);
     std::stable_sort(report.findings.begin(), report.findings.end(),

@@ -129,6 +129,22 @@ constexpr std::array kRules{
              Severity::Caution, "dip at the motor's bus with it at locked rotor, others running ≤ start_dip_pct"},
     RuleInfo{"voltage.start.terminal", "low motor voltage while starting", "common practice (setting)",
              Severity::Caution, "terminal voltage at locked rotor ≥ start_terminal_pct of rated"},
+    RuleInfo{"curve.nuisance", "device may trip on motor start", "common practice", Severity::Caution,
+             "device minimum time > 0.1 s at the asymmetrical inrush, > acceleration time at locked-rotor "
+             "current, and no trip at running current"},
+    RuleInfo{"curve.overload.stall", "overload relay slower than the motor's stall time",
+             "IEC 60947-4-1; common practice", Severity::Caution,
+             "relay maximum time from hot at locked-rotor current < safe stall time (hot)"},
+    RuleInfo{"curve.overload.start", "overload relay may trip during acceleration",
+             "IEC 60947-4-1; common practice", Severity::Caution,
+             "relay minimum time from cold at locked-rotor current > acceleration time"},
+    RuleInfo{"curve.cable.damage", "protection slower than the cable's damage curve",
+             "NEC 2023 110.10; ICEA P-32-382", Severity::Caution,
+             "combined maximum clearing time < I²t / I² at every current from 2 × ampacity to the "
+             "instantaneous region (below the available fault)"},
+    RuleInfo{"curve.selectivity", "devices not selective", "common practice (setting)", Severity::Caution,
+             "upstream minimum time > downstream maximum time + coordination margin for every current up "
+             "to the fault available at the downstream device"},
     RuleInfo{"drawing.tag.duplicate", "duplicate tag", "common practice", Severity::Caution,
              "no two parts share a tag"},
     RuleInfo{"topology.dangling", "unconnected terminal", "common practice", Severity::Caution,

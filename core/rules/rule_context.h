@@ -43,5 +43,6 @@ void checkMotorBranches(const RuleContext& ctx, std::vector<Finding>& out);
 void checkFeeders(const RuleContext& ctx, std::vector<Finding>& out);
 void checkDuty(const RuleContext& ctx, std::vector<Finding>& out);
 void checkVoltage(const RuleContext& ctx, std::vector<Finding>& out);
+void checkCurves(const RuleContext& ctx, std::vector<Finding>& out);
 
 } // namespace lineward

@@ -58,10 +58,13 @@ Drawing makePlant(int parts, int bucketsPerLineup) {
                         {{"kva", 500.0}, {"pri_v", 13800.0}, {"sec_v", 480.0}, {"z_pct", 5.75}});
         auto main = b.add(PartKind::Breaker, "CB-M" + n, x0, 80,
                           {{"trip_type", std::string("electronic")}, {"frame_a", 600.0}, {"trip_a", 500.0},
-                           {"interrupting_ka", 65.0}, {"let_through_a2s", 5e6}});
+                           {"interrupting_ka", 65.0}, {"let_through_a2s", 5e6}, {"lt_delay_s", 24.0},
+                           {"st_pickup_x", 10.0}, {"st_delay_s", 0.4}});
         auto swbd = b.add(PartKind::Bus, "SWBD-" + n, x0, 150, {{"volts", 480.0}, {"amps", 800.0}, {"bracing_ka", 65.0}});
         auto feeder = b.add(PartKind::Breaker, "CB-F" + n, x0, 210,
-                            {{"trip_a", 500.0}, {"frame_a", 600.0}, {"interrupting_ka", 65.0}, {"let_through_a2s", 5e6}});
+                            {{"trip_type", std::string("electronic")}, {"trip_a", 500.0}, {"frame_a", 600.0},
+                             {"interrupting_ka", 65.0}, {"let_through_a2s", 5e6}, {"lt_delay_s", 10.0},
+                             {"st_pickup_x", 8.0}, {"st_delay_s", 0.2}});
         auto fc = b.add(PartKind::Cable, "C-F" + n, x0, 260,
                         {{"size", std::string("250 kcmil")}, {"sets", 2.0}, {"length_ft", 100.0}});
         auto mcc = b.add(PartKind::Bus, "MCC-" + n, x0, 320, {{"volts", 480.0}, {"amps", 600.0}, {"bracing_ka", 65.0}});

@@ -237,7 +237,8 @@ TEST(FeederRules, AnnexD8ThreeMotorFeeder) {
     const Drawing ok = annexD8Feeder(175, "1/0 AWG"); // 1/0: 150 A ≥ 124 A
     auto r = checkDrawing(ok, testTables());
     for (const auto& f : r.findings)
-        if (f.ruleId != "duty.withstand.assumed") // no let-through data entered in this example
+        // The example sizes the circuits; curves and let-through data are not part of it.
+        if (f.ruleId != "duty.withstand.assumed" && f.ruleId.rfind("curve.", 0) != 0)
             ADD_FAILURE() << f.ruleId << ": " << f.message;
 
     auto cond = findings(annexD8Feeder(175, "1 AWG"), "feeder.conductor.ampacity"); // 130 ≥ 124: ok
@@ -368,7 +369,8 @@ TEST_P(ProposalChecksClean, NoBranchFindings) {
     b.wire(c, 1, m.id, 0);
     b.bucket("B1", {dev, k, ol});
     for (const auto& f : checkDrawing(b.drawing(), testTables()).findings)
-        if (f.ruleId != "duty.withstand.assumed") // sizing does not choose let-through data
+        // Sizing does not choose let-through data or coordinate with a (here absent) feeder.
+        if (f.ruleId != "duty.withstand.assumed" && f.ruleId.rfind("curve.", 0) != 0)
             ADD_FAILURE() << f.ruleId << ": " << f.message;
 }
 INSTANTIATE_TEST_SUITE_P(

@@ -1,0 +1,77 @@
+// Path collection walks the supply tree upward; profiles come from sizing and the studies.
+#include "curves/path_curves.h"
+
+#include "sizing/motor_sizing.h"
+
+#include <cmath>
+
+namespace lineward {
+
+std::vector<PathDevice> devicesOnPath(const RuleContext& ctx, PartId id) {
+    std::vector<PathDevice> out;
+    const Part* p = ctx.drawing.part(id);
+    if (!p)
+        return out;
+    auto add = [&](const Part* q) {
+        if (auto c = TripCurve::of(*q))
+            out.push_back({q, *c});
+    };
+    NodeIndex top = ctx.net.nodeOf(id, 0);
+    if (isTwoTerminal(p->kind)) {
+        add(p);
+        top = ctx.flow.lineNode(id);
+    }
+    // Up the supply tree branch by branch, keeping every part that has a curve (overload
+    // relays included).
+    for (std::size_t guard = 0; guard < ctx.drawing.parts().size(); ++guard) {
+        auto feed = ctx.flow.feedingBranch(top);
+        if (!feed)
+            break;
+        add(ctx.drawing.part(*feed));
+        top = ctx.flow.lineNode(*feed);
+    }
+    return out;
+}
+
+std::optional<StartProfile> startProfile(const RuleContext& ctx, const Part& m) {
+    auto flc = motorFlc(m, ctx.tables, false);
+    const double running = m.number("fla").value_or(flc ? flc->amps : 0);
+    if (running <= 0)
+        return std::nullopt;
+    StartProfile s;
+    s.runningA = running;
+    auto lra = lockedRotorA(m, ctx.tables, nullptr);
+    if (!lra) {
+        lra = 6.0 * running; // common practice
+        s.lraAssumed = true;
+    }
+    s.lockedRotorA = *lra;
+    s.asymA = *lra * ctx.settings().asymmetryFactor;
+    s.accelS = m.number("accel_s").value_or(5);
+    return s;
+}
+
+std::optional<double> cableDamageI2t(const RuleContext& ctx, const Part& c) {
+    const auto size = c.word("size").value_or("");
+    const double ins = c.number("insulation_c").value_or(90), sets = c.number("sets").value_or(1);
+    const bool al = c.word("material").value_or("cu") == "al";
+    double perSet = 0;
+    if (size.ends_with(" mm2")) {
+        const double k = ins >= 90 ? (al ? 94 : 143) : (al ? 76 : 115); // IEC 60364-4-43 (from memory)
+        perSet = std::pow(k * std::stod(size), 2);
+    } else if (auto area = ctx.tables.areaCmil(size)) {
+        const double t2 = ins >= 90 ? 250 : 150, k = al ? 0.0125 : 0.0297, base = al ? 228 : 234;
+        perSet = k * std::log10((t2 + base) / (ins + base)) * *area * *area; // ICEA P-32-382
+    } else {
+        return std::nullopt;
+    }
+    return perSet * sets * sets; // the current divides among the sets
+}
+
+double availableFaultA(const RuleContext& ctx, const Part& p) {
+    const NodeIndex n = isTwoTerminal(p.kind) ? ctx.flow.lineNode(p.id) : ctx.net.nodeOf(p.id, 0);
+    const auto* f = ctx.study.faultAtNode(n);
+    return f ? f->ikKa * 1000.0 : 0.0;
+}
+
+} // namespace lineward

@@ -1,0 +1,57 @@
+// Time-current bands of protective parts: the shortest time a part may trip (minimum) and the
+// time by which it has cleared (maximum) at each current. Infinity means "does not trip".
+#pragma once
+
+#include "model/part.h"
+
+#include <limits>
+#include <optional>
+#include <string>
+#include <vector>
+
+namespace lineward {
+
+inline constexpr double kNoTrip = std::numeric_limits<double>::infinity();
+
+/// One point of a user-entered curve.
+struct CurvePoint {
+    double amps, minS, maxS;
+};
+
+/// Parses "amps:min_s:max_s; ..." (currents rising, 0 < min ≤ max); the reason when refused.
+std::optional<std::string> parseCurvePoints(const std::string& text, std::vector<CurvePoint>& out);
+
+/// A protective part's band. Built from its ratings, or from its user points when it has them.
+class TripCurve {
+public:
+    enum class Model { ThermalMagnetic, Electronic, Instantaneous, TimeDelayFuse, FastFuse, Overload, Points };
+
+    /// The band of a breaker, instantaneous-only breaker, fuse or overload relay; nothing for
+    /// other parts.
+    static std::optional<TripCurve> of(const Part& part);
+
+    double minTime(double amps) const;
+    double maxTime(double amps) const;
+    /// Hot-start maximum (overload relays: preloaded at their setting); maxTime otherwise.
+    double maxTimeHot(double amps) const;
+    /// The current below which the part never trips.
+    double pickupA() const { return m_pickupA; }
+    Model model() const { return m_model; }
+    /// Short description of the settings for legends ("CB-101 90 A TM, inst 10×").
+    const std::string& label() const { return m_label; }
+
+    /// Generic thermal-magnetic maximum at 200 % of rating (common practice; within the UL 489
+    /// calibration limits, which the tests check).
+    static double thermalTime200(double ratingA);
+
+private:
+    Model m_model = Model::Points;
+    double m_ratingA = 0;   ///< In, Ir, fuse rating or relay setting
+    double m_pickupA = 0;
+    double m_a = 0, m_b = 0, m_c = 0, m_d = 0; ///< model parameters (see trip_curve.cpp)
+    double m_stDelayS = 0.1;                    ///< electronic short-time delay
+    std::vector<CurvePoint> m_points;
+    std::string m_label;
+};
+
+} // namespace lineward
