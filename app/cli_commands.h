@@ -19,6 +19,12 @@ using TablesRef = std::shared_ptr<const Tables>;
 void addCheckCommand(CLI::App& app, const TablesRef& tables, int& exitCode);
 /// `size --hp HP | --kw KW --volts V [...]`
 void addSizeCommand(CLI::App& app, const TablesRef& tables, int& exitCode);
+/// `trip FILE --part TAG --amps A [--json]`
+void addTripCommand(CLI::App& app, int& exitCode);
+/// `curves FILE --part TAG (--svg|--png|--pdf OUT)` (needs the Qt renderer)
+void addCurvesCommand(CLI::App& app, const TablesRef& tables, int& exitCode);
+/// Creates the Qt application that painting needs, offscreen when there is no display.
+void ensureGuiApplication();
 /// `study FILE [--json]`
 void addStudyCommand(CLI::App& app, const TablesRef& tables, int& exitCode);
 

@@ -21,6 +21,10 @@ int main(int argc, char** argv) {
     lineward::cli::addCheckCommand(app, tables, exitCode);
     lineward::cli::addSizeCommand(app, tables, exitCode);
     lineward::cli::addStudyCommand(app, tables, exitCode);
+    lineward::cli::addTripCommand(app, exitCode);
+#ifdef LINEWARD_WITH_QT
+    lineward::cli::addCurvesCommand(app, tables, exitCode);
+#endif
     try {
         app.parse(argc, argv);
     } catch (const CLI::CallForHelp& e) {

@@ -7,6 +7,7 @@
 #include "commands/delete_command.h"
 #include "commands/move_parts_command.h"
 #include "commands/set_fields_command.h"
+#include "curves_panel.h"
 #include "findings_panel.h"
 #include "inspector.h"
 #include "part_item.h"
@@ -41,7 +42,8 @@ namespace lineward::ui {
 MainWindow::MainWindow(std::shared_ptr<const Tables> tables, QWidget* parent)
     : QMainWindow(parent), m_doc(std::move(tables)), m_scene(new SheetScene(m_doc, this)),
       m_view(new SheetView(m_scene)), m_findings(new FindingsPanel(m_doc)), m_inspector(new Inspector(m_doc)),
-      m_palette(new PartsPalette), m_schedules(new SchedulesPanel(m_doc)), m_counts(new QLabel),
+      m_palette(new PartsPalette), m_schedules(new SchedulesPanel(m_doc)), m_curves(new CurvesPanel(m_doc)),
+      m_counts(new QLabel),
       m_autosave(new QTimer(this)) {
     setObjectName("mainWindow");
     setAcceptDrops(true);
@@ -57,7 +59,9 @@ MainWindow::MainWindow(std::shared_ptr<const Tables> tables, QWidget* parent)
     dock(m_inspector, tr("Inspector"), "inspectorDock", Qt::RightDockWidgetArea);
     auto* f = dock(m_findings, tr("Findings"), "findingsDock", Qt::BottomDockWidgetArea);
     auto* s = dock(m_schedules, tr("Schedules"), "schedulesDock", Qt::BottomDockWidgetArea);
+    auto* c = dock(m_curves, tr("Curves"), "curvesDock", Qt::BottomDockWidgetArea);
     tabifyDockWidget(f, s);
+    tabifyDockWidget(s, c);
     f->raise();
     resizeDocks({f}, {240}, Qt::Vertical);
     m_counts->setObjectName("severityCounts");
@@ -200,6 +204,8 @@ QString MainWindow::applyFix(const Finding& f) {
 void MainWindow::selectionChanged() {
     const auto parts = m_scene->selectedParts();
     m_inspector->showPart(parts.size() == 1 ? std::optional(parts.front()) : std::nullopt);
+    if (parts.size() == 1)
+        m_curves->showPart(parts.front());
 }
 
 void MainWindow::refreshStatus() {

@@ -17,6 +17,7 @@ class FindingsPanel;
 class Inspector;
 class PartsPalette;
 class SchedulesPanel;
+class CurvesPanel;
 
 /// One window per open drawing.
 class MainWindow : public QMainWindow {
@@ -29,6 +30,7 @@ public:
     SheetView* view() const { return m_view; }
     FindingsPanel* findings() const { return m_findings; }
     Inspector* inspector() const { return m_inspector; }
+    CurvesPanel* curves() const { return m_curves; }
 
     /// Opens a file; shows a message box on failure unless `quiet`. Returns the error text.
     QString openFile(const QString& path, bool quiet = false);
@@ -77,6 +79,7 @@ private:
     Inspector* m_inspector;
     PartsPalette* m_palette;
     SchedulesPanel* m_schedules;
+    CurvesPanel* m_curves;
     QLabel* m_counts;
     QMenu* m_recentMenu = nullptr;
     QTimer* m_autosave;

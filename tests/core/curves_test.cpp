@@ -1,0 +1,167 @@
+// Device bands against the points their standards state, and selectivity on analytic cases.
+#include "curves/trip_curve.h"
+#include "rules/check.h"
+#include "test_support.h"
+
+#include <gtest/gtest.h>
+
+#include <cmath>
+
+using namespace lineward;
+using namespace lineward::test;
+
+namespace {
+Part device(PartKind k, std::initializer_list<std::pair<const char*, FieldValue>> v) {
+    Part p = Part::make(k, PartId(1), "D");
+    for (auto& [key, value] : v)
+        EXPECT_FALSE(p.set(key, value)) << key;
+    return p;
+}
+} // namespace
+
+struct ClassRow {
+    const char* cls;
+    double tpMin, tpMax, hot15MaxS;
+};
+class OverloadClass : public ::testing::TestWithParam<ClassRow> {};
+TEST_P(OverloadClass, MeetsIec60947_4_1Limits) {
+    // IEC 60947-4-1 Table 3 and Table 2 (from memory): at 7.2 × setting from cold the trip time
+    // lies in (Tp min, Tp max]; no trip at 1.05 ×; trip within 2 h at 1.2 ×; within the class
+    // limit at 1.5 × from hot.
+    const auto& r = GetParam();
+    const auto c = *TripCurve::of(device(PartKind::Overload, {{"setting_a", 10.0}, {"trip_class", std::string(r.cls)}}));
+    EXPECT_GE(c.minTime(72), r.tpMin - 1e-9);
+    EXPECT_LE(c.maxTime(72), r.tpMax + 1e-9);
+    EXPECT_TRUE(std::isinf(c.minTime(10.5)));
+    EXPECT_LE(c.maxTime(12), 7200);
+    EXPECT_LE(c.maxTimeHot(15), r.hot15MaxS + 1e-9);
+    EXPECT_LT(c.maxTimeHot(72), c.maxTime(72)); // hot trips sooner than cold
+}
+INSTANTIATE_TEST_SUITE_P(Iec60947_4_1, OverloadClass,
+                         ::testing::Values(ClassRow{"10A", 2, 10, 120}, ClassRow{"10", 4, 10, 240},
+                                           ClassRow{"20", 6, 20, 480}, ClassRow{"30", 9, 30, 720}));
+
+TEST(BreakerCurve, ThermalMagneticWithinUl489Calibration) {
+    // UL 489 calibration (from memory): trip within 1 h at 135 % (2 h above 50 A) and within
+    // 2 / 4 / 6 min at 200 % up to 30 / 50 / 100 A. The generic band is inside those limits.
+    for (double rating : {20.0, 40.0, 90.0}) {
+        const auto c = *TripCurve::of(device(PartKind::Breaker, {{"trip_a", rating}, {"interrupting_ka", 65.0}}));
+        EXPECT_LE(c.maxTime(1.35 * rating), rating <= 50 ? 3600 : 7200) << rating;
+        EXPECT_LE(c.maxTime(2 * rating), rating <= 30 ? 120 : rating <= 50 ? 240 : 360) << rating;
+        EXPECT_TRUE(std::isinf(c.minTime(1.0 * rating)));
+        EXPECT_LT(c.minTime(3 * rating), c.maxTime(3 * rating));
+    }
+}
+
+TEST(BreakerCurve, InstantaneousToleranceEdges) {
+    // Thermal-magnetic instantaneous at 10 × 100 A = 1000 A with ±20 % (common practice): may
+    // trip from 800 A, must clear within 1.5 cycles from 1200 A.
+    const auto tm = *TripCurve::of(device(PartKind::Breaker, {{"trip_a", 100.0}, {"interrupting_ka", 65.0}, {"inst_x", 10.0}}));
+    EXPECT_GT(tm.minTime(799), 0.1); // thermal region only
+    EXPECT_DOUBLE_EQ(tm.minTime(801), 0.008);
+    EXPECT_GT(tm.maxTime(1199), 0.1);
+    EXPECT_DOUBLE_EQ(tm.maxTime(1201), 0.025);
+    // Instantaneous-only breaker set at 300 A, same tolerance.
+    const auto mcp = *TripCurve::of(device(PartKind::InstBreaker, {{"amps", 50.0}, {"pickup_a", 300.0}, {"interrupting_ka", 65.0}}));
+    EXPECT_TRUE(std::isinf(mcp.minTime(239)));
+    EXPECT_DOUBLE_EQ(mcp.minTime(241), 0.008);
+    EXPECT_TRUE(std::isinf(mcp.maxTime(359)));
+    EXPECT_DOUBLE_EQ(mcp.maxTime(361), 0.025);
+}
+
+TEST(BreakerCurve, ElectronicLongShortInstantaneous) {
+    const auto c = *TripCurve::of(device(PartKind::Breaker, {{"trip_type", std::string("electronic")}, {"trip_a", 400.0},
+                                                             {"interrupting_ka", 65.0}, {"lt_delay_s", 10.0},
+                                                             {"st_pickup_x", 6.0}, {"st_delay_s", 0.3}, {"inst_x", 12.0}}));
+    // Long time: I²t through 10 s at 6 × Ir, ±20 % (common practice); at 4 × below the
+    // short-time pickup: 0.8 × 10 × 36 / 16 = 18 s.
+    EXPECT_NEAR(c.minTime(4 * 400), 18.0, 1e-9);
+    EXPECT_NEAR(c.maxTime(4 * 400), 1.2 * 10 * 36 / 16, 1e-9);
+    // Short time: flat 0.3 s from 6 × Ir ±10 %.
+    EXPECT_DOUBLE_EQ(c.minTime(2400 * 0.95), 0.3);
+    EXPECT_DOUBLE_EQ(c.maxTime(2400 * 1.15), 0.35);
+    // Instantaneous at 12 × In ±10 %.
+    EXPECT_DOUBLE_EQ(c.maxTime(4800 * 1.15), 0.05);
+}
+
+TEST(FuseCurve, TimeDelayHoldsFiveTimesForTenSeconds) {
+    // A time-delay fuse holds 500 % for at least 10 s (UL 248 time-delay classes, from memory)
+    // and opens within 1 h at 135 % and within 2 min at 200 % (30 A and less).
+    const auto td = *TripCurve::of(device(PartKind::Fuse, {{"amps", 30.0}, {"interrupting_ka", 200.0}}));
+    EXPECT_GE(td.minTime(150), 10.0 - 1e-9);
+    EXPECT_LE(td.maxTime(1.35 * 30), 3600 + 1e-6);
+    EXPECT_LE(td.maxTime(60), 120 + 1e-6);
+    EXPECT_TRUE(std::isinf(td.minTime(30)));
+    const auto fast = *TripCurve::of(device(PartKind::Fuse, {{"fuse_type", std::string("fast")}, {"amps", 30.0},
+                                                             {"interrupting_ka", 200.0}}));
+    EXPECT_LT(fast.minTime(150), 1.0); // a fast fuse does not hold 500 %
+}
+
+TEST(UserCurve, PointsReplaceTheGenericBand) {
+    const auto c = *TripCurve::of(device(PartKind::Breaker, {{"trip_a", 100.0}, {"interrupting_ka", 65.0},
+                                                             {"curve_points", std::string("150:100:300; 1000:0.01:0.02")}}));
+    EXPECT_EQ(c.model(), TripCurve::Model::Points);
+    EXPECT_TRUE(std::isinf(c.minTime(140)));
+    EXPECT_DOUBLE_EQ(c.minTime(150), 100);
+    // Log-log interpolation midway: geometric means.
+    EXPECT_NEAR(c.maxTime(std::sqrt(150.0 * 1000.0)), std::sqrt(300 * 0.02), 1e-9);
+    Part bad = Part::make(PartKind::Breaker, PartId(1), "B");
+    EXPECT_TRUE(bad.set("curve_points", std::string("150:100:300; 100:1:2")));  // falling currents
+    EXPECT_TRUE(bad.set("curve_points", std::string("150:5:1; 300:1:2")));      // min > max
+    EXPECT_TRUE(bad.set("curve_points", std::string("150;300")));
+}
+
+namespace {
+// Source → bus → upstream device → bus → downstream device → cable → load.
+Drawing pair(Part up, Part down) {
+    DrawingBuilder b;
+    auto src = b.add(PartKind::Source, "U", {{"kv", 0.48}, {"fault_ka", 40.0}, {"x_over_r", 5.0}});
+    auto bus = b.add(PartKind::Bus, "B", {{"volts", 480.0}, {"amps", 2000.0}});
+    up.id = b.drawing().nextPartId();
+    up.tag = "UP";
+    b.drawing().addPart(up);
+    auto bus2 = b.add(PartKind::Bus, "B2", {{"volts", 480.0}, {"amps", 800.0}});
+    down.id = b.drawing().nextPartId();
+    down.tag = "DOWN";
+    b.drawing().addPart(down);
+    auto c = b.add(PartKind::Cable, "C", {{"size", std::string("4/0 AWG")}, {"length_ft", 20.0}});
+    auto ld = b.add(PartKind::Load, "L", {{"kva", 50.0}, {"volts", 480.0}});
+    b.wire(src, 0, bus, 0);
+    b.wire(bus, 0, up.id, 0);
+    b.wire(up.id, 1, bus2, 0);
+    b.wire(bus2, 0, down.id, 0);
+    b.wire(down.id, 1, c, 0);
+    b.wire(c, 1, ld, 0);
+    return b.drawing();
+}
+std::vector<Finding> selectivityOf(const Drawing& d) {
+    std::vector<Finding> out;
+    for (const auto& f : checkDrawing(d, testTables()).findings)
+        if (f.ruleId == "curve.selectivity")
+            out.push_back(f);
+    return out;
+}
+} // namespace
+
+TEST(Selectivity, SeparatedBandsAreSelective) {
+    // Upstream 800 A electronic with a 0.4 s short-time delay and no instantaneous over a
+    // 100 A thermal-magnetic breaker: the downstream clears by 0.025 s wherever the upstream
+    // could start timing.
+    const Part up = device(PartKind::Breaker, {{"trip_type", std::string("electronic")}, {"trip_a", 800.0},
+                                               {"interrupting_ka", 65.0}, {"lt_delay_s", 20.0},
+                                               {"st_pickup_x", 4.0}, {"st_delay_s", 0.4}});
+    const Part down = device(PartKind::Breaker, {{"trip_a", 100.0}, {"interrupting_ka", 65.0}, {"inst_x", 10.0}});
+    EXPECT_TRUE(selectivityOf(pair(up, down)).empty());
+}
+
+TEST(Selectivity, OverlappingInstantaneousRegionsGiveTheLimitCurrent) {
+    // Two instantaneous-only breakers: downstream set 1000 A, upstream 3000 A, ±20 %. The
+    // upstream may trip from 0.8 × 3000 = 2400 A, where the downstream clears only by 0.025 s
+    // (< 0.008 s + margin fails): the pair is selective up to just under 2.4 kA (analytic).
+    const Part up = device(PartKind::InstBreaker, {{"amps", 400.0}, {"pickup_a", 3000.0}, {"interrupting_ka", 65.0}});
+    const Part down = device(PartKind::InstBreaker, {{"amps", 150.0}, {"pickup_a", 1000.0}, {"interrupting_ka", 65.0}});
+    auto f = selectivityOf(pair(up, down));
+    ASSERT_EQ(f.size(), 1u);
+    EXPECT_LT(*f[0].computed, 2.4);
+    EXPECT_GT(*f[0].computed, 2.4 * 0.9); // the scan's step is 1/40 of a log decade span
+}

@@ -1,0 +1,37 @@
+// CurvesPanel: the core builds the curve set; the shared renderer paints it.
+#include "curves_panel.h"
+
+#include "curves_plot.h"
+
+#include <QPainter>
+
+namespace lineward::ui {
+
+CurvesPanel::CurvesPanel(Document& doc, QWidget* parent) : QWidget(parent), m_doc(doc) {
+    setObjectName("curves");
+    setMinimumSize(420, 260);
+    connect(&doc, &Document::reportChanged, this, &CurvesPanel::refresh);
+    connect(&doc, &Document::drawingReset, this, [this] { showPart(std::nullopt); });
+}
+
+void CurvesPanel::showPart(std::optional<PartId> id) {
+    m_part = id;
+    refresh();
+}
+
+void CurvesPanel::refresh() {
+    m_set = m_part && m_doc.drawing().part(*m_part) ? buildCurveSet(m_doc.drawing(), m_doc.tables(), *m_part) : CurveSet{};
+    update();
+}
+
+void CurvesPanel::paintEvent(QPaintEvent*) {
+    QPainter p(this);
+    if (m_set.series.empty() && m_set.title.empty()) {
+        p.fillRect(rect(), palette().window());
+        p.drawText(rect(), Qt::AlignCenter, tr("Select a part to see the curves on its path."));
+        return;
+    }
+    paintCurves(p, rect(), m_set);
+}
+
+} // namespace lineward::ui

@@ -1,0 +1,219 @@
+// Curves plot: current on x (A, log), time on y (s, log, 0.01–1000). Colours of our own; each
+// band is a translucent fill between its minimum and maximum with the edges drawn.
+#include "curves_plot.h"
+
+#include <QFileInfo>
+#include <QImage>
+#include <QPageSize>
+#include <QPainter>
+#include <QPainterPath>
+#include <QPdfWriter>
+#include <QSvgGenerator>
+#include <cmath>
+
+namespace lineward::ui {
+
+namespace {
+
+constexpr double kTmin = 0.01, kTmax = 1000;
+const QColor kPalette[] = {QColor(0x1d, 0x6f, 0xa3), QColor(0xc0, 0x5a, 0x1b), QColor(0x3d, 0x8b, 0x4f),
+                           QColor(0x7b, 0x4f, 0x9d), QColor(0x9a, 0x7b, 0x1c), QColor(0x2a, 0x8a, 0x8a)};
+
+struct Axes {
+    QRectF r;
+    double a0, a1;
+    double x(double amps) const { return r.left() + r.width() * std::log10(amps / a0) / std::log10(a1 / a0); }
+    double y(double s) const {
+        s = std::clamp(s, kTmin, kTmax);
+        return r.bottom() - r.height() * std::log10(s / kTmin) / std::log10(kTmax / kTmin);
+    }
+};
+
+QString ampsText(double a) {
+    return a >= 1000 ? QString::number(a / 1000, 'g', 3) + " kA" : QString::number(a, 'g', 3) + " A";
+}
+
+void grid(QPainter& p, const Axes& ax) {
+    QFont f = p.font();
+    f.setPointSizeF(7);
+    p.setFont(f);
+    for (double d = ax.a0; d <= ax.a1 * 1.0001; d *= 10) {
+        for (int m = 1; m < 10 && d * m <= ax.a1 * 1.0001; ++m) {
+            p.setPen(QPen(m == 1 ? QColor(0xb8, 0xb4, 0xaa) : QColor(0xe4, 0xe1, 0xd8), m == 1 ? 0.8 : 0.4));
+            p.drawLine(QPointF(ax.x(d * m), ax.r.top()), QPointF(ax.x(d * m), ax.r.bottom()));
+        }
+        p.setPen(Qt::black);
+        p.drawText(QRectF(ax.x(d) - 30, ax.r.bottom() + 3, 60, 12), Qt::AlignHCenter, ampsText(d));
+    }
+    for (double t = kTmin; t <= kTmax * 1.0001; t *= 10) {
+        for (int m = 1; m < 10 && t * m <= kTmax * 1.0001; ++m) {
+            p.setPen(QPen(m == 1 ? QColor(0xb8, 0xb4, 0xaa) : QColor(0xe4, 0xe1, 0xd8), m == 1 ? 0.8 : 0.4));
+            p.drawLine(QPointF(ax.r.left(), ax.y(t * m)), QPointF(ax.r.right(), ax.y(t * m)));
+        }
+        p.setPen(Qt::black);
+        p.drawText(QRectF(ax.r.left() - 46, ax.y(t) - 6, 42, 12), Qt::AlignRight | Qt::AlignVCenter,
+                   QString::number(t, 'f', t < 1 ? 2 : 0) + " s");
+    }
+    p.setPen(QPen(Qt::black, 1));
+    p.setBrush(Qt::NoBrush);
+    p.drawRect(ax.r);
+}
+
+void band(QPainter& p, const Axes& ax, const PlotSeries& s, const QColor& c) {
+    // Fill where both edges are finite; draw each finite edge as a line.
+    QPainterPath fill;
+    std::vector<QPointF> upper, lower;
+    for (std::size_t i = 0; i < s.amps.size(); ++i)
+        if (std::isfinite(s.maxS[i]) && std::isfinite(s.minS[i])) {
+            upper.push_back({ax.x(s.amps[i]), ax.y(s.maxS[i])});
+            lower.push_back({ax.x(s.amps[i]), ax.y(s.minS[i])});
+        }
+    if (upper.size() > 1) {
+        fill.moveTo(upper.front());
+        for (const auto& q : upper)
+            fill.lineTo(q);
+        for (auto it = lower.rbegin(); it != lower.rend(); ++it)
+            fill.lineTo(*it);
+        fill.closeSubpath();
+        QColor f = c;
+        f.setAlpha(60);
+        p.fillPath(fill, f);
+    }
+    for (const auto* edge : {&s.minS, &s.maxS}) {
+        QPainterPath line;
+        bool on = false;
+        for (std::size_t i = 0; i < s.amps.size(); ++i) {
+            if (!std::isfinite((*edge)[i])) {
+                on = false;
+                continue;
+            }
+            const QPointF q(ax.x(s.amps[i]), ax.y((*edge)[i]));
+            if (on)
+                line.lineTo(q);
+            else
+                line.moveTo(q);
+            on = true;
+        }
+        p.strokePath(line, QPen(c, 1.3));
+    }
+}
+
+void polyline(QPainter& p, const Axes& ax, const PlotSeries& s, const QPen& pen) {
+    QPainterPath line;
+    bool on = false;
+    for (std::size_t i = 0; i < s.amps.size(); ++i) {
+        if (!std::isfinite(s.maxS[i])) {
+            on = false;
+            continue;
+        }
+        const QPointF q(ax.x(s.amps[i]), ax.y(s.maxS[i]));
+        if (on)
+            line.lineTo(q);
+        else
+            line.moveTo(q);
+        on = true;
+    }
+    p.strokePath(line, pen);
+}
+
+} // namespace
+
+void paintCurves(QPainter& p, const QRectF& area, const CurveSet& set) {
+    p.save();
+    p.setRenderHint(QPainter::Antialiasing);
+    p.fillRect(area, Qt::white);
+    const double legendW = std::min(260.0, area.width() * 0.32);
+    Axes ax{QRectF(area.left() + 56, area.top() + 28, area.width() - legendW - 76, area.height() - 56), set.minA, set.maxA};
+    QFont title = p.font();
+    title.setPointSizeF(9.5);
+    title.setBold(true);
+    p.setFont(title);
+    p.setPen(Qt::black);
+    p.drawText(QRectF(area.left() + 56, area.top() + 4, ax.r.width(), 20), Qt::AlignLeft | Qt::AlignVCenter,
+               QString::fromStdString(set.title) +
+                   (set.voltsBase > 0 ? QString("  (current at %1 V)").arg(set.voltsBase, 0, 'f', 0) : QString()));
+    grid(p, ax);
+    p.save();
+    p.setClipRect(ax.r);
+    int colour = 0;
+    for (const auto& s : set.series) {
+        if (s.kind == PlotSeries::Kind::Band)
+            band(p, ax, s, kPalette[colour++ % 6]);
+        else if (s.kind == PlotSeries::Kind::StartProfile)
+            polyline(p, ax, s, QPen(QColor(0x22, 0x22, 0x22), 1.8, Qt::DashLine));
+        else
+            polyline(p, ax, s, QPen(QColor(0xb2, 0x2d, 0x2d), 1.6, Qt::DotLine));
+    }
+    if (set.faultA > 0 && set.faultA < set.maxA) {
+        p.setPen(QPen(QColor(0xb2, 0x2d, 0x2d), 1.2, Qt::DashDotLine));
+        p.drawLine(QPointF(ax.x(set.faultA), ax.r.top()), QPointF(ax.x(set.faultA), ax.r.bottom()));
+    }
+    p.restore();
+    // Legend beside the plot: one line per series, so labels never overlap the curves.
+    QFont f = p.font();
+    f.setPointSizeF(7.5);
+    f.setBold(false);
+    p.setFont(f);
+    double y = ax.r.top();
+    const double lx = ax.r.right() + 14;
+    colour = 0;
+    auto entry = [&](const QPen& pen, const QString& text) {
+        p.setPen(pen);
+        p.drawLine(QPointF(lx, y + 7), QPointF(lx + 18, y + 7));
+        p.setPen(Qt::black);
+        const QRectF box(lx + 24, y, legendW - 30, 40);
+        QRectF used = p.boundingRect(box, Qt::TextWordWrap, text);
+        p.drawText(box, Qt::TextWordWrap, text);
+        y += std::max(16.0, used.height() + 4);
+    };
+    for (const auto& s : set.series) {
+        QPen pen = s.kind == PlotSeries::Kind::Band ? QPen(kPalette[colour++ % 6], 3)
+                   : s.kind == PlotSeries::Kind::StartProfile ? QPen(QColor(0x22, 0x22, 0x22), 1.8, Qt::DashLine)
+                                                               : QPen(QColor(0xb2, 0x2d, 0x2d), 1.6, Qt::DotLine);
+        entry(pen, QString::fromStdString(s.label));
+    }
+    if (set.faultA > 0)
+        entry(QPen(QColor(0xb2, 0x2d, 0x2d), 1.2, Qt::DashDotLine), "available fault " + ampsText(set.faultA));
+    p.restore();
+}
+
+QString saveCurves(const CurveSet& set, const QString& path) {
+    const QString ext = QFileInfo(path).suffix().toLower();
+    const QSize size(1100, 700);
+    if (ext == "png") {
+        QImage img(size, QImage::Format_ARGB32);
+        img.fill(Qt::white);
+        QPainter p(&img);
+        paintCurves(p, QRectF(QPointF(0, 0), size), set);
+        p.end();
+        return img.save(path) ? QString() : QString("cannot write %1").arg(path);
+    }
+    if (ext == "svg") {
+        QSvgGenerator gen;
+        gen.setFileName(path);
+        gen.setSize(size);
+        gen.setViewBox(QRect(QPoint(0, 0), size));
+        gen.setTitle(QString::fromStdString(set.title));
+        QPainter p;
+        if (!p.begin(&gen))
+            return QString("cannot write %1").arg(path);
+        paintCurves(p, QRectF(QPointF(0, 0), size), set);
+        return p.end() ? QString() : QString("cannot write %1").arg(path);
+    }
+    if (ext == "pdf") {
+        QPdfWriter pdf(path);
+        pdf.setPageSize(QPageSize(QPageSize::Letter));
+        pdf.setPageOrientation(QPageLayout::Landscape);
+        pdf.setResolution(96);
+        pdf.setTitle(QString::fromStdString(set.title));
+        QPainter p;
+        if (!p.begin(&pdf))
+            return QString("cannot write %1").arg(path);
+        const QRectF page(0, 0, pdf.width(), pdf.height());
+        paintCurves(p, page, set);
+        return p.end() ? QString() : QString("cannot write %1").arg(path);
+    }
+    return QString("unknown picture type '%1' (use .svg, .png or .pdf)").arg(ext);
+}
+
+} // namespace lineward::ui
