@@ -23,6 +23,8 @@ void addSizeCommand(CLI::App& app, const TablesRef& tables, int& exitCode);
 void addTripCommand(CLI::App& app, int& exitCode);
 /// `curves FILE --part TAG (--svg|--png|--pdf OUT)` (needs the Qt renderer)
 void addCurvesCommand(CLI::App& app, const TablesRef& tables, int& exitCode);
+/// `export FILE [--pdf OUT] [--svg OUT] [--csv DIR] [--paper NAME] [--portrait]`
+void addExportCommand(CLI::App& app, const TablesRef& tables, int& exitCode);
 /// Creates the Qt application that painting needs, offscreen when there is no display.
 void ensureGuiApplication();
 /// `study FILE [--json]`

@@ -3,7 +3,7 @@
 #include "curves_plot.h"
 #include "io/drawing_file.h"
 
-#include <QGuiApplication>
+#include <QApplication>
 
 #include <cstdlib>
 #include <iostream>
@@ -19,14 +19,14 @@ struct CurvesArgs {
 
 void ensureGuiApplication() {
     // Painting text needs a Qt application; without a display the offscreen platform serves.
-    if (QGuiApplication::instance())
+    if (QApplication::instance())
         return;
     if (!std::getenv("DISPLAY") && !std::getenv("WAYLAND_DISPLAY") && !std::getenv("QT_QPA_PLATFORM"))
         setenv("QT_QPA_PLATFORM", "offscreen", 1);
     static int argc = 1;
     static char name[] = "lineward-cli";
     static char* argv[] = {name, nullptr};
-    static QGuiApplication app(argc, argv);
+    static QApplication app(argc, argv); // QGraphicsScene needs the widgets application
 }
 
 void addCurvesCommand(CLI::App& app, const TablesRef& tables, int& exitCode) {

@@ -24,6 +24,7 @@ int main(int argc, char** argv) {
     lineward::cli::addTripCommand(app, exitCode);
 #ifdef LINEWARD_WITH_QT
     lineward::cli::addCurvesCommand(app, tables, exitCode);
+    lineward::cli::addExportCommand(app, tables, exitCode);
 #endif
     try {
         app.parse(argc, argv);

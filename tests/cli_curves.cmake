@@ -19,3 +19,18 @@ execute_process(COMMAND ${CLI} curves ${SAMPLES}/kestrel-mill-mcc1.lineward --pa
 if(NOT rc EQUAL 2)
   message(FATAL_ERROR "an unknown tag must exit 2, got ${rc}")
 endif()
+
+# export, headless: PDF, SVG and CSV in one call; a bad paper name exits 2.
+file(REMOVE_RECURSE ${OUT}/export)
+execute_process(COMMAND ${CLI} export ${SAMPLES}/kestrel-mill-mcc1-review.lineward --pdf ${OUT}/export/review.pdf
+                        --svg ${OUT}/export/review.svg --csv ${OUT}/export/csv --paper a3
+                RESULT_VARIABLE rc OUTPUT_VARIABLE out ERROR_VARIABLE err)
+file(MAKE_DIRECTORY ${OUT}/export)
+if(NOT rc EQUAL 0 OR NOT EXISTS ${OUT}/export/review.pdf OR NOT EXISTS ${OUT}/export/review.svg
+   OR NOT EXISTS ${OUT}/export/csv/motors.csv)
+  message(FATAL_ERROR "export failed (${rc}): ${out} ${err}")
+endif()
+execute_process(COMMAND ${CLI} export ${SAMPLES}/kestrel-mill-mcc1.lineward --pdf ${OUT}/x.pdf --paper b5 RESULT_VARIABLE rc)
+if(NOT rc EQUAL 2)
+  message(FATAL_ERROR "a bad paper must exit 2, got ${rc}")
+endif()

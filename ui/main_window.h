@@ -45,6 +45,8 @@ public:
     void copySelection();
     void paste();
     void groupSelectionAsBucket();
+    void printPreview();
+    void printSubmittal();
     /// Applies a finding's proposed fix as one edit; returns the refusal text, if any.
     QString applyFix(const Finding& f);
     /// Where autosave writes this window's recovery copy.

@@ -8,6 +8,7 @@
 #include "io/drawing_file.h"
 #include "sheet_scene.h"
 #include "sheet_view.h"
+#include "submittal.h"
 #include "model/part_defaults.h"
 #include "part_item.h"
 
@@ -19,6 +20,9 @@
 #include <QAction>
 #include <QApplication>
 #include <QClipboard>
+#include <QPrintDialog>
+#include <QPrintPreviewDialog>
+#include <QPrinter>
 #include <QFileDialog>
 #include <QInputDialog>
 #include <QMenuBar>
@@ -80,6 +84,31 @@ void MainWindow::buildFileMenu() {
     file->addSeparator();
     menuAction(file, tr("&Title Block…"), QKeySequence(), this, [this] { editTitleBlock(); });
     file->addSeparator();
+    menuAction(file, tr("Print Pre&view…"), QKeySequence(), this, [this] { printPreview(); });
+    menuAction(file, tr("&Print…"), QKeySequence::Print, this, [this] { printSubmittal(); });
+    menuAction(file, tr("Export Submittal &PDF…"), QKeySequence(), this, [this] {
+        const auto path = QFileDialog::getSaveFileName(this, tr("Export Submittal PDF"), {}, tr("PDF (*.pdf)"));
+        if (path.isEmpty())
+            return;
+        auto r = writeSubmittalPdf(path, m_doc.drawing(), m_doc.sharedTables(), SubmittalOptions{});
+        if (!r.error.isEmpty())
+            QMessageBox::warning(this, tr("Export failed"), r.error);
+        else
+            statusBar()->showMessage(tr("Wrote %1 (%2 pages)").arg(path).arg(r.pages), 8000);
+    });
+    menuAction(file, tr("Export One-line &SVG…"), QKeySequence(), this, [this] {
+        const auto path = QFileDialog::getSaveFileName(this, tr("Export one-line SVG"), {}, tr("SVG (*.svg)"));
+        if (!path.isEmpty())
+            if (auto why = writeOneLineSvg(path, m_doc.drawing(), m_doc.sharedTables()); !why.isEmpty())
+                QMessageBox::warning(this, tr("Export failed"), why);
+    });
+    menuAction(file, tr("Export Schedules &CSV…"), QKeySequence(), this, [this] {
+        const auto dir = QFileDialog::getExistingDirectory(this, tr("Folder for the schedules"));
+        if (!dir.isEmpty())
+            if (auto why = writeScheduleCsvs(dir, m_doc.drawing(), m_doc.tables()); !why.isEmpty())
+                QMessageBox::warning(this, tr("Export failed"), why);
+    });
+    file->addSeparator();
     menuAction(file, tr("&Quit"), QKeySequence::Quit, this, [this] { close(); });
 }
 
@@ -119,6 +148,35 @@ void MainWindow::buildViewMenu() {
     view->addSeparator();
     for (auto* dock : findChildren<QDockWidget*>())
         view->addAction(dock->toggleViewAction());
+}
+
+void MainWindow::printPreview() {
+    QPrinter printer(QPrinter::HighResolution);
+    printer.setPageSize(QPageSize(QPageSize::Tabloid));
+    printer.setPageOrientation(QPageLayout::Landscape);
+    QPrintPreviewDialog preview(&printer, this);
+    connect(&preview, &QPrintPreviewDialog::paintRequested, this, [this](QPrinter* p) {
+        SubmittalOptions o;
+        o.paper = p->pageLayout().pageSize();
+        o.orientation = p->pageLayout().orientation();
+        paintSubmittal(*p, m_doc.drawing(), m_doc.sharedTables(), o);
+    });
+    preview.exec();
+}
+
+void MainWindow::printSubmittal() {
+    QPrinter printer(QPrinter::HighResolution);
+    printer.setPageSize(QPageSize(QPageSize::Tabloid));
+    printer.setPageOrientation(QPageLayout::Landscape);
+    QPrintDialog dialog(&printer, this);
+    if (dialog.exec() != QDialog::Accepted)
+        return;
+    SubmittalOptions o;
+    o.paper = printer.pageLayout().pageSize();
+    o.orientation = printer.pageLayout().orientation();
+    auto r = paintSubmittal(printer, m_doc.drawing(), m_doc.sharedTables(), o);
+    if (!r.error.isEmpty())
+        QMessageBox::warning(this, tr("Print failed"), r.error);
 }
 
 void MainWindow::copySelection() {

@@ -171,6 +171,10 @@ void SheetScene::refreshBadges() {
 }
 
 void SheetScene::drawBackground(QPainter* painter, const QRectF& rect) {
+    if (m_printing) {
+        painter->fillRect(rect, Qt::white);
+        return;
+    }
     painter->fillRect(rect, QColor(0xfb, 0xfa, 0xf6));
     const qreal step = kGrid * 5;
     painter->setPen(QPen(QColor(0xe6, 0xe3, 0xda), 0));

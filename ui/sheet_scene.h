@@ -25,6 +25,8 @@ public:
     static constexpr qreal kGrid = 10.0;
     /// Re-routes wires between the items' current positions (also during a drag).
     void routeWires();
+    /// Printing: a plain white background without the grid.
+    void setPrinting(bool on) { m_printing = on; }
 
 protected:
     void drawBackground(QPainter* painter, const QRectF& rect) override;
@@ -41,6 +43,7 @@ private:
     std::unordered_map<PartId, PartItem*> m_parts;
     std::unordered_map<WireId, WireItem*> m_wires;
     bool m_routePending = false;
+    bool m_printing = false;
     void scheduleRoute();
 };
 

@@ -10,14 +10,21 @@
 namespace lineward {
 
 CurveSet buildCurveSet(const Drawing& d, const Tables& t, PartId id) {
-    CurveSet set;
-    const Part* part = d.part(id);
-    if (!part)
-        return set;
     Network net(d);
     Flow flow(net);
     const StudyResults study = runStudies(net, flow, t, d.settings);
     const RuleContext ctx{d, net, flow, t, study};
+    return buildCurveSet(ctx, id);
+}
+
+CurveSet buildCurveSet(const RuleContext& ctx, PartId id) {
+    CurveSet set;
+    const Drawing& d = ctx.drawing;
+    const Network& net = ctx.net;
+    const Flow& flow = ctx.flow;
+    const Part* part = d.part(id);
+    if (!part)
+        return set;
     set.title = "Curves: " + part->tag;
     set.faultA = availableFaultA(ctx, *part);
     auto devices = devicesOnPath(ctx, id);

@@ -27,7 +27,10 @@ struct CurveSet {
     double voltsBase = 0;         ///< currents are referred to this voltage
 };
 
+struct RuleContext;
 /// The curve set of a part's path; empty series when the part is not found or unfed.
 CurveSet buildCurveSet(const Drawing& d, const Tables& t, PartId part);
+/// The same on an existing check context (many plots of one drawing share one study).
+CurveSet buildCurveSet(const RuleContext& ctx, PartId part);
 
 } // namespace lineward

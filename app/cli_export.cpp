@@ -1,0 +1,74 @@
+// `lineward-cli export FILE [--pdf OUT] [--svg OUT] [--csv DIR] [--paper NAME] [--portrait]`
+#include "cli_commands.h"
+#include "io/drawing_file.h"
+#include "submittal.h"
+
+#include <QDir>
+#include <QFileInfo>
+
+#include <iostream>
+#include <memory>
+
+namespace lineward::cli {
+
+namespace {
+struct ExportArgs {
+    std::string file, pdf, svg, csv, paper = "tabloid";
+    bool portrait = false;
+};
+} // namespace
+
+void addExportCommand(CLI::App& app, const TablesRef& tables, int& exitCode) {
+    auto a = std::make_shared<ExportArgs>();
+    auto* cmd = app.add_subcommand("export", "Write the Submittal PDF, the one-line as SVG, and the schedules as "
+                                             "CSV, with no display. Exit 0, or 2 on a bad file or output.");
+    cmd->add_option("file", a->file, "drawing (.lineward)")->required()->check(CLI::ExistingFile);
+    cmd->add_option("--pdf", a->pdf, "Submittal PDF: one-line, findings, schedules, curve sheets");
+    cmd->add_option("--svg", a->svg, "the one-line drawing as SVG");
+    cmd->add_option("--csv", a->csv, "folder for motors.csv, cables.csv and devices.csv");
+    cmd->add_option("--paper", a->paper, "letter, legal, tabloid (default), a4 or a3")
+        ->check(CLI::IsMember({"letter", "legal", "tabloid", "a4", "a3"}));
+    cmd->add_flag("--portrait", a->portrait, "portrait pages (default landscape)");
+    cmd->callback([a, &tables, &exitCode] {
+        if (a->pdf.empty() && a->svg.empty() && a->csv.empty())
+            throw CLI::ValidationError("output", "give --pdf, --svg or --csv");
+        auto loaded = io::loadDrawing(a->file);
+        if (!loaded) {
+            std::cerr << "lineward-cli: " << loaded.error->text() << "\n";
+            exitCode = kBadInput;
+            return;
+        }
+        ensureGuiApplication();
+        // Output folders are made as needed, as a user giving a new path expects.
+        for (const auto& out : {a->pdf, a->svg})
+            if (!out.empty())
+                QDir().mkpath(QFileInfo(QString::fromStdString(out)).absolutePath());
+        const Drawing& d = *loaded.drawing;
+        exitCode = kClean;
+        auto fail = [&](const QString& why) {
+            std::cerr << "lineward-cli export: " << why.toStdString() << "\n";
+            exitCode = kBadInput;
+        };
+        if (!a->pdf.empty()) {
+            ui::SubmittalOptions o;
+            o.paper = *ui::paperByName(QString::fromStdString(a->paper));
+            o.orientation = a->portrait ? QPageLayout::Portrait : QPageLayout::Landscape;
+            auto r = ui::writeSubmittalPdf(QString::fromStdString(a->pdf), d, tables, o);
+            if (!r.error.isEmpty())
+                return fail(r.error);
+            std::cout << "wrote " << a->pdf << " (" << r.pages << " pages, " << r.oneLineSheets << " one-line sheet(s))\n";
+        }
+        if (!a->svg.empty()) {
+            if (auto why = ui::writeOneLineSvg(QString::fromStdString(a->svg), d, tables); !why.isEmpty())
+                return fail(why);
+            std::cout << "wrote " << a->svg << "\n";
+        }
+        if (!a->csv.empty()) {
+            if (auto why = ui::writeScheduleCsvs(QString::fromStdString(a->csv), d, *tables); !why.isEmpty())
+                return fail(why);
+            std::cout << "wrote motors.csv, cables.csv, devices.csv in " << a->csv << "\n";
+        }
+    });
+}
+
+} // namespace lineward::cli

@@ -1,0 +1,145 @@
+// The Submittal as a reviewer receives it: the PDF's text (read back with poppler's pdftotext)
+// holds every tag, every finding's rule and the caution; CSVs equal the study; the SVG is
+// well-formed and names every part; a large one-line tiles with match lines.
+#include "io/drawing_file.h"
+#include "plant_generator.h"
+#include "report/schedules.h"
+#include "rules/check.h"
+#include "rules/report_format.h"
+#include "studies/study.h"
+#include "topology/flow.h"
+#include "submittal.h"
+#include "ui_support.h"
+
+#include <QFile>
+#include <QProcess>
+#include <QXmlStreamReader>
+#include <gtest/gtest.h>
+
+#include <regex>
+
+using namespace lineward;
+using namespace lineward::ui;
+
+namespace {
+
+Drawing sample(const char* name) { return *io::loadDrawing(test::samplePath(name).toStdString()).drawing; }
+
+// pdftotext output with runs of white space folded to one space.
+QString pdfText(const QString& pdf) {
+    QProcess p;
+    p.start("pdftotext", {"-layout", pdf, "-"});
+    p.waitForFinished(60000);
+    return QString::fromUtf8(p.readAllStandardOutput()).simplified();
+}
+
+QString pdfInfo(const QString& pdf) {
+    QProcess p;
+    p.start("pdfinfo", {pdf});
+    p.waitForFinished(60000);
+    return QString::fromUtf8(p.readAllStandardOutput());
+}
+
+} // namespace
+
+TEST(Submittal, PdfHoldsEveryTagEveryRuleAndTheCaution) {
+    const Drawing d = sample("kestrel-mill-mcc1-review.lineward");
+    const QString pdf = test::tempDir("submittal") + "/review.pdf";
+    auto r = writeSubmittalPdf(pdf, d, test::sharedTables(), SubmittalOptions{});
+    ASSERT_TRUE(r.error.isEmpty()) << r.error.toStdString();
+    EXPECT_GE(r.pages, 5);
+    EXPECT_TRUE(pdfInfo(pdf).contains(QString("Pages: %1").arg(r.pages).simplified()) ||
+                pdfInfo(pdf).simplified().contains(QString("Pages: %1").arg(r.pages)));
+    const QString text = pdfText(pdf);
+    ASSERT_FALSE(text.isEmpty()) << "pdftotext (poppler-utils) is needed";
+    for (const auto& p : d.parts())
+        EXPECT_TRUE(text.contains(QString::fromStdString(p.tag))) << p.tag;
+    for (const auto& f : checkDrawing(d, *test::sharedTables()).findings)
+        if (f.severity != Severity::Note)
+            EXPECT_TRUE(text.contains(QString::fromStdString(f.ruleId))) << f.ruleId;
+    EXPECT_TRUE(text.contains(QString::fromUtf8(kSafetyCaution).simplified().left(80)));
+    EXPECT_TRUE(text.contains(QString("SHEET 1 OF %1").arg(r.pages)));
+    EXPECT_TRUE(text.contains("Findings summary"));
+    EXPECT_TRUE(text.contains("Schedule — motors"));
+    EXPECT_TRUE(text.contains("Curves P-101"));
+}
+
+TEST(Submittal, PaperSizesAndOrientation) {
+    const Drawing d = sample("kestrel-mill-mcc1.lineward");
+    const struct {
+        const char* name;
+        const char* size;
+    } papers[] = {{"letter", "792 x 612"}, {"legal", "1008 x 612"}, {"tabloid", "1224 x 792"},
+                  {"a4", "842 x 595"}, {"a3", "1191 x 842"}};
+    for (const auto& paper : papers) {
+        SubmittalOptions o;
+        o.paper = *paperByName(paper.name);
+        o.curveParts = std::vector<PartId>{}; // keep it short
+        const QString pdf = test::tempDir("papers") + "/" + paper.name + ".pdf";
+        ASSERT_TRUE(writeSubmittalPdf(pdf, d, test::sharedTables(), o).error.isEmpty());
+        EXPECT_TRUE(pdfInfo(pdf).contains(paper.size)) << paper.name << "\n" << pdfInfo(pdf).toStdString();
+    }
+    EXPECT_FALSE(paperByName("b5").has_value());
+}
+
+TEST(Submittal, SchedulesCsvEqualsTheStudy) {
+    const Drawing d = sample("kestrel-mill-mcc1.lineward");
+    const QString dir = test::tempDir("csv");
+    ASSERT_TRUE(writeScheduleCsvs(dir, d, *test::sharedTables()).isEmpty());
+    QFile f(dir + "/cables.csv");
+    ASSERT_TRUE(f.open(QIODevice::ReadOnly));
+    const QString csv = QString::fromUtf8(f.readAll());
+    EXPECT_TRUE(csv.startsWith("Tag,Material,Size,Sets,Length ft"));
+    EXPECT_TRUE(csv.contains("\r\n")); // RFC 4180 line ends
+    // The fault current at C-101's line end, from the study itself.
+    Network net(d);
+    Flow flow(net);
+    const auto study = runStudies(net, flow, *test::sharedTables(), d.settings);
+    const auto* fault = study.faultAtNode(flow.lineNode(d.partByTag("C-101")->id));
+    ASSERT_NE(fault, nullptr);
+    QString row;
+    for (const auto& line : csv.split("\r\n"))
+        if (line.startsWith("C-101,"))
+            row = line;
+    ASSERT_FALSE(row.isEmpty());
+    EXPECT_DOUBLE_EQ(row.split(',').last().toDouble(), std::round(fault->ikKa * 100) / 100);
+    // Quoting: a field with a comma is quoted and its quotes doubled.
+    Schedule s{"t", {"a", "b"}, {{"x,y", "say \"hi\""}}};
+    EXPECT_EQ(toCsv(s), "a,b\r\n\"x,y\",\"say \"\"hi\"\"\"\r\n");
+}
+
+TEST(Submittal, SvgIsWellFormedAndNamesEveryPart) {
+    const Drawing d = sample("kestrel-mill-mcc1.lineward");
+    const QString svg = test::tempDir("svg") + "/one-line.svg";
+    ASSERT_TRUE(writeOneLineSvg(svg, d, test::sharedTables()).isEmpty());
+    QFile f(svg);
+    ASSERT_TRUE(f.open(QIODevice::ReadOnly));
+    const QByteArray bytes = f.readAll();
+    QXmlStreamReader xml(bytes);
+    QString text;
+    while (!xml.atEnd()) {
+        xml.readNext();
+        if (xml.isCharacters())
+            text += xml.text().toString() + " ";
+    }
+    EXPECT_FALSE(xml.hasError()) << xml.errorString().toStdString();
+    for (const auto& p : d.parts())
+        EXPECT_TRUE(text.contains(QString::fromStdString(p.tag))) << p.tag;
+}
+
+TEST(Submittal, LargeOneLineTilesWithMatchLines) {
+    const Drawing d = bench::makePlant(600);
+    SubmittalOptions o;
+    o.paper = QPageSize(QPageSize::Letter);
+    o.curveParts = std::vector<PartId>{};
+    const QString pdf = test::tempDir("tiles") + "/plant.pdf";
+    auto r = writeSubmittalPdf(pdf, d, test::sharedTables(), o);
+    ASSERT_TRUE(r.error.isEmpty());
+    EXPECT_GT(r.oneLineSheets, 1);
+    EXPECT_TRUE(pdfText(pdf).contains("MATCH LINE — SEE SHEET 2"));
+    // The sample fits one tabloid sheet: no match lines.
+    const QString one = test::tempDir("tiles") + "/sample.pdf";
+    auto s = writeSubmittalPdf(one, sample("kestrel-mill-mcc1.lineward"), test::sharedTables(), SubmittalOptions{});
+    EXPECT_EQ(s.oneLineSheets, 1);
+    EXPECT_FALSE(pdfText(one).contains("MATCH LINE"));
+}

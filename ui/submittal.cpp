@@ -1,0 +1,369 @@
+// Submittal layout of our own: a thin frame, a title block strip along the bottom of every
+// page (project, title, drawing number, sheet n of m, revisions, drawn/checked, date, caution),
+// the one-line scaled or tiled with match lines, then text pages and curve sheets.
+#include "submittal.h"
+
+#include "curves/curve_set.h"
+#include "curves/path_curves.h"
+#include "curves_plot.h"
+#include "document.h"
+#include "report/schedules.h"
+#include "rules/report_format.h"
+#include "sheet_scene.h"
+
+#include <QBuffer>
+#include <QDate>
+#include <QDir>
+#include <QFile>
+#include <QPainter>
+#include <QPdfWriter>
+#include <QSvgGenerator>
+#include <cmath>
+
+namespace lineward::ui {
+
+namespace {
+
+constexpr double kTitleH = 92; // title block height in device units at 72 dpi equivalents
+
+struct PageCtx {
+    QPainter& p;
+    QPagedPaintDevice& dev;
+    const Drawing& d;
+    int pageNo = 0;
+    int pageCount = 0;
+    QString date;
+    QRectF page() const { return QRectF(18, 18, dev.width() - 36, dev.height() - 36); }
+    QRectF body() const { QRectF r = page(); r.setBottom(r.bottom() - kTitleH - 6); return r.adjusted(8, 8, -8, -8); }
+};
+
+QString qs(const std::string& s) { return QString::fromStdString(s); }
+
+void titleBlock(PageCtx& c, const QString& sheetTitle) {
+    QPainter& p = c.p;
+    const QRectF pg = c.page();
+    p.setPen(QPen(Qt::black, 1.2));
+    p.setBrush(Qt::NoBrush);
+    p.drawRect(pg);
+    const QRectF tb(pg.left(), pg.bottom() - kTitleH, pg.width(), kTitleH);
+    p.drawLine(tb.topLeft(), tb.topRight());
+    // Columns: caution | project & title | revisions | number, sheet, people, date
+    const double w = tb.width();
+    const double x1 = tb.left() + w * 0.30, x2 = tb.left() + w * 0.58, x3 = tb.left() + w * 0.78;
+    for (double x : {x1, x2, x3})
+        p.drawLine(QPointF(x, tb.top()), QPointF(x, tb.bottom()));
+    QFont small = p.font();
+    small.setPointSizeF(6.5);
+    QFont big = small;
+    big.setPointSizeF(10);
+    big.setBold(true);
+    p.setFont(small);
+    p.drawText(QRectF(tb.left() + 4, tb.top() + 3, x1 - tb.left() - 8, kTitleH - 6), Qt::TextWordWrap,
+               QString("CAUTION — ") + QString::fromUtf8(kSafetyCaution));
+    p.drawText(QRectF(x1 + 4, tb.top() + 3, x2 - x1 - 8, 12), "PROJECT");
+    p.setFont(big);
+    p.drawText(QRectF(x1 + 4, tb.top() + 14, x2 - x1 - 8, 20), Qt::TextWordWrap, qs(c.d.sheet.project));
+    p.setFont(small);
+    p.drawText(QRectF(x1 + 4, tb.top() + 40, x2 - x1 - 8, 12), "TITLE");
+    p.setFont(big);
+    p.drawText(QRectF(x1 + 4, tb.top() + 51, x2 - x1 - 8, 36), Qt::TextWordWrap,
+               qs(c.d.sheet.title) + (sheetTitle.isEmpty() ? "" : " — " + sheetTitle));
+    p.setFont(small);
+    QString revs = "REV   DATE         BY            NOTE\n";
+    for (const auto& r : c.d.sheet.revisions)
+        revs += qs(r.rev).leftJustified(6) + qs(r.date).leftJustified(13) + qs(r.by).leftJustified(14) + qs(r.note) + "\n";
+    p.drawText(QRectF(x2 + 4, tb.top() + 3, x3 - x2 - 8, kTitleH - 6), Qt::TextWordWrap, revs);
+    p.drawText(QRectF(x3 + 4, tb.top() + 3, tb.right() - x3 - 8, kTitleH - 6), Qt::TextWordWrap,
+               QString("DRAWING %1\nSHEET %2 OF %3\nDRAWN %4\nCHECKED %5\nDATE %6\nRULE SET %7\nLineward")
+                   .arg(qs(c.d.sheet.drawingNo), QString::number(c.pageNo), QString::number(c.pageCount),
+                        qs(c.d.sheet.drawnBy), qs(c.d.sheet.checkedBy), c.date, qs(c.d.sheet.ruleSet)));
+}
+
+bool nextPage(PageCtx& c) {
+    if (c.pageNo > 0 && !c.dev.newPage())
+        return false;
+    ++c.pageNo;
+    return true;
+}
+
+// Rows of text laid out over as many pages as they need.
+void textPages(PageCtx& c, const QString& title, const std::vector<QStringList>& rows, const std::vector<double>& widths) {
+    QFont f = c.p.font();
+    f.setPointSizeF(8);
+    std::size_t i = 0;
+    do {
+        nextPage(c);
+        titleBlock(c, title);
+        QRectF b = c.body();
+        c.p.setFont(f);
+        double y = b.top();
+        QFont head = f;
+        head.setBold(true);
+        head.setPointSizeF(10);
+        c.p.setFont(head);
+        c.p.drawText(QRectF(b.left(), y, b.width(), 16), title);
+        y += 20;
+        c.p.setFont(f);
+        for (; i < rows.size() && y + 24 < b.bottom(); ++i) {
+            double x = b.left();
+            const bool header = rows[i].value(0).startsWith(QChar(1));
+            QFont rf = f;
+            rf.setBold(header);
+            c.p.setFont(rf);
+            double h = 12;
+            for (int k = 0; k < rows[i].size() && k < static_cast<int>(widths.size()); ++k) {
+                QString cell = rows[i][k];
+                if (k == 0 && header)
+                    cell.remove(0, 1);
+                const QRectF cellR(x, y, widths[static_cast<std::size_t>(k)] * b.width() - 4, 60);
+                const QRectF used = c.p.boundingRect(cellR, Qt::TextWordWrap, cell);
+                c.p.drawText(cellR, Qt::TextWordWrap, cell);
+                h = std::max(h, used.height() + 1);
+                x += widths[static_cast<std::size_t>(k)] * b.width();
+            }
+            y += h;
+        }
+    } while (i < rows.size());
+}
+
+// The one-line scaled to the page, or tiled over several pages with match lines where fitting
+// it would shrink it below the readable scale.
+void paintOneLine(PageCtx& c, SheetScene& scene, int& sheets, const SubmittalOptions& o) {
+    const QRectF src = scene.itemsBoundingRect().adjusted(-30, -30, 30, 30);
+    nextPage(c);
+    const QRectF body = c.body();
+    const double fit = std::min(body.width() / src.width(), body.height() / src.height());
+    if (fit >= o.minScale) {
+        const QSizeF size = src.size() * std::min(fit, 1.6);
+        const QRectF target(body.center() - QPointF(size.width() / 2, size.height() / 2), size);
+        titleBlock(c, "One-line");
+        scene.render(&c.p, target, src);
+        sheets = 1;
+        return;
+    }
+    const QSizeF tile = body.size() / o.minScale;
+    const int cols = static_cast<int>(std::ceil(src.width() / tile.width()));
+    const int rows = static_cast<int>(std::ceil(src.height() / tile.height()));
+    const int first = c.pageNo;
+    for (int r = 0; r < rows; ++r)
+        for (int k = 0; k < cols; ++k) {
+            if (r || k)
+                nextPage(c);
+            titleBlock(c, QString("One-line, part %1 of %2").arg(r * cols + k + 1).arg(rows * cols));
+            const QRectF part(src.left() + k * tile.width(), src.top() + r * tile.height(), tile.width(), tile.height());
+            c.p.save();
+            c.p.setClipRect(body);
+            scene.render(&c.p, body, part, Qt::KeepAspectRatio);
+            c.p.restore();
+            QPen match(Qt::black, 2.2, Qt::DashLine);
+            QFont f = c.p.font();
+            f.setPointSizeF(7.5);
+            f.setBold(true);
+            c.p.setFont(f);
+            auto edge = [&](QLineF line, int toSheet, bool vertical) {
+                c.p.setPen(match);
+                c.p.drawLine(line);
+                c.p.setPen(Qt::black);
+                const QString text = QString("MATCH LINE — SEE SHEET %1").arg(toSheet);
+                const QPointF m = line.center();
+                c.p.save();
+                c.p.translate(m);
+                if (vertical)
+                    c.p.rotate(-90);
+                c.p.drawText(QRectF(-110, -14, 220, 12), Qt::AlignCenter, text);
+                c.p.restore();
+            };
+            if (k + 1 < cols)
+                edge(QLineF(body.topRight(), body.bottomRight()), first + r * cols + k + 1, true);
+            if (k > 0)
+                edge(QLineF(body.topLeft() + QPointF(16, 0), body.bottomLeft() + QPointF(16, 0)), first + r * cols + k - 1, true);
+            if (r + 1 < rows)
+                edge(QLineF(body.bottomLeft(), body.bottomRight()), first + (r + 1) * cols + k, false);
+            if (r > 0)
+                edge(QLineF(body.topLeft() + QPointF(0, 16), body.topRight() + QPointF(0, 16)), first + (r - 1) * cols + k, false);
+        }
+    sheets = rows * cols;
+}
+
+// Rows of the findings summary (open violations and cautions) and of the accepted deviations.
+std::vector<std::vector<QStringList>> findingRows(const Drawing& d, const CheckReport& r) {
+    auto tags = [&](const Finding& f) {
+        QStringList t;
+        for (auto id : f.parts)
+            if (const Part* p = d.part(id))
+                t << qs(p->tag);
+        return t.join(", ");
+    };
+    std::vector<QStringList> open{{"\x01Severity", "Rule", "Clause", "Parts", "Computed / limit", "Finding"}};
+    std::vector<QStringList> accepted{{"\x01Rule", "Parts", "By", "Date", "Note"}};
+    for (const auto& f : r.findings) {
+        auto n = [](double v) {
+            return QString::number(v, 'f', std::abs(v) < 10 ? 2 : std::abs(v) < 1000 ? 1 : 0);
+        };
+        const QString vs = f.computed && f.limit ? n(*f.computed) + " / " + n(*f.limit) + " " + qs(f.unit) : QString();
+        if (f.accepted) {
+            for (const auto& a : d.accepted())
+                if (a.rule == f.ruleId && !f.parts.empty() &&
+                    std::find(a.parts.begin(), a.parts.end(), f.parts.front()) != a.parts.end())
+                    accepted.push_back({qs(f.ruleId), tags(f), qs(a.by), qs(a.date), qs(a.note)});
+        } else if (f.severity != Severity::Note) {
+            open.push_back({qs(std::string(severityName(f.severity))), qs(f.ruleId), qs(f.clause), tags(f), vs, qs(f.message)});
+        }
+    }
+    if (open.size() == 1)
+        open.push_back({"", "", "", "", "", "No open violations or cautions."});
+    if (accepted.size() == 1)
+        accepted.clear();
+    return {open, accepted};
+}
+
+} // namespace
+
+std::optional<QPageSize> paperByName(const QString& name) {
+    const QString n = name.toLower();
+    if (n == "letter")
+        return QPageSize(QPageSize::Letter);
+    if (n == "legal")
+        return QPageSize(QPageSize::Legal);
+    if (n == "tabloid")
+        return QPageSize(QPageSize::Tabloid);
+    if (n == "a4")
+        return QPageSize(QPageSize::A4);
+    if (n == "a3")
+        return QPageSize(QPageSize::A3);
+    return std::nullopt;
+}
+
+namespace {
+
+struct SubmittalData {
+    const Drawing& d;
+    const RuleContext& ctx;
+    SheetScene& scene;
+    std::vector<PartId> curveParts;
+    std::vector<std::vector<QStringList>> findings;
+    std::vector<Schedule> schedules;
+};
+
+// Lays out and paints every page; returns the page count (and one-line sheet count).
+int paintPages(QPagedPaintDevice& dev, const SubmittalData& s, const SubmittalOptions& o, const QString& date,
+               int pageCount, int& oneLineSheets, QString& error) {
+    QPainter painter;
+    if (!painter.begin(&dev)) {
+        error = "cannot start painting on the output";
+        return 0;
+    }
+    PageCtx c{painter, dev, s.d, 0, pageCount, date};
+    paintOneLine(c, s.scene, oneLineSheets, o);
+    textPages(c, "Findings summary", s.findings[0], {0.09, 0.17, 0.15, 0.11, 0.12, 0.36});
+    if (!s.findings[1].empty())
+        textPages(c, "Accepted deviations", s.findings[1], {0.16, 0.16, 0.12, 0.10, 0.46});
+    for (const auto& sch : s.schedules) {
+        std::vector<QStringList> rows;
+        QStringList head;
+        for (const auto& h : sch.headers)
+            head << qs(h);
+        head[0].prepend("\x01");
+        rows.push_back(head);
+        for (const auto& r : sch.rows) {
+            QStringList row;
+            for (const auto& cell : r)
+                row << qs(cell);
+            rows.push_back(row);
+        }
+        textPages(c, "Schedule — " + qs(sch.name), rows,
+                  std::vector<double>(sch.headers.size(), 1.0 / static_cast<double>(sch.headers.size())));
+    }
+    for (auto id : s.curveParts) {
+        nextPage(c);
+        titleBlock(c, "Curves " + qs(s.d.part(id)->tag));
+        paintCurves(painter, c.body(), buildCurveSet(s.ctx, id));
+    }
+    painter.end();
+    return c.pageNo;
+}
+
+} // namespace
+
+SubmittalResult paintSubmittal(QPagedPaintDevice& dev, const Drawing& d, std::shared_ptr<const Tables> tables,
+                               const SubmittalOptions& o) {
+    SubmittalResult res;
+    Document doc(tables);
+    doc.reset(d);
+    doc.waitForCheck();
+    SheetScene scene(doc);
+    scene.setPrinting(true);
+    scene.routeWires();
+    Network net(d);
+    Flow flow(net);
+    const StudyResults study = runStudies(net, flow, *tables, d.settings);
+    const RuleContext ctx{d, net, flow, *tables, study};
+    SubmittalData data{d, ctx, scene, {}, findingRows(d, doc.report()), buildSchedules(d, *tables)};
+    if (o.curveParts)
+        data.curveParts = *o.curveParts;
+    else
+        for (const auto& b : motorBranches(ctx))
+            data.curveParts.push_back(b.motor->id);
+    const QString date = o.date.isEmpty() ? QDate::currentDate().toString(Qt::ISODate) : o.date;
+    // "Sheet n of m" needs m first: lay the pages out once on a scratch PDF of the same size.
+    QBuffer scratch;
+    scratch.open(QIODevice::WriteOnly);
+    QPdfWriter counter(&scratch);
+    counter.setPageLayout(dev.pageLayout());
+    counter.setResolution(dev.logicalDpiX());
+    int sheets = 0;
+    const int pages = paintPages(counter, data, o, date, 0, sheets, res.error);
+    if (!res.error.isEmpty())
+        return res;
+    res.pages = paintPages(dev, data, o, date, pages, res.oneLineSheets, res.error);
+    return res;
+}
+
+SubmittalResult writeSubmittalPdf(const QString& path, const Drawing& d, std::shared_ptr<const Tables> tables,
+                                  const SubmittalOptions& o) {
+    QPdfWriter pdf(path);
+    pdf.setPageLayout(QPageLayout(o.paper, o.orientation, QMarginsF(0, 0, 0, 0)));
+    pdf.setResolution(72);
+    pdf.setTitle(qs(d.sheet.title));
+    pdf.setCreator("Lineward");
+    auto r = paintSubmittal(pdf, d, std::move(tables), o);
+    if (r.error.isEmpty() && !QFile::exists(path))
+        r.error = "cannot write " + path;
+    return r;
+}
+
+QString writeOneLineSvg(const QString& path, const Drawing& d, std::shared_ptr<const Tables> tables) {
+    Document doc(std::move(tables));
+    doc.reset(d);
+    doc.waitForCheck();
+    SheetScene scene(doc);
+    scene.setPrinting(true);
+    scene.routeWires();
+    const QRectF src = scene.itemsBoundingRect().adjusted(-20, -20, 20, 20);
+    QSvgGenerator gen;
+    gen.setFileName(path);
+    gen.setSize(src.size().toSize());
+    gen.setViewBox(QRectF(QPointF(0, 0), src.size()));
+    gen.setTitle(qs(d.sheet.title));
+    gen.setDescription(QString::fromUtf8(kSafetyCaution));
+    QPainter p;
+    if (!p.begin(&gen))
+        return "cannot write " + path;
+    scene.render(&p, QRectF(QPointF(0, 0), src.size()), src);
+    return p.end() ? QString() : "cannot write " + path;
+}
+
+QString writeScheduleCsvs(const QString& dir, const Drawing& d, const Tables& tables) {
+    if (!QDir().mkpath(dir))
+        return "cannot make folder " + dir;
+    for (const auto& s : buildSchedules(d, tables)) {
+        QFile f(dir + "/" + qs(s.name) + ".csv");
+        if (!f.open(QIODevice::WriteOnly | QIODevice::Truncate))
+            return "cannot write " + f.fileName();
+        const std::string text = toCsv(s);
+        f.write(text.data(), static_cast<qint64>(text.size()));
+    }
+    return {};
+}
+
+} // namespace lineward::ui

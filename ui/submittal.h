@@ -1,0 +1,48 @@
+// The Submittal: one-line sheet(s) with our title block, findings summary, schedules and curve
+// sheets, painted onto any paged device (PDF writer or printer); plus SVG and CSV exports.
+#pragma once
+
+#include "model/drawing.h"
+#include "tables/tables.h"
+
+#include <QPageLayout>
+#include <QPageSize>
+#include <QString>
+#include <memory>
+#include <optional>
+#include <vector>
+
+class QPagedPaintDevice;
+
+namespace lineward::ui {
+
+struct SubmittalOptions {
+    QPageSize paper = QPageSize(QPageSize::Tabloid);
+    QPageLayout::Orientation orientation = QPageLayout::Landscape;
+    /// Curve sheets for these parts; nothing: one per motor branch.
+    std::optional<std::vector<PartId>> curveParts;
+    /// The one-line is tiled when fitting it on one page would shrink it below this scale.
+    double minScale = 0.45;
+    QString date; ///< printed in the title block; empty: today
+};
+
+/// Paper by name ("letter", "legal", "tabloid", "a4", "a3"); nothing for other names.
+std::optional<QPageSize> paperByName(const QString& name);
+
+/// Paints the whole Submittal; returns the number of pages, or the reason it failed.
+struct SubmittalResult {
+    int pages = 0;
+    int oneLineSheets = 0;
+    QString error;
+};
+SubmittalResult paintSubmittal(QPagedPaintDevice& device, const Drawing& d, std::shared_ptr<const Tables> tables,
+                               const SubmittalOptions& o);
+/// paintSubmittal into a PDF file (vector, selectable text).
+SubmittalResult writeSubmittalPdf(const QString& path, const Drawing& d, std::shared_ptr<const Tables> tables,
+                                  const SubmittalOptions& o);
+/// The one-line drawing as SVG; the reason on failure.
+QString writeOneLineSvg(const QString& path, const Drawing& d, std::shared_ptr<const Tables> tables);
+/// motors.csv, cables.csv, devices.csv (RFC 4180) into a folder; the reason on failure.
+QString writeScheduleCsvs(const QString& dir, const Drawing& d, const Tables& tables);
+
+} // namespace lineward::ui
