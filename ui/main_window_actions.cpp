@@ -58,6 +58,13 @@ void MainWindow::buildFileMenu() {
             m_doc.reset(Drawing{});
         refreshTitle();
     });
+    menuAction(file, tr("New &Window"), QKeySequence(tr("Ctrl+Shift+N")), this, [this] {
+        // A second window on its own drawing; copy and paste between windows go through the
+        // clipboard. The window deletes itself when closed.
+        auto* w = new MainWindow(m_doc.sharedTables());
+        w->setAttribute(Qt::WA_DeleteOnClose);
+        w->show();
+    });
     menuAction(file, tr("&Open…"), QKeySequence::Open, this, [this] {
         if (!maybeSave())
             return;

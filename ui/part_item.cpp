@@ -1,18 +1,40 @@
-// Symbols of our own, drawn in the IEEE 315 / IEC 60617 conventions: circles for sources and
-// machines, two circles for a transformer, a heavy bar for a bus, a square for a breaker,
-// a rectangle for a fuse, a hook for a thermal overload.
+// Symbols of our own in the IEEE 315 / IEC 60617 conventions, drawn from resources/symbols/*.svg:
+// circles for sources and machines, two circles for a transformer, a heavy bar for a bus, a
+// square for a breaker, a rectangle for a fuse, a heater loop for a thermal overload.
 #include "part_item.h"
 
 #include "severity_style.h"
 
 #include <QPainter>
 #include <QStyleOptionGraphicsItem>
+#include <QSvgRenderer>
+
+#include <map>
+#include <memory>
 
 #include <cmath>
+
+// Qt resources in a static library must be registered by hand, outside any namespace.
+static void registerSymbols() { Q_INIT_RESOURCE(symbols); }
 
 namespace lineward::ui {
 
 namespace {
+
+// One parsed renderer per symbol file (resources/symbols), made on first use.
+QSvgRenderer* symbolRenderer(PartKind kind) {
+    static std::map<PartKind, std::unique_ptr<QSvgRenderer>> cache;
+    auto it = cache.find(kind);
+    if (it == cache.end()) {
+        static const bool registered = (registerSymbols(), true);
+        (void)registered;
+        const auto key = kindInfo(kind).key;
+        auto r = std::make_unique<QSvgRenderer>(":/symbols/" + QString::fromUtf8(key.data(), static_cast<int>(key.size())) + ".svg");
+        it = cache.emplace(kind, r->isValid() ? std::move(r) : nullptr).first;
+    }
+    return it->second.get();
+}
+
 constexpr qreal kHalf = 20.0; // terminals sit 20 units above and below the centre
 const QColor kInk(0x22, 0x2a, 0x33);
 const QColor kSelect(0x1d, 0x7f, 0xb8);
@@ -131,71 +153,22 @@ QString PartItem::ratingText() const {
 
 void PartItem::paintSymbol(QPainter* p) const {
     const PartKind k = m_part.kind;
-    switch (k) {
-    case PartKind::Source:
-        p->drawEllipse(QPointF(0, -2), 14, 14);
-        p->drawArc(QRectF(-8, -7, 8, 10), 0, 180 * 16);
-        p->drawArc(QRectF(0, -7, 8, 10), 180 * 16, 180 * 16);
-        p->drawLine(QPointF(0, 12), QPointF(0, kHalf));
-        break;
-    case PartKind::Transformer:
-        p->drawEllipse(QPointF(0, -7), 11, 11);
-        p->drawEllipse(QPointF(0, 7), 11, 11);
-        break;
-    case PartKind::Bus: {
+    if (k == PartKind::Bus) {
         QPen bar = p->pen();
         bar.setWidthF(6);
         p->setPen(bar);
         p->drawLine(QPointF(m_barLeft, 0), QPointF(m_barRight, 0));
-        break;
+        return;
     }
-    case PartKind::Breaker:
-    case PartKind::InstBreaker:
-        p->drawLine(QPointF(0, -kHalf), QPointF(0, -9));
-        p->drawRect(QRectF(-9, -9, 18, 18));
-        p->drawLine(QPointF(0, 9), QPointF(0, kHalf));
-        if (k == PartKind::InstBreaker)
-            p->drawText(QRectF(-9, -9, 18, 18), Qt::AlignCenter, "i");
-        if (m_part.isOpen())
-            p->drawLine(QPointF(-12, 12), QPointF(12, -12));
-        break;
-    case PartKind::Fuse:
-        p->drawLine(QPointF(0, -kHalf), QPointF(0, kHalf));
-        p->drawRect(QRectF(-5, -11, 10, 22));
-        break;
-    case PartKind::Disconnect:
-    case PartKind::Contactor:
-        p->drawLine(QPointF(0, -kHalf), QPointF(0, -8));
-        p->drawLine(QPointF(0, 8), QPointF(0, kHalf));
-        if (m_part.isOpen())
-            p->drawLine(QPointF(0, 8), QPointF(-10, -8));
-        else
-            p->drawLine(QPointF(0, 8), QPointF(-3, -8));
-        if (k == PartKind::Contactor) {
-            p->drawLine(QPointF(-8, -8), QPointF(8, -8));
-            p->drawLine(QPointF(-8, 8), QPointF(8, 8));
-        }
-        break;
-    case PartKind::Overload:
-        p->drawLine(QPointF(0, -kHalf), QPointF(0, -8));
-        p->drawArc(QRectF(-6, -8, 12, 8), 90 * 16, -180 * 16);
-        p->drawArc(QRectF(-6, 0, 12, 8), 90 * 16, 180 * 16);
-        p->drawLine(QPointF(0, 8), QPointF(0, kHalf));
-        break;
-    case PartKind::Cable:
-        p->drawLine(QPointF(0, -kHalf), QPointF(0, kHalf));
-        p->drawLine(QPointF(-6, -4), QPointF(6, 4));
-        p->drawLine(QPointF(-6, 0), QPointF(6, 8));
-        break;
-    case PartKind::Motor:
-        p->drawLine(QPointF(0, -kHalf), QPointF(0, -6));
-        p->drawEllipse(QPointF(0, 8), 14, 14);
-        p->drawText(QRectF(-14, -6, 28, 28), Qt::AlignCenter, "M");
-        break;
-    case PartKind::Load:
-        p->drawLine(QPointF(0, -kHalf), QPointF(0, -4));
-        p->drawPolygon(QPolygonF({QPointF(-10, -4), QPointF(10, -4), QPointF(0, 14)}));
-        break;
+    if (QSvgRenderer* r = symbolRenderer(k))
+        r->render(p, QRectF(-20, -20, 40, 40));
+    if (m_part.isOpen()) {
+        // An open switching device: a bold gap mark across the symbol (ours).
+        QPen pen = p->pen();
+        pen.setWidthF(2.2);
+        p->setPen(pen);
+        p->drawLine(QPointF(-12, 12), QPointF(12, -12));
+        p->drawText(QRectF(-30, 12, 26, 10), Qt::AlignRight, "open");
     }
 }
 

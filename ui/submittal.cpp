@@ -17,6 +17,7 @@
 #include <QFile>
 #include <QPainter>
 #include <QPdfWriter>
+#include <QPrinter>
 #include <QSvgGenerator>
 #include <cmath>
 
@@ -288,6 +289,14 @@ int paintPages(QPagedPaintDevice& dev, const SubmittalData& s, const SubmittalOp
 SubmittalResult paintSubmittal(QPagedPaintDevice& dev, const Drawing& d, std::shared_ptr<const Tables> tables,
                                const SubmittalOptions& o) {
     SubmittalResult res;
+    // The layout is in points (72 per inch); a printer is asked for that resolution and the
+    // driver scales, so print, preview and PDF are the same vector pages.
+    if (auto* printer = dynamic_cast<QPrinter*>(&dev))
+        printer->setResolution(72);
+    if (std::abs(dev.logicalDpiX() - 72) > 1) {
+        res.error = QString("the output must be set to 72 dots per inch (it is %1)").arg(dev.logicalDpiX());
+        return res;
+    }
     Document doc(tables);
     doc.reset(d);
     doc.waitForCheck();

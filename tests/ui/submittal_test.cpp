@@ -12,6 +12,7 @@
 #include "ui_support.h"
 
 #include <QFile>
+#include <QPrinter>
 #include <QProcess>
 #include <QXmlStreamReader>
 #include <gtest/gtest.h>
@@ -142,4 +143,25 @@ TEST(Submittal, LargeOneLineTilesWithMatchLines) {
     auto s = writeSubmittalPdf(one, sample("kestrel-mill-mcc1.lineward"), test::sharedTables(), SubmittalOptions{});
     EXPECT_EQ(s.oneLineSheets, 1);
     EXPECT_FALSE(pdfText(one).contains("MATCH LINE"));
+}
+
+TEST(Submittal, PrintsThroughQPrinterAndListsAcceptedDeviations) {
+    // The editor's Print path: a real QPrinter (PDF output, so the test can read it back).
+    const Drawing d = sample("kestrel-mill-mcc1-review.lineward");
+    ASSERT_FALSE(d.accepted().empty());
+    QPrinter printer(QPrinter::HighResolution);
+    const QString pdf = test::tempDir("printer") + "/printed.pdf";
+    printer.setOutputFormat(QPrinter::PdfFormat);
+    printer.setOutputFileName(pdf);
+    printer.setPageSize(QPageSize(QPageSize::A3));
+    printer.setPageOrientation(QPageLayout::Portrait);
+    SubmittalOptions o;
+    o.curveParts = std::vector<PartId>{d.partByTag("P-101")->id};
+    auto r = paintSubmittal(printer, d, test::sharedTables(), o);
+    ASSERT_TRUE(r.error.isEmpty());
+    const QString text = pdfText(pdf);
+    EXPECT_TRUE(text.contains("Accepted deviations"));
+    EXPECT_TRUE(text.contains("T. Okafor"));
+    EXPECT_TRUE(text.contains("0.8 diversity"));
+    EXPECT_TRUE(pdfInfo(pdf).contains("842 x 1191")); // A3 portrait
 }

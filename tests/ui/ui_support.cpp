@@ -34,7 +34,10 @@ QString tempDir(const char* name) {
 } // namespace lineward::ui::test
 
 int main(int argc, char** argv) {
-    qputenv("QT_QPA_PLATFORM", "offscreen");
+    // Offscreen unless a platform is asked for (QT_QPA_PLATFORM=xcb under Xvfb shows the
+    // same tests in a real X window).
+    if (qEnvironmentVariableIsEmpty("QT_QPA_PLATFORM"))
+        qputenv("QT_QPA_PLATFORM", "offscreen");
     qputenv("XDG_DATA_HOME", QByteArray((QDir::tempPath() + "/lineward-ui-data").toUtf8()));
     QApplication app(argc, argv);
     QApplication::setOrganizationName("LinewardTests");
