@@ -53,6 +53,15 @@ int runCheck(const CheckOptions& o, const Tables& tables) {
 
 } // namespace
 
+std::optional<Drawing> loadForVerb(const std::string& file, int& exitCode) {
+    auto loaded = io::loadDrawing(file);
+    if (loaded)
+        return std::move(*loaded.drawing);
+    std::cerr << "lineward-cli: " << loaded.error->text() << "\n";
+    exitCode = kBadInput;
+    return std::nullopt;
+}
+
 void addCheckCommand(CLI::App& app, const TablesRef& tables, int& exitCode) {
     auto opts = std::make_shared<CheckOptions>();
     auto* cmd = app.add_subcommand(

@@ -1,16 +1,23 @@
 // The verbs of lineward-cli; each registers its options and its action on the CLI11 app.
 #pragma once
 
+#include "model/drawing.h"
 #include "tables/tables.h"
 
 #include <CLI/CLI.hpp>
 
 #include <memory>
+#include <optional>
+#include <string>
 
 namespace lineward::cli {
 
 /// Exit codes shared by every verb.
 enum Exit : int { kClean = 0, kFindings = 1, kBadInput = 2 };
+
+/// Loads a drawing for a verb; on failure prints "lineward-cli: file:line:column: why",
+/// sets the exit code to kBadInput and returns nothing.
+std::optional<Drawing> loadForVerb(const std::string& file, int& exitCode);
 
 /// The reference tables, loaded once before any verb runs.
 using TablesRef = std::shared_ptr<const Tables>;

@@ -44,20 +44,17 @@ void addCurvesCommand(CLI::App& app, const TablesRef& tables, int& exitCode) {
         const std::string out = !a->svg.empty() ? a->svg : !a->png.empty() ? a->png : a->pdf;
         if (out.empty())
             throw CLI::ValidationError("output", "give --svg, --png or --pdf");
-        auto loaded = io::loadDrawing(a->file);
-        if (!loaded) {
-            std::cerr << "lineward-cli: " << loaded.error->text() << "\n";
-            exitCode = kBadInput;
+        auto loaded = loadForVerb(a->file, exitCode);
+        if (!loaded)
             return;
-        }
-        const Part* p = loaded.drawing->partByTag(a->tag);
+        const Part* p = loaded->partByTag(a->tag);
         if (!p) {
             std::cerr << "lineward-cli curves: no part tagged " << a->tag << "\n";
             exitCode = kBadInput;
             return;
         }
         ensureGuiApplication();
-        const auto set = buildCurveSet(*loaded.drawing, *tables, p->id);
+        const auto set = buildCurveSet(*loaded, *tables, p->id);
         if (auto why = ui::saveCurves(set, QString::fromStdString(out)); !why.isEmpty()) {
             std::cerr << "lineward-cli curves: " << why.toStdString() << "\n";
             exitCode = kBadInput;

@@ -32,18 +32,15 @@ void addExportCommand(CLI::App& app, const TablesRef& tables, int& exitCode) {
     cmd->callback([a, &tables, &exitCode] {
         if (a->pdf.empty() && a->svg.empty() && a->csv.empty())
             throw CLI::ValidationError("output", "give --pdf, --svg or --csv");
-        auto loaded = io::loadDrawing(a->file);
-        if (!loaded) {
-            std::cerr << "lineward-cli: " << loaded.error->text() << "\n";
-            exitCode = kBadInput;
+        auto loaded = loadForVerb(a->file, exitCode);
+        if (!loaded)
             return;
-        }
         ensureGuiApplication();
         // Output folders are made as needed, as a user giving a new path expects.
         for (const auto& out : {a->pdf, a->svg})
             if (!out.empty())
                 QDir().mkpath(QFileInfo(QString::fromStdString(out)).absolutePath());
-        const Drawing& d = *loaded.drawing;
+        const Drawing& d = *loaded;
         exitCode = kClean;
         auto fail = [&](const QString& why) {
             std::cerr << "lineward-cli export: " << why.toStdString() << "\n";

@@ -116,15 +116,12 @@ void addStudyCommand(CLI::App& app, const TablesRef& tables, int& exitCode) {
     cmd->add_option("file", *file, "drawing (.lineward)")->required()->check(CLI::ExistingFile);
     cmd->add_flag("--json", *json, "print one JSON object with nodes and parts");
     cmd->callback([file, json, &tables, &exitCode] {
-        auto loaded = io::loadDrawing(*file);
-        if (!loaded) {
-            std::cerr << "lineward-cli: " << loaded.error->text() << "\n";
-            exitCode = kBadInput;
+        auto loaded = loadForVerb(*file, exitCode);
+        if (!loaded)
             return;
-        }
-        Network net(*loaded.drawing);
+        Network net(*loaded);
         Flow flow(net);
-        const auto r = runStudies(net, flow, *tables, loaded.drawing->settings);
+        const auto r = runStudies(net, flow, *tables, loaded->settings);
         const auto j = studyJson(net, flow, r);
         if (*json)
             std::cout << j.dump(2) << "\n";

@@ -28,13 +28,10 @@ void addTripCommand(CLI::App& app, int& exitCode) {
     cmd->add_option("--amps", a->amps, "current in amperes")->required()->check(CLI::PositiveNumber);
     cmd->add_flag("--json", a->json, "print one JSON object");
     cmd->callback([a, &exitCode] {
-        auto loaded = io::loadDrawing(a->file);
-        if (!loaded) {
-            std::cerr << "lineward-cli: " << loaded.error->text() << "\n";
-            exitCode = kBadInput;
+        auto loaded = loadForVerb(a->file, exitCode);
+        if (!loaded)
             return;
-        }
-        const Part* p = loaded.drawing->partByTag(a->tag);
+        const Part* p = loaded->partByTag(a->tag);
         auto curve = p ? TripCurve::of(*p) : std::nullopt;
         if (!curve) {
             std::cerr << "lineward-cli trip: " << (p ? a->tag + " has no trip curve (not a breaker, fuse or overload relay)"
