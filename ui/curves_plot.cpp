@@ -141,6 +141,14 @@ void paintCurves(QPainter& p, const QRectF& area, const CurveSet& set) {
             band(p, ax, s, kPalette[colour++ % 6]);
         else if (s.kind == PlotSeries::Kind::StartProfile)
             polyline(p, ax, s, QPen(QColor(0x22, 0x22, 0x22), 1.8, Qt::DashLine));
+        else if (s.kind == PlotSeries::Kind::StallPoints)
+            for (std::size_t i = 0; i < s.amps.size(); ++i) {
+                // A cross for each stall point (ours).
+                const QPointF c(ax.x(s.amps[i]), ax.y(s.maxS[i]));
+                p.setPen(QPen(QColor(0x22, 0x22, 0x22), 1.8));
+                p.drawLine(c + QPointF(-5, -5), c + QPointF(5, 5));
+                p.drawLine(c + QPointF(-5, 5), c + QPointF(5, -5));
+            }
         else
             polyline(p, ax, s, QPen(QColor(0xb2, 0x2d, 0x2d), 1.6, Qt::DotLine));
     }
@@ -169,6 +177,7 @@ void paintCurves(QPainter& p, const QRectF& area, const CurveSet& set) {
     for (const auto& s : set.series) {
         QPen pen = s.kind == PlotSeries::Kind::Band ? QPen(kPalette[colour++ % 6], 3)
                    : s.kind == PlotSeries::Kind::StartProfile ? QPen(QColor(0x22, 0x22, 0x22), 1.8, Qt::DashLine)
+                   : s.kind == PlotSeries::Kind::StallPoints  ? QPen(QColor(0x22, 0x22, 0x22), 1.8, Qt::DotLine)
                                                                : QPen(QColor(0xb2, 0x2d, 0x2d), 1.6, Qt::DotLine);
         entry(pen, QString::fromStdString(s.label));
     }

@@ -71,6 +71,16 @@ CurveSet buildCurveSet(const RuleContext& ctx, PartId id) {
             s.maxS.push_back(p[1]);
         }
         set.series.push_back(std::move(s));
+        // The motor's safe stall times at locked-rotor current, as markers.
+        PlotSeries stall{PlotSeries::Kind::StallPoints, part->tag + " safe stall (hot, cold)", {}, {}, {}};
+        for (const char* key : {"stall_hot_s", "stall_cold_s"})
+            if (auto t = part->number(key)) {
+                stall.amps.push_back(prof->lockedRotorA);
+                stall.minS.push_back(*t);
+                stall.maxS.push_back(*t);
+            }
+        if (!stall.amps.empty())
+            set.series.push_back(std::move(stall));
     }
     // The cable on the path nearest the part: its own cable for a motor, or itself.
     const Part* cable = part->kind == PartKind::Cable ? part : nullptr;

@@ -12,7 +12,7 @@ namespace lineward {
 
 /// One curve on the plot, sampled at rising currents. Infinite times mean "no trip".
 struct PlotSeries {
-    enum class Kind { Band, StartProfile, DamageCurve };
+    enum class Kind { Band, StartProfile, DamageCurve, StallPoints };
     Kind kind = Kind::Band;
     std::string label;
     std::vector<double> amps, minS, maxS; ///< for profile and damage curves minS == maxS

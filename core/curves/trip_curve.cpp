@@ -99,6 +99,7 @@ std::optional<TripCurve> TripCurve::of(const Part& p) {
             c.m_label = p.tag + " " + num(c.m_ratingA) + " A TM, inst " + num(c.m_d) + " A";
         }
         c.m_stDelayS = p.number("st_delay_s").value_or(0.1);
+        c.m_stI2t = p.flag("st_i2t");
         return c;
     }
     case PartKind::InstBreaker:
@@ -153,7 +154,7 @@ double TripCurve::minTime(double amps) const {
         const double mr = amps / m_a;
         double t = mr <= 1.05 ? kNoTrip : 0.8 * m_b * 36.0 / (mr * mr); // LT I²t, −20 % (common practice)
         if (m_c > 0 && amps >= 0.9 * m_c)
-            t = std::min(t, m_stDelayS); // ST flat delay, pickup ±10 %
+            t = std::min(t, stDelay(amps)); // ST delay (flat or I²t), pickup ±10 %
         if (m_d > 0 && amps >= 0.9 * m_d)
             t = std::min(t, 0.01);
         return t;
@@ -186,7 +187,7 @@ double TripCurve::maxTime(double amps) const {
         const double mr = amps / m_a;
         double t = mr < 1.2 ? kNoTrip : 1.2 * m_b * 36.0 / (mr * mr);
         if (m_c > 0 && amps >= 1.1 * m_c)
-            t = std::min(t, m_stDelayS + 0.05);
+            t = std::min(t, stDelay(amps) + 0.05);
         if (m_d > 0 && amps >= 1.1 * m_d)
             t = std::min(t, 0.05);
         return t;
@@ -206,6 +207,14 @@ double TripCurve::maxTime(double amps) const {
         return m <= 1.15 ? kNoTrip : m_b * std::log(m * m / (m * m - 1.3225));
     }
     return kNoTrip;
+}
+
+double TripCurve::stDelay(double amps) const {
+    // I²t ramp: the delay at 10 × Ir, longer below it in proportion to 1/I² (common practice).
+    if (!m_stI2t)
+        return m_stDelayS;
+    const double knee = 10.0 * m_a;
+    return amps >= knee ? m_stDelayS : m_stDelayS * (knee / amps) * (knee / amps);
 }
 
 double TripCurve::maxTimeHot(double amps) const {

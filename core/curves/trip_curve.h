@@ -50,6 +50,8 @@ private:
     double m_pickupA = 0;
     double m_a = 0, m_b = 0, m_c = 0, m_d = 0; ///< model parameters (see trip_curve.cpp)
     double m_stDelayS = 0.1;                    ///< electronic short-time delay
+    bool m_stI2t = false;                       ///< short-time delay ramps as I²t below 10 × Ir
+    double stDelay(double amps) const;
     std::vector<CurvePoint> m_points;
     std::string m_label;
 };

@@ -54,7 +54,7 @@ const std::array<FieldSpec, 5> kBusFields{{
     {"phases", "Phases", "", FT::Integer, 1, 3, false, false, 3.0},
 }};
 
-const std::array<FieldSpec, 13> kBreakerFields{{
+const std::array<FieldSpec, 14> kBreakerFields{{
     {"trip_type", "Trip unit", "", FT::Choice, 0, 0, false, true,
      std::string("thermal_magnetic"), {"thermal_magnetic", "electronic"}},
     {"frame_a", "Frame", "A", FT::Number, 0, 6000, true, false},
@@ -66,6 +66,8 @@ const std::array<FieldSpec, 13> kBreakerFields{{
     {"lt_delay_s", "Long-time delay at 6x", "s", FT::Number, 0, 60, true, false},
     {"st_pickup_x", "Short-time pickup", "x trip", FT::Number, 1, 12, false, false},
     {"st_delay_s", "Short-time delay", "s", FT::Number, 0, 1, false, false},
+    {"st_i2t", "Short-time I²t ramp", "", FT::Flag, 0, 0, false, false, false, {},
+     "true: the short-time delay follows I²t up to 10 × Ir, then flat"},
     kLetThrough,
     kClearS,
     kCurvePoints,

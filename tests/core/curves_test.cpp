@@ -84,6 +84,17 @@ TEST(BreakerCurve, ElectronicLongShortInstantaneous) {
     EXPECT_DOUBLE_EQ(c.maxTime(4800 * 1.15), 0.05);
 }
 
+TEST(BreakerCurve, ShortTimeI2tRamp) {
+    // With the I²t ramp the short-time delay is the set delay from 10 × Ir and grows as 1/I²
+    // below it: at 5 × Ir it is four times the set delay.
+    const auto c = *TripCurve::of(device(PartKind::Breaker, {{"trip_type", std::string("electronic")}, {"trip_a", 100.0},
+                                                             {"interrupting_ka", 65.0}, {"st_pickup_x", 3.0},
+                                                             {"st_delay_s", 0.1}, {"st_i2t", true}}));
+    EXPECT_NEAR(c.minTime(1200), 0.1, 1e-12);
+    EXPECT_NEAR(c.minTime(500), 0.4, 1e-12);
+    EXPECT_NEAR(c.maxTime(500), 0.45, 1e-12);
+}
+
 TEST(FuseCurve, TimeDelayHoldsFiveTimesForTenSeconds) {
     // A time-delay fuse holds 500 % for at least 10 s (UL 248 time-delay classes, from memory)
     // and opens within 1 h at 135 % and within 2 min at 200 % (30 A and less).
