@@ -104,7 +104,16 @@ MainWindow::MainWindow(std::shared_ptr<const Tables> tables, QWidget* parent)
     refreshTitle();
 }
 
-MainWindow::~MainWindow() { QFile::remove(m_recoveryPath); }
+MainWindow::~MainWindow() {
+    // QWidget deletes the docks, view and scene after this class's part of the object is gone;
+    // cut every connection into this window first so no late signal (a scene clearing its
+    // selection, a list losing its current row) reaches a half-destroyed MainWindow.
+    for (QObject* child : findChildren<QObject*>())
+        child->disconnect(this);
+    m_doc.disconnect(this);
+    m_doc.undoStack().disconnect(this);
+    QFile::remove(m_recoveryPath);
+}
 
 QString MainWindow::recoveryPath() const { return m_recoveryPath; }
 

@@ -307,9 +307,11 @@ TEST(FaultStudy, TreeRecursionEqualsSparseLu) {
     for (int k = 0; k < model.busCount(); ++k) {
         const auto col = y.zColumn(k);
         EXPECT_NEAR(std::abs(tree->zth(k) - col[k]), 0.0, 1e-9 * std::abs(col[k]));
-        for (int b = 0; b < model.busCount(); ++b)
-            if (auto t = tree->transfer(k, b))
+        for (int b = 0; b < model.busCount(); ++b) {
+            if (auto t = tree->transfer(k, b)) {
                 EXPECT_NEAR(std::abs(*t - col[b]), 0.0, 1e-9 * std::abs(col[b]));
+            }
+        }
     }
     // Solving Y v = i: the tree recursion equals the LU solve.
     Eigen::VectorXcd inj = Eigen::VectorXcd::Zero(model.busCount());
