@@ -65,6 +65,53 @@ double TripCurve::thermalTime200(double ratingA) {
     return ratingA <= 100 ? 40 : ratingA <= 400 ? 80 : 120;
 }
 
+TripCurve TripCurve::ofBreaker(const Part& p) {
+    TripCurve c;
+    c.m_ratingA = p.number("trip_a").value_or(100);
+    if (p.word("trip_type").value_or("") == "electronic") {
+        c.m_model = Model::Electronic;
+        const double ir = c.m_ratingA * p.number("lt_pickup_x").value_or(1.0);
+        c.m_a = ir;
+        c.m_b = p.number("lt_delay_s").value_or(10.0);
+        c.m_c = p.number("st_pickup_x").value_or(0) * ir;
+        c.m_d = p.number("inst_x").value_or(0) * c.m_ratingA;
+        c.m_pickupA = 1.05 * ir;
+        c.m_label = p.tag + " " + num(c.m_ratingA) + " A LSI, LT " + num(c.m_b) + " s" +
+                    (c.m_c > 0 ? ", ST " + num(c.m_c) + " A " + num(p.number("st_delay_s").value_or(0.1)) + " s" : "") +
+                    (c.m_d > 0 ? ", I " + num(c.m_d) + " A" : "");
+    } else {
+        c.m_model = Model::ThermalMagnetic;
+        c.m_a = thermalTime200(c.m_ratingA);
+        c.m_d = p.number("inst_x").value_or(10) * c.m_ratingA;
+        c.m_pickupA = 1.05 * c.m_ratingA;
+        c.m_label = p.tag + " " + num(c.m_ratingA) + " A TM, inst " + num(c.m_d) + " A";
+    }
+    c.m_stDelayS = p.number("st_delay_s").value_or(0.1);
+    c.m_stI2t = p.flag("st_i2t");
+    return c;
+}
+
+TripCurve TripCurve::ofOverload(const Part& p) {
+    TripCurve c;
+    c.m_model = Model::Overload;
+    c.m_ratingA = p.number("setting_a").value_or(10);
+    // IEC 60947-4-1 Table 3 (from memory): trip time at 7.2 × setting from cold, by class;
+    // Table 2: no trip at 1.05 ×, trip within 2 h at 1.2 ×, within the class limit at 1.5 ×
+    // from hot. τ_min puts the fastest trip at 7.2 × on the class minimum; τ_max puts the
+    // slowest on the class maximum, or lower where the 1.5 × hot limit demands it.
+    const auto cls = p.word("trip_class").value_or("10");
+    const double tpMin = cls == "10A" ? 2 : cls == "10" ? 4 : cls == "20" ? 6 : 9;
+    const double tpMax = cls == "10A" ? 10 : cls == "10" ? 10 : cls == "20" ? 20 : 30;
+    const double hot15 = (cls == "10A" ? 2 : cls == "10" ? 4 : cls == "20" ? 8 : 12) * 60.0;
+    const double m = 7.2;
+    c.m_a = tpMin / std::log(m * m / (m * m - 1.05 * 1.05));
+    c.m_b = std::min(tpMax / std::log(m * m / (m * m - 1.15 * 1.15)),
+                     hot15 / std::log((2.25 - 1.0) / (2.25 - 1.15 * 1.15)));
+    c.m_pickupA = 1.05 * c.m_ratingA;
+    c.m_label = p.tag + " " + num(c.m_ratingA) + " A class " + cls;
+    return c;
+    }
+
 std::optional<TripCurve> TripCurve::of(const Part& p) {
     TripCurve c;
     if (!fieldIndex(p.kind, "curve_points"))
@@ -78,30 +125,8 @@ std::optional<TripCurve> TripCurve::of(const Part& p) {
         return c;
     }
     switch (p.kind) {
-    case PartKind::Breaker: {
-        c.m_ratingA = p.number("trip_a").value_or(100);
-        if (p.word("trip_type").value_or("") == "electronic") {
-            c.m_model = Model::Electronic;
-            const double ir = c.m_ratingA * p.number("lt_pickup_x").value_or(1.0);
-            c.m_a = ir;
-            c.m_b = p.number("lt_delay_s").value_or(10.0);
-            c.m_c = p.number("st_pickup_x").value_or(0) * ir;
-            c.m_d = p.number("inst_x").value_or(0) * c.m_ratingA;
-            c.m_pickupA = 1.05 * ir;
-            c.m_label = p.tag + " " + num(c.m_ratingA) + " A LSI, LT " + num(c.m_b) + " s" +
-                        (c.m_c > 0 ? ", ST " + num(c.m_c) + " A " + num(p.number("st_delay_s").value_or(0.1)) + " s" : "") +
-                        (c.m_d > 0 ? ", I " + num(c.m_d) + " A" : "");
-        } else {
-            c.m_model = Model::ThermalMagnetic;
-            c.m_a = thermalTime200(c.m_ratingA);
-            c.m_d = p.number("inst_x").value_or(10) * c.m_ratingA;
-            c.m_pickupA = 1.05 * c.m_ratingA;
-            c.m_label = p.tag + " " + num(c.m_ratingA) + " A TM, inst " + num(c.m_d) + " A";
-        }
-        c.m_stDelayS = p.number("st_delay_s").value_or(0.1);
-        c.m_stI2t = p.flag("st_i2t");
-        return c;
-    }
+    case PartKind::Breaker:
+        return ofBreaker(p);
     case PartKind::InstBreaker:
         c.m_model = Model::Instantaneous;
         c.m_ratingA = p.number("pickup_a").value_or(100);
@@ -115,25 +140,8 @@ std::optional<TripCurve> TripCurve::of(const Part& p) {
         c.m_pickupA = 1.1 * c.m_ratingA;
         c.m_label = p.tag + " " + num(c.m_ratingA) + " A " + (c.m_model == Model::FastFuse ? "fast" : "time-delay") + " fuse";
         return c;
-    case PartKind::Overload: {
-        c.m_model = Model::Overload;
-        c.m_ratingA = p.number("setting_a").value_or(10);
-        // IEC 60947-4-1 Table 3 (from memory): trip time at 7.2 × setting from cold, by class;
-        // Table 2: no trip at 1.05 ×, trip within 2 h at 1.2 ×, within the class limit at 1.5 ×
-        // from hot. τ_min puts the fastest trip at 7.2 × on the class minimum; τ_max puts the
-        // slowest on the class maximum, or lower where the 1.5 × hot limit demands it.
-        const auto cls = p.word("trip_class").value_or("10");
-        const double tpMin = cls == "10A" ? 2 : cls == "10" ? 4 : cls == "20" ? 6 : 9;
-        const double tpMax = cls == "10A" ? 10 : cls == "10" ? 10 : cls == "20" ? 20 : 30;
-        const double hot15 = (cls == "10A" ? 2 : cls == "10" ? 4 : cls == "20" ? 8 : 12) * 60.0;
-        const double m = 7.2;
-        c.m_a = tpMin / std::log(m * m / (m * m - 1.05 * 1.05));
-        c.m_b = std::min(tpMax / std::log(m * m / (m * m - 1.15 * 1.15)),
-                         hot15 / std::log((2.25 - 1.0) / (2.25 - 1.15 * 1.15)));
-        c.m_pickupA = 1.05 * c.m_ratingA;
-        c.m_label = p.tag + " " + num(c.m_ratingA) + " A class " + cls;
-        return c;
-    }
+    case PartKind::Overload:
+        return ofOverload(p);
     default:
         return std::nullopt;
     }

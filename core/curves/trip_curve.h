@@ -45,6 +45,8 @@ public:
     static double thermalTime200(double ratingA);
 
 private:
+    static TripCurve ofBreaker(const Part& p);
+    static TripCurve ofOverload(const Part& p);
     Model m_model = Model::Points;
     double m_ratingA = 0;   ///< In, Ir, fuse rating or relay setting
     double m_pickupA = 0;

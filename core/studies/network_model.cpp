@@ -58,8 +58,11 @@ std::optional<Complex> cableOhms(const Part& c, const Tables& t) {
     return Complex(*r, x) * (lengthFt / 1000.0) / sets;
 }
 
-NetworkModel buildNetworkModel(const Network& net, const Tables& t, const Settings& s) {
-    NetworkModel m;
+namespace {
+
+// Closed zero-impedance devices join nodes into one solve bus; each energized bus takes its
+// node's nominal voltage as base.
+void mergeBuses(NetworkModel& m, const Network& net) {
     const Drawing& d = net.drawing();
     const auto& g = net.graph();
     const int n = static_cast<int>(net.nodeCount());
@@ -83,6 +86,12 @@ NetworkModel buildNetworkModel(const Network& net, const Tables& t, const Settin
         }
         m.busOfNode[static_cast<std::size_t>(v)] = busOfRoot[static_cast<std::size_t>(r)];
     }
+}
+
+// Transformers and cables between solve buses.
+void addBranches(NetworkModel& m, const Network& net, const Tables& t) {
+    const Drawing& d = net.drawing();
+    const auto& g = net.graph();
     for (auto [e, end] = boost::edges(g); e != end; ++e) {
         const Part& p = *d.part(g[*e].part);
         const int a = m.busOfNode[boost::source(*e, g)], b = m.busOfNode[boost::target(*e, g)];
@@ -103,6 +112,11 @@ NetworkModel buildNetworkModel(const Network& net, const Tables& t, const Settin
         }
         m.branches.push_back({a, b, z, p.id});
     }
+}
+
+// Sources and running motors as EMFs behind impedances; motors and static loads as loads.
+void addShunts(NetworkModel& m, const Network& net, const Tables& t, const Settings& s) {
+    const Drawing& d = net.drawing();
     for (const auto& p : d.parts()) {
         const int bus = isTwoTerminal(p.kind) ? -1 : m.busOfNode[net.nodeOf(p.id, 0)];
         if (bus < 0)
@@ -130,6 +144,15 @@ NetworkModel buildNetworkModel(const Network& net, const Tables& t, const Settin
             m.loads.push_back({bus, std::polar(kva / 1000.0 / kBaseMva, std::acos(pf)), p.id});
         }
     }
+}
+
+} // namespace
+
+NetworkModel buildNetworkModel(const Network& net, const Tables& t, const Settings& s) {
+    NetworkModel m;
+    mergeBuses(m, net);
+    addBranches(m, net, t);
+    addShunts(m, net, t, s);
     return m;
 }
 
