@@ -110,7 +110,7 @@ TripCurve TripCurve::ofOverload(const Part& p) {
     c.m_pickupA = 1.05 * c.m_ratingA;
     c.m_label = p.tag + " " + num(c.m_ratingA) + " A class " + cls;
     return c;
-    }
+}
 
 std::optional<TripCurve> TripCurve::of(const Part& p) {
     TripCurve c;
