@@ -4,10 +4,9 @@
 #include "rules/check.h"
 #include "rules/report_format.h"
 
-#include <spdlog/spdlog.h>
-
 #include <iostream>
 #include <memory>
+#include <spdlog/spdlog.h>
 
 namespace lineward::cli {
 
@@ -67,8 +66,9 @@ void addCheckCommand(CLI::App& app, const TablesRef& tables, int& exitCode) {
     auto* cmd = app.add_subcommand(
         "check", "Check drawings against every rule. Exit 0: nothing at or above --fail-on; "
                  "1: findings at or above it; 2: a file could not be read.");
-    cmd->add_option("files", opts->files, "drawing files (.lineward)")->required()->check(
-        CLI::ExistingFile);
+    cmd->add_option("files", opts->files, "drawing files (.lineward)")
+        ->required()
+        ->check(CLI::ExistingFile);
     cmd->add_flag("--json", opts->json, "print machine-readable JSON instead of text");
     cmd->add_option("--fail-on", opts->failOn,
                     "lowest severity that makes the exit code 1 (default: violation)")

@@ -5,7 +5,6 @@
 #include "tables/tables.h"
 
 #include <CLI/CLI.hpp>
-
 #include <memory>
 #include <optional>
 #include <string>

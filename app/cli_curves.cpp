@@ -4,7 +4,6 @@
 #include "io/drawing_file.h"
 
 #include <QApplication>
-
 #include <cstdlib>
 #include <iostream>
 #include <memory>
@@ -21,7 +20,8 @@ void ensureGuiApplication() {
     // Painting text needs a Qt application; without a display the offscreen platform serves.
     if (QApplication::instance())
         return;
-    if (!std::getenv("DISPLAY") && !std::getenv("WAYLAND_DISPLAY") && !std::getenv("QT_QPA_PLATFORM"))
+    if (!std::getenv("DISPLAY") && !std::getenv("WAYLAND_DISPLAY") &&
+        !std::getenv("QT_QPA_PLATFORM"))
         setenv("QT_QPA_PLATFORM", "offscreen", 1);
     static int argc = 1;
     static char name[] = "lineward-cli";
@@ -31,8 +31,9 @@ void ensureGuiApplication() {
 
 void addCurvesCommand(CLI::App& app, const TablesRef& tables, int& exitCode) {
     auto a = std::make_shared<CurvesArgs>();
-    auto* cmd = app.add_subcommand("curves", "Plot the time-current curves on the path from the source to a part. "
-                                             "Exit 0, or 2 on a bad file, tag or output.");
+    auto* cmd = app.add_subcommand(
+        "curves", "Plot the time-current curves on the path from the source to a part. "
+                  "Exit 0, or 2 on a bad file, tag or output.");
     cmd->add_option("file", a->file, "drawing (.lineward)")->required()->check(CLI::ExistingFile);
     cmd->add_option("--part", a->tag, "tag of the part whose path to plot")->required();
     auto* svg = cmd->add_option("--svg", a->svg, "write an SVG picture");

@@ -5,7 +5,6 @@
 
 #include <QDir>
 #include <QFileInfo>
-
 #include <iostream>
 #include <memory>
 
@@ -20,8 +19,9 @@ struct ExportArgs {
 
 void addExportCommand(CLI::App& app, const TablesRef& tables, int& exitCode) {
     auto a = std::make_shared<ExportArgs>();
-    auto* cmd = app.add_subcommand("export", "Write the Submittal PDF, the one-line as SVG, and the schedules as "
-                                             "CSV, with no display. Exit 0, or 2 on a bad file or output.");
+    auto* cmd = app.add_subcommand(
+        "export", "Write the Submittal PDF, the one-line as SVG, and the schedules as "
+                  "CSV, with no display. Exit 0, or 2 on a bad file or output.");
     cmd->add_option("file", a->file, "drawing (.lineward)")->required()->check(CLI::ExistingFile);
     cmd->add_option("--pdf", a->pdf, "Submittal PDF: one-line, findings, schedules, curve sheets");
     cmd->add_option("--svg", a->svg, "the one-line drawing as SVG");
@@ -53,15 +53,18 @@ void addExportCommand(CLI::App& app, const TablesRef& tables, int& exitCode) {
             auto r = ui::writeSubmittalPdf(QString::fromStdString(a->pdf), d, tables, o);
             if (!r.error.isEmpty())
                 return fail(r.error);
-            std::cout << "wrote " << a->pdf << " (" << r.pages << " pages, " << r.oneLineSheets << " one-line sheet(s))\n";
+            std::cout << "wrote " << a->pdf << " (" << r.pages << " pages, " << r.oneLineSheets
+                      << " one-line sheet(s))\n";
         }
         if (!a->svg.empty()) {
-            if (auto why = ui::writeOneLineSvg(QString::fromStdString(a->svg), d, tables); !why.isEmpty())
+            if (auto why = ui::writeOneLineSvg(QString::fromStdString(a->svg), d, tables);
+                !why.isEmpty())
                 return fail(why);
             std::cout << "wrote " << a->svg << "\n";
         }
         if (!a->csv.empty()) {
-            if (auto why = ui::writeScheduleCsvs(QString::fromStdString(a->csv), d, *tables); !why.isEmpty())
+            if (auto why = ui::writeScheduleCsvs(QString::fromStdString(a->csv), d, *tables);
+                !why.isEmpty())
                 return fail(why);
             std::cout << "wrote motors.csv, cables.csv, devices.csv in " << a->csv << "\n";
         }

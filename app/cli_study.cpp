@@ -1,16 +1,16 @@
-// `lineward-cli study FILE [--json]`: fault currents, voltages and motor starting per node and part.
+// `lineward-cli study FILE [--json]`: fault currents, voltages and motor starting per node and
+// part.
 #include "cli_commands.h"
 #include "io/drawing_file.h"
 #include "rules/report_format.h"
 #include "sizing/motor_sizing.h"
 #include "studies/study.h"
 
-#include <nlohmann/json.hpp>
-
 #include <cmath>
 #include <cstdio>
 #include <iostream>
 #include <memory>
+#include <nlohmann/json.hpp>
 
 namespace lineward::cli {
 
@@ -18,7 +18,9 @@ namespace {
 
 using ojson = nlohmann::ordered_json;
 
-double round3(double v) { return std::round(v * 1000.0) / 1000.0; }
+double round3(double v) {
+    return std::round(v * 1000.0) / 1000.0;
+}
 
 // A node is named after the bus or the first part on it.
 std::string nodeTag(const Network& net, NodeIndex n) {
@@ -54,10 +56,14 @@ ojson studyJson(const Network& net, const Flow& flow, const StudyResults& r) {
         j["fault_ka"] = round3(f.ikKa);
         j["x_over_r"] = round3(f.xOverR);
         j["peak_ka"] = round3(f.peakKa);
-        j["v_pct"] = r.voltage.empty() ? ojson(nullptr) : ojson(round3(std::abs(r.voltage[static_cast<std::size_t>(b)]) * 100));
-        j["vdrop_pct"] = r.voltage.empty() ? ojson(nullptr)
-                                           : ojson(round3((r.originVoltagePu[static_cast<std::size_t>(b)] -
-                                                           std::abs(r.voltage[static_cast<std::size_t>(b)])) * 100));
+        j["v_pct"] = r.voltage.empty()
+                         ? ojson(nullptr)
+                         : ojson(round3(std::abs(r.voltage[static_cast<std::size_t>(b)]) * 100));
+        j["vdrop_pct"] = r.voltage.empty()
+                             ? ojson(nullptr)
+                             : ojson(round3((r.originVoltagePu[static_cast<std::size_t>(b)] -
+                                             std::abs(r.voltage[static_cast<std::size_t>(b)])) *
+                                            100));
         auto dip = dipAtBus.find(b);
         j["start_dip_pct"] = dip == dipAtBus.end() ? ojson(nullptr) : ojson(round3(dip->second));
         nodes.push_back(j);
@@ -75,7 +81,8 @@ ojson studyJson(const Network& net, const Flow& flow, const StudyResults& r) {
         j["line_side_fault_ka"] = f ? ojson(round3(f->ikKa)) : ojson(nullptr);
         if (p.kind == PartKind::Motor) {
             auto s = r.starts.find(p.id);
-            j["terminal_v_start_pct"] = s == r.starts.end() ? ojson(nullptr) : ojson(round3(s->second.terminalPctOfRated));
+            j["terminal_v_start_pct"] =
+                s == r.starts.end() ? ojson(nullptr) : ojson(round3(s->second.terminalPctOfRated));
         }
         parts.push_back(j);
     }
@@ -88,21 +95,26 @@ ojson studyJson(const Network& net, const Flow& flow, const StudyResults& r) {
 }
 
 void printTable(const ojson& j) {
-    std::printf("%-22s %8s %10s %8s %9s %8s %10s %10s\n", "node", "kV", "fault kA", "X/R", "peak kA", "V %",
-                "drop %", "start dip%");
-    auto num = [](const ojson& v) { return v.is_null() ? std::string("-") : fmt(v.get<double>(), 2); };
+    std::printf("%-22s %8s %10s %8s %9s %8s %10s %10s\n", "node", "kV", "fault kA", "X/R",
+                "peak kA", "V %", "drop %", "start dip%");
+    auto num = [](const ojson& v) {
+        return v.is_null() ? std::string("-") : fmt(v.get<double>(), 2);
+    };
     for (const auto& n : j["nodes"])
         std::printf("%-22s %8s %10s %8s %9s %8s %10s %10s\n", n["tag"].get<std::string>().c_str(),
                     num(n["kv"]).c_str(), num(n["fault_ka"]).c_str(), num(n["x_over_r"]).c_str(),
                     num(n["peak_ka"]).c_str(), num(n["v_pct"]).c_str(), num(n["vdrop_pct"]).c_str(),
                     num(n["start_dip_pct"]).c_str());
-    std::printf("\n%-14s %-14s %10s %14s %16s\n", "part", "kind", "load A", "line-side kA", "start V % rated");
+    std::printf("\n%-14s %-14s %10s %14s %16s\n", "part", "kind", "load A", "line-side kA",
+                "start V % rated");
     for (const auto& p : j["parts"])
         std::printf("%-14s %-14s %10s %14s %16s\n", p["tag"].get<std::string>().c_str(),
                     p["kind"].get<std::string>().c_str(), num(p["load_a"]).c_str(),
                     num(p["line_side_fault_ka"]).c_str(),
-                    p.contains("terminal_v_start_pct") ? num(p["terminal_v_start_pct"]).c_str() : "");
-    std::printf("\nThree-phase bolted faults, prefault voltage 1.0 per unit; running motors contribute.\n%s\n",
+                    p.contains("terminal_v_start_pct") ? num(p["terminal_v_start_pct"]).c_str()
+                                                       : "");
+    std::printf("\nThree-phase bolted faults, prefault voltage 1.0 per unit; running motors "
+                "contribute.\n%s\n",
                 kSafetyCaution);
 }
 
@@ -111,8 +123,9 @@ void printTable(const ojson& j) {
 void addStudyCommand(CLI::App& app, const TablesRef& tables, int& exitCode) {
     auto file = std::make_shared<std::string>();
     auto json = std::make_shared<bool>(false);
-    auto* cmd = app.add_subcommand("study", "Fault currents, X/R, peak, voltage drop and motor starting at "
-                                            "every node and part. Exit 0, or 2 when the file cannot be read.");
+    auto* cmd = app.add_subcommand(
+        "study", "Fault currents, X/R, peak, voltage drop and motor starting at "
+                 "every node and part. Exit 0, or 2 when the file cannot be read.");
     cmd->add_option("file", *file, "drawing (.lineward)")->required()->check(CLI::ExistingFile);
     cmd->add_flag("--json", *json, "print one JSON object with nodes and parts");
     cmd->callback([file, json, &tables, &exitCode] {

@@ -3,11 +3,10 @@
 #include "curves/trip_curve.h"
 #include "io/drawing_file.h"
 
-#include <nlohmann/json.hpp>
-
 #include <cmath>
 #include <iostream>
 #include <memory>
+#include <nlohmann/json.hpp>
 
 namespace lineward::cli {
 
@@ -21,11 +20,14 @@ struct TripArgs {
 
 void addTripCommand(CLI::App& app, int& exitCode) {
     auto a = std::make_shared<TripArgs>();
-    auto* cmd = app.add_subcommand("trip", "Minimum and maximum trip time of a protective part at a current. "
-                                           "Exit 0, or 2 on a bad file, tag or current.");
+    auto* cmd = app.add_subcommand(
+        "trip", "Minimum and maximum trip time of a protective part at a current. "
+                "Exit 0, or 2 on a bad file, tag or current.");
     cmd->add_option("file", a->file, "drawing (.lineward)")->required()->check(CLI::ExistingFile);
     cmd->add_option("--part", a->tag, "tag of a breaker, fuse or overload relay")->required();
-    cmd->add_option("--amps", a->amps, "current in amperes")->required()->check(CLI::PositiveNumber);
+    cmd->add_option("--amps", a->amps, "current in amperes")
+        ->required()
+        ->check(CLI::PositiveNumber);
     cmd->add_flag("--json", a->json, "print one JSON object");
     cmd->callback([a, &exitCode] {
         auto loaded = loadForVerb(a->file, exitCode);
@@ -34,19 +36,27 @@ void addTripCommand(CLI::App& app, int& exitCode) {
         const Part* p = loaded->partByTag(a->tag);
         auto curve = p ? TripCurve::of(*p) : std::nullopt;
         if (!curve) {
-            std::cerr << "lineward-cli trip: " << (p ? a->tag + " has no trip curve (not a breaker, fuse or overload relay)"
-                                                     : "no part tagged " + a->tag) << "\n";
+            std::cerr << "lineward-cli trip: "
+                      << (p ? a->tag + " has no trip curve (not a breaker, fuse or overload relay)"
+                            : "no part tagged " + a->tag)
+                      << "\n";
             exitCode = kBadInput;
             return;
         }
         const double tmin = curve->minTime(a->amps), tmax = curve->maxTime(a->amps);
-        auto j = [](double t) { return std::isinf(t) ? nlohmann::ordered_json(nullptr) : nlohmann::ordered_json(t); };
+        auto j = [](double t) {
+            return std::isinf(t) ? nlohmann::ordered_json(nullptr) : nlohmann::ordered_json(t);
+        };
         if (a->json) {
-            nlohmann::ordered_json out{{"tag", a->tag}, {"amps", a->amps}, {"t_min_s", j(tmin)}, {"t_max_s", j(tmax)}};
+            nlohmann::ordered_json out{
+                {"tag", a->tag}, {"amps", a->amps}, {"t_min_s", j(tmin)}, {"t_max_s", j(tmax)}};
             std::cout << out.dump(2) << "\n";
         } else {
-            auto txt = [](double t) { return std::isinf(t) ? std::string("does not trip") : std::to_string(t) + " s"; };
-            std::cout << curve->label() << " at " << a->amps << " A: minimum " << txt(tmin) << ", maximum " << txt(tmax) << "\n";
+            auto txt = [](double t) {
+                return std::isinf(t) ? std::string("does not trip") : std::to_string(t) + " s";
+            };
+            std::cout << curve->label() << " at " << a->amps << " A: minimum " << txt(tmin)
+                      << ", maximum " << txt(tmax) << "\n";
         }
         exitCode = kClean;
     });

@@ -1,5 +1,6 @@
 // lineward: the desktop editor. `lineward [FILE]` opens FILE; `--screenshot PNG` saves a
 // picture of the window and quits (used to make the user guide's images).
+#include "io/drawing_file.h"
 #include "main_window.h"
 #include "util/log.h"
 
@@ -10,11 +11,8 @@
 #include <QFile>
 #include <QFileInfo>
 #include <QMessageBox>
-
-#include "io/drawing_file.h"
 #include <QPixmap>
 #include <QTimer>
-
 #include <spdlog/spdlog.h>
 
 namespace {
@@ -61,7 +59,8 @@ int main(int argc, char** argv) {
         tables = lineward::loadBuiltinTables();
     } catch (const std::exception& e) {
         spdlog::critical("reference table unusable: {}", e.what());
-        QMessageBox::critical(nullptr, "Lineward", QString("A reference table is unusable:\n") + e.what());
+        QMessageBox::critical(nullptr, "Lineward",
+                              QString("A reference table is unusable:\n") + e.what());
         return 2;
     }
     lineward::ui::MainWindow window(tables);

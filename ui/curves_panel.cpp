@@ -20,7 +20,9 @@ void CurvesPanel::showPart(std::optional<PartId> id) {
 }
 
 void CurvesPanel::refresh() {
-    m_set = m_part && m_doc.drawing().part(*m_part) ? buildCurveSet(m_doc.drawing(), m_doc.tables(), *m_part) : CurveSet{};
+    m_set = m_part && m_doc.drawing().part(*m_part)
+                ? buildCurveSet(m_doc.drawing(), m_doc.tables(), *m_part)
+                : CurveSet{};
     update();
 }
 

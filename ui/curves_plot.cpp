@@ -16,13 +16,16 @@ namespace lineward::ui {
 namespace {
 
 constexpr double kTmin = 0.01, kTmax = 1000;
-const QColor kPalette[] = {QColor(0x1d, 0x6f, 0xa3), QColor(0xc0, 0x5a, 0x1b), QColor(0x3d, 0x8b, 0x4f),
-                           QColor(0x7b, 0x4f, 0x9d), QColor(0x9a, 0x7b, 0x1c), QColor(0x2a, 0x8a, 0x8a)};
+const QColor kPalette[] = {QColor(0x1d, 0x6f, 0xa3), QColor(0xc0, 0x5a, 0x1b),
+                           QColor(0x3d, 0x8b, 0x4f), QColor(0x7b, 0x4f, 0x9d),
+                           QColor(0x9a, 0x7b, 0x1c), QColor(0x2a, 0x8a, 0x8a)};
 
 struct Axes {
     QRectF r;
     double a0, a1;
-    double x(double amps) const { return r.left() + r.width() * std::log10(amps / a0) / std::log10(a1 / a0); }
+    double x(double amps) const {
+        return r.left() + r.width() * std::log10(amps / a0) / std::log10(a1 / a0);
+    }
     double y(double s) const {
         s = std::clamp(s, kTmin, kTmax);
         return r.bottom() - r.height() * std::log10(s / kTmin) / std::log10(kTmax / kTmin);
@@ -30,7 +33,8 @@ struct Axes {
 };
 
 QString ampsText(double a) {
-    return a >= 1000 ? QString::number(a / 1000, 'g', 3) + " kA" : QString::number(a, 'g', 3) + " A";
+    return a >= 1000 ? QString::number(a / 1000, 'g', 3) + " kA"
+                     : QString::number(a, 'g', 3) + " A";
 }
 
 void grid(QPainter& p, const Axes& ax) {
@@ -39,7 +43,8 @@ void grid(QPainter& p, const Axes& ax) {
     p.setFont(f);
     for (double d = ax.a0; d <= ax.a1 * 1.0001; d *= 10) {
         for (int m = 1; m < 10 && d * m <= ax.a1 * 1.0001; ++m) {
-            p.setPen(QPen(m == 1 ? QColor(0xb8, 0xb4, 0xaa) : QColor(0xe4, 0xe1, 0xd8), m == 1 ? 0.8 : 0.4));
+            p.setPen(QPen(m == 1 ? QColor(0xb8, 0xb4, 0xaa) : QColor(0xe4, 0xe1, 0xd8),
+                          m == 1 ? 0.8 : 0.4));
             p.drawLine(QPointF(ax.x(d * m), ax.r.top()), QPointF(ax.x(d * m), ax.r.bottom()));
         }
         p.setPen(Qt::black);
@@ -47,7 +52,8 @@ void grid(QPainter& p, const Axes& ax) {
     }
     for (double t = kTmin; t <= kTmax * 1.0001; t *= 10) {
         for (int m = 1; m < 10 && t * m <= kTmax * 1.0001; ++m) {
-            p.setPen(QPen(m == 1 ? QColor(0xb8, 0xb4, 0xaa) : QColor(0xe4, 0xe1, 0xd8), m == 1 ? 0.8 : 0.4));
+            p.setPen(QPen(m == 1 ? QColor(0xb8, 0xb4, 0xaa) : QColor(0xe4, 0xe1, 0xd8),
+                          m == 1 ? 0.8 : 0.4));
             p.drawLine(QPointF(ax.r.left(), ax.y(t * m)), QPointF(ax.r.right(), ax.y(t * m)));
         }
         p.setPen(Qt::black);
@@ -123,15 +129,19 @@ void paintCurves(QPainter& p, const QRectF& area, const CurveSet& set) {
     p.setRenderHint(QPainter::Antialiasing);
     p.fillRect(area, Qt::white);
     const double legendW = std::min(260.0, area.width() * 0.32);
-    Axes ax{QRectF(area.left() + 56, area.top() + 28, area.width() - legendW - 76, area.height() - 56), set.minA, set.maxA};
+    Axes ax{
+        QRectF(area.left() + 56, area.top() + 28, area.width() - legendW - 76, area.height() - 56),
+        set.minA, set.maxA};
     QFont title = p.font();
     title.setPointSizeF(9.5);
     title.setBold(true);
     p.setFont(title);
     p.setPen(Qt::black);
-    p.drawText(QRectF(area.left() + 56, area.top() + 4, ax.r.width(), 20), Qt::AlignLeft | Qt::AlignVCenter,
+    p.drawText(QRectF(area.left() + 56, area.top() + 4, ax.r.width(), 20),
+               Qt::AlignLeft | Qt::AlignVCenter,
                QString::fromStdString(set.title) +
-                   (set.voltsBase > 0 ? QString("  (current at %1 V)").arg(set.voltsBase, 0, 'f', 0) : QString()));
+                   (set.voltsBase > 0 ? QString("  (current at %1 V)").arg(set.voltsBase, 0, 'f', 0)
+                                      : QString()));
     grid(p, ax);
     p.save();
     p.setClipRect(ax.r);
@@ -176,13 +186,16 @@ void paintCurves(QPainter& p, const QRectF& area, const CurveSet& set) {
     };
     for (const auto& s : set.series) {
         QPen pen = s.kind == PlotSeries::Kind::Band ? QPen(kPalette[colour++ % 6], 3)
-                   : s.kind == PlotSeries::Kind::StartProfile ? QPen(QColor(0x22, 0x22, 0x22), 1.8, Qt::DashLine)
-                   : s.kind == PlotSeries::Kind::StallPoints  ? QPen(QColor(0x22, 0x22, 0x22), 1.8, Qt::DotLine)
-                                                               : QPen(QColor(0xb2, 0x2d, 0x2d), 1.6, Qt::DotLine);
+                   : s.kind == PlotSeries::Kind::StartProfile
+                       ? QPen(QColor(0x22, 0x22, 0x22), 1.8, Qt::DashLine)
+                   : s.kind == PlotSeries::Kind::StallPoints
+                       ? QPen(QColor(0x22, 0x22, 0x22), 1.8, Qt::DotLine)
+                       : QPen(QColor(0xb2, 0x2d, 0x2d), 1.6, Qt::DotLine);
         entry(pen, QString::fromStdString(s.label));
     }
     if (set.faultA > 0)
-        entry(QPen(QColor(0xb2, 0x2d, 0x2d), 1.2, Qt::DashDotLine), "available fault " + ampsText(set.faultA));
+        entry(QPen(QColor(0xb2, 0x2d, 0x2d), 1.2, Qt::DashDotLine),
+              "available fault " + ampsText(set.faultA));
     p.restore();
 }
 

@@ -8,9 +8,7 @@
 #include <QEventLoop>
 #include <QThread>
 #include <QTimer>
-
 #include <spdlog/spdlog.h>
-
 #include <thread>
 
 namespace lineward::ui {
@@ -141,9 +139,9 @@ void Document::startCheck() {
     ++m_running;
     std::thread([this, copy, tables, gen] {
         CheckReport r = checkDrawing(*copy, *tables);
-        QMetaObject::invokeMethod(this, [this, gen, r = std::move(r)]() mutable {
-            finishCheck(gen, std::move(r));
-        }, Qt::QueuedConnection);
+        QMetaObject::invokeMethod(
+            this, [this, gen, r = std::move(r)]() mutable { finishCheck(gen, std::move(r)); },
+            Qt::QueuedConnection);
         --m_running;
     }).detach();
 }

@@ -10,7 +10,6 @@
 #include <QObject>
 #include <QString>
 #include <QUndoStack>
-
 #include <atomic>
 #include <memory>
 

@@ -41,7 +41,8 @@ QString partTags(const Drawing& d, const Finding& f) {
 
 FindingsPanel::FindingsPanel(Document& doc, QWidget* parent)
     : QWidget(parent), m_doc(doc), m_severity(new QComboBox), m_rule(new QLineEdit),
-      m_apply(new QPushButton(tr("Apply fix"))), m_list(new QTreeWidget), m_detail(new QTextBrowser) {
+      m_apply(new QPushButton(tr("Apply fix"))), m_list(new QTreeWidget),
+      m_detail(new QTextBrowser) {
     m_list->setObjectName("findingsList");
     m_detail->setObjectName("findingDetail");
     m_apply->setObjectName("applyFix");
@@ -80,7 +81,9 @@ void FindingsPanel::setSeverityFilter(std::optional<Severity> s) {
     m_severity->setCurrentIndex(!s ? 0 : *s == Severity::Violation ? 1 : 2);
 }
 
-void FindingsPanel::setRuleFilter(const QString& text) { m_rule->setText(text); }
+void FindingsPanel::setRuleFilter(const QString& text) {
+    m_rule->setText(text);
+}
 
 const Finding* FindingsPanel::current() const {
     auto* item = m_list->currentItem();
@@ -98,10 +101,13 @@ void FindingsPanel::refresh() {
     const QString text = m_rule->text().trimmed();
     for (std::size_t i = 0; i < findings.size(); ++i) {
         const auto& f = findings[i];
-        if ((sev == 1 && f.severity != Severity::Violation) || (sev == 2 && f.severity == Severity::Note))
+        if ((sev == 1 && f.severity != Severity::Violation) ||
+            (sev == 2 && f.severity == Severity::Note))
             continue;
-        const QString rule = QString::fromStdString(f.ruleId), msg = QString::fromStdString(f.message);
-        if (!text.isEmpty() && !rule.contains(text, Qt::CaseInsensitive) && !msg.contains(text, Qt::CaseInsensitive))
+        const QString rule = QString::fromStdString(f.ruleId),
+                      msg = QString::fromStdString(f.message);
+        if (!text.isEmpty() && !rule.contains(text, Qt::CaseInsensitive) &&
+            !msg.contains(text, Qt::CaseInsensitive))
             continue;
         auto* item = new QTreeWidgetItem(m_list);
         item->setIcon(0, badgeIcon(f.severity));
@@ -128,17 +134,23 @@ void FindingsPanel::showDetail() {
                    QString::fromStdString(f.clause).toHtmlEscaped() + "<br>" +
                    QString::fromStdString(f.message).toHtmlEscaped();
     if (f.computed && f.limit)
-        html += "<br>computed " + QString::fromStdString(formatNumber(std::round(*f.computed * 100) / 100) + " " + f.unit) +
-                ", limit " + QString::fromStdString(formatNumber(std::round(*f.limit * 100) / 100) + " " + f.unit);
+        html +=
+            "<br>computed " +
+            QString::fromStdString(formatNumber(std::round(*f.computed * 100) / 100) + " " +
+                                   f.unit) +
+            ", limit " +
+            QString::fromStdString(formatNumber(std::round(*f.limit * 100) / 100) + " " + f.unit);
     if (!f.trace.empty()) {
         html += "<table>";
         for (const auto& t : f.trace)
-            html += "<tr><td>" + QString::fromStdString(t.name).toHtmlEscaped() + "</td><td>&nbsp;" +
-                    QString::fromStdString(t.value).toHtmlEscaped() + "</td></tr>";
+            html += "<tr><td>" + QString::fromStdString(t.name).toHtmlEscaped() +
+                    "</td><td>&nbsp;" + QString::fromStdString(t.value).toHtmlEscaped() +
+                    "</td></tr>";
         html += "</table>";
     }
     if (f.fix)
-        html += "<p><i>Proposed fix:</i> " + QString::fromStdString(f.fix->description).toHtmlEscaped();
+        html +=
+            "<p><i>Proposed fix:</i> " + QString::fromStdString(f.fix->description).toHtmlEscaped();
     if (f.accepted)
         html += "<p><i>Accepted:</i> " + QString::fromStdString(f.acceptedNote).toHtmlEscaped();
     m_detail->setHtml(html);

@@ -13,7 +13,8 @@
 namespace lineward::ui {
 
 Inspector::Inspector(Document& doc, QWidget* parent)
-    : QWidget(parent), m_doc(doc), m_form(new QFormLayout), m_title(new QLabel), m_message(new QLabel) {
+    : QWidget(parent), m_doc(doc), m_form(new QFormLayout), m_title(new QLabel),
+      m_message(new QLabel) {
     setObjectName("inspector");
     m_message->setObjectName("inspectorMessage");
     m_message->setWordWrap(true);
@@ -39,7 +40,9 @@ Inspector::Inspector(Document& doc, QWidget* parent)
     rebuild();
 }
 
-QString Inspector::message() const { return m_message->text(); }
+QString Inspector::message() const {
+    return m_message->text();
+}
 
 void Inspector::showPart(std::optional<PartId> id) {
     m_part = id;
@@ -67,7 +70,8 @@ QString Inspector::validate(const std::string& key, const QString& text, Part& t
         bool ok = false;
         const double d = QLocale::c().toDouble(t, &ok);
         if (!ok)
-            return tr("%1: '%2' is not a number").arg(QString::fromUtf8(spec->key.data(), static_cast<int>(spec->key.size())), t);
+            return tr("%1: '%2' is not a number")
+                .arg(QString::fromUtf8(spec->key.data(), static_cast<int>(spec->key.size())), t);
         v = d;
     } else if (spec->type == FieldType::Flag) {
         v = (t == "true" || t == "yes" || t == "1");
@@ -90,7 +94,9 @@ QString Inspector::commit(const std::string& key, const QString& text) {
     }
     m_message->clear();
     if (!(trial == *m_doc.drawing().part(*m_part)))
-        emit editRequested(trial, tr("Set %1 of %2").arg(QString::fromStdString(key), QString::fromStdString(trial.tag)));
+        emit editRequested(
+            trial,
+            tr("Set %1 of %2").arg(QString::fromStdString(key), QString::fromStdString(trial.tag)));
     return {};
 }
 
@@ -105,13 +111,15 @@ QWidget* Inspector::editorFor(const FieldSpec& spec, const Part& p) {
             box->addItem(QString::fromUtf8(c.data(), static_cast<int>(c.size())));
         if (auto s = std::get_if<std::string>(&v))
             box->setCurrentText(QString::fromStdString(*s));
-        connect(box, &QComboBox::activated, this, [this, key, box] { commit(key, box->currentText()); });
+        connect(box, &QComboBox::activated, this,
+                [this, key, box] { commit(key, box->currentText()); });
         return box;
     }
     if (spec.type == FieldType::Flag) {
         auto* check = new QCheckBox;
         check->setChecked(std::holds_alternative<bool>(v) && std::get<bool>(v));
-        connect(check, &QCheckBox::toggled, this, [this, key](bool on) { commit(key, on ? "true" : "false"); });
+        connect(check, &QCheckBox::toggled, this,
+                [this, key](bool on) { commit(key, on ? "true" : "false"); });
         return check;
     }
     auto* edit = new QLineEdit;
@@ -145,7 +153,8 @@ void Inspector::rebuild() {
         return;
     }
     m_title->setText("<b>" + QString::fromStdString(p->tag).toHtmlEscaped() + "</b> — " +
-                     QString::fromUtf8(kindInfo(p->kind).name.data(), static_cast<int>(kindInfo(p->kind).name.size())));
+                     QString::fromUtf8(kindInfo(p->kind).name.data(),
+                                       static_cast<int>(kindInfo(p->kind).name.size())));
     auto* tag = new QLineEdit(QString::fromStdString(p->tag));
     tag->setObjectName("field_tag");
     connect(tag, &QLineEdit::editingFinished, this, [this, tag] {
@@ -157,7 +166,8 @@ void Inspector::rebuild() {
     for (const auto& spec : kindInfo(p->kind).fields) {
         QString label = QString::fromUtf8(spec.label.data(), static_cast<int>(spec.label.size()));
         if (!spec.unit.empty())
-            label += " (" + QString::fromUtf8(spec.unit.data(), static_cast<int>(spec.unit.size())) + ")";
+            label += " (" +
+                     QString::fromUtf8(spec.unit.data(), static_cast<int>(spec.unit.size())) + ")";
         m_form->addRow(label, editorFor(spec, *p));
     }
 }

@@ -10,6 +10,8 @@
 #include "curves_panel.h"
 #include "findings_panel.h"
 #include "inspector.h"
+#include "io/drawing_file.h"
+#include "model/part_defaults.h"
 #include "part_item.h"
 #include "parts_palette.h"
 #include "rules/report_format.h"
@@ -18,8 +20,6 @@
 #include "sheet_view.h"
 #include "title_block_dialog.h"
 #include "util/log.h"
-#include "io/drawing_file.h"
-#include "model/part_defaults.h"
 
 #include <QAction>
 #include <QApplication>
@@ -41,14 +41,15 @@ namespace lineward::ui {
 
 MainWindow::MainWindow(std::shared_ptr<const Tables> tables, QWidget* parent)
     : QMainWindow(parent), m_doc(std::move(tables)), m_scene(new SheetScene(m_doc, this)),
-      m_view(new SheetView(m_scene)), m_findings(new FindingsPanel(m_doc)), m_inspector(new Inspector(m_doc)),
-      m_palette(new PartsPalette), m_schedules(new SchedulesPanel(m_doc)), m_curves(new CurvesPanel(m_doc)),
-      m_counts(new QLabel),
-      m_autosave(new QTimer(this)) {
+      m_view(new SheetView(m_scene)), m_findings(new FindingsPanel(m_doc)),
+      m_inspector(new Inspector(m_doc)), m_palette(new PartsPalette),
+      m_schedules(new SchedulesPanel(m_doc)), m_curves(new CurvesPanel(m_doc)),
+      m_counts(new QLabel), m_autosave(new QTimer(this)) {
     setObjectName("mainWindow");
     setAcceptDrops(true);
     setCentralWidget(m_view);
-    auto dock = [this](QWidget* w, const QString& title, const char* name, Qt::DockWidgetArea area) {
+    auto dock = [this](QWidget* w, const QString& title, const char* name,
+                       Qt::DockWidgetArea area) {
         auto* d = new QDockWidget(title, this);
         d->setObjectName(name);
         d->setWidget(w);
@@ -74,8 +75,10 @@ MainWindow::MainWindow(std::shared_ptr<const Tables> tables, QWidget* parent)
         if (auto why = applyFix(fnd); !why.isEmpty())
             QMessageBox::warning(this, tr("Cannot apply fix"), why);
     });
-    connect(m_palette, &PartsPalette::kindChosen, m_view, [this](PartKind k) { m_view->setPlaceKind(k); });
-    connect(m_view, &SheetView::placeRequested, this, [this](PartKind k, QPointF at) { placePart(k, at); });
+    connect(m_palette, &PartsPalette::kindChosen, m_view,
+            [this](PartKind k) { m_view->setPlaceKind(k); });
+    connect(m_view, &SheetView::placeRequested, this,
+            [this](PartKind k, QPointF at) { placePart(k, at); });
     connect(m_view, &SheetView::connectRequested, this, &MainWindow::connectTerminals);
     connect(m_view, &SheetView::moveFinished, this,
             [this](std::vector<PartId> ids, std::vector<QPointF> from, std::vector<QPointF> to) {
@@ -115,7 +118,9 @@ MainWindow::~MainWindow() {
     QFile::remove(m_recoveryPath);
 }
 
-QString MainWindow::recoveryPath() const { return m_recoveryPath; }
+QString MainWindow::recoveryPath() const {
+    return m_recoveryPath;
+}
 
 void MainWindow::autosave() {
     if (!m_doc.isModified())
@@ -158,8 +163,8 @@ PartId MainWindow::placePart(PartKind kind, QPointF at) {
     p.x = at.x();
     p.y = at.y();
     const PartId id = p.id;
-    m_doc.undoStack().push(new AddPartsCommand(m_doc, {p}, {}, {},
-                                               tr("Place %1").arg(QString::fromStdString(p.tag))));
+    m_doc.undoStack().push(
+        new AddPartsCommand(m_doc, {p}, {}, {}, tr("Place %1").arg(QString::fromStdString(p.tag))));
     m_scene->clearSelection();
     if (auto* item = m_scene->itemFor(id))
         item->setSelected(true);
@@ -188,12 +193,14 @@ void MainWindow::rotateSelection() {
         after.push_back(p);
     }
     if (!after.empty())
-        m_doc.undoStack().push(new SetFieldsCommand(m_doc, after, tr("Rotate %1 parts").arg(after.size())));
+        m_doc.undoStack().push(
+            new SetFieldsCommand(m_doc, after, tr("Rotate %1 parts").arg(after.size())));
 }
 
 QString MainWindow::applyFix(const Finding& f) {
     if (!f.fix || f.fix->changes.empty())
-        return tr("This finding's fix is advice only: %1").arg(QString::fromStdString(f.fix ? f.fix->description : ""));
+        return tr("This finding's fix is advice only: %1")
+            .arg(QString::fromStdString(f.fix ? f.fix->description : ""));
     std::map<std::uint32_t, Part> edited;
     for (const auto& c : f.fix->changes) {
         const Part* p = m_doc.drawing().part(c.part);
@@ -206,7 +213,8 @@ QString MainWindow::applyFix(const Finding& f) {
     std::vector<Part> after;
     for (auto& [id, p] : edited)
         after.push_back(p);
-    m_doc.undoStack().push(new SetFieldsCommand(m_doc, after, tr("Apply fix: %1").arg(QString::fromStdString(f.fix->description))));
+    m_doc.undoStack().push(new SetFieldsCommand(
+        m_doc, after, tr("Apply fix: %1").arg(QString::fromStdString(f.fix->description))));
     return {};
 }
 
@@ -223,7 +231,8 @@ void MainWindow::refreshStatus() {
 }
 
 void MainWindow::refreshTitle() {
-    const QString name = m_doc.filePath().isEmpty() ? tr("Untitled") : QFileInfo(m_doc.filePath()).fileName();
+    const QString name =
+        m_doc.filePath().isEmpty() ? tr("Untitled") : QFileInfo(m_doc.filePath()).fileName();
     setWindowTitle(name + (m_doc.isModified() ? " *" : "") + " — " + tr("Lineward"));
 }
 
@@ -250,16 +259,17 @@ void MainWindow::editTitleBlock() {
 bool MainWindow::maybeSave() {
     if (!m_doc.isModified())
         return true;
-    const auto answer = QMessageBox::question(this, tr("Unsaved changes"),
-                                              tr("The drawing has unsaved changes. Save them?"),
-                                              QMessageBox::Save | QMessageBox::Discard | QMessageBox::Cancel);
+    const auto answer = QMessageBox::question(
+        this, tr("Unsaved changes"), tr("The drawing has unsaved changes. Save them?"),
+        QMessageBox::Save | QMessageBox::Discard | QMessageBox::Cancel);
     if (answer == QMessageBox::Cancel)
         return false;
     if (answer == QMessageBox::Discard)
         return true;
     QString path = m_doc.filePath();
     if (path.isEmpty())
-        path = QFileDialog::getSaveFileName(this, tr("Save drawing"), {}, tr("Lineward drawings (*.lineward)"));
+        path = QFileDialog::getSaveFileName(this, tr("Save drawing"), {},
+                                            tr("Lineward drawings (*.lineward)"));
     if (path.isEmpty())
         return false;
     const QString why = saveTo(path);

@@ -1,41 +1,39 @@
 // Menus and the edit actions of the main window (clipboard, buckets), with the platform's
 // standard shortcuts.
-#include "main_window.h"
-
 #include "commands/add_parts_command.h"
 #include "commands/bucket_command.h"
 #include "findings_panel.h"
 #include "io/drawing_file.h"
+#include "main_window.h"
+#include "model/part_defaults.h"
+#include "part_item.h"
 #include "sheet_scene.h"
 #include "sheet_view.h"
 #include "submittal.h"
-#include "model/part_defaults.h"
-#include "part_item.h"
-
-#include <QDockWidget>
-#include <QStatusBar>
-#include <functional>
-#include <map>
 
 #include <QAction>
 #include <QApplication>
 #include <QClipboard>
-#include <QPrintDialog>
-#include <QPrintPreviewDialog>
-#include <QPrinter>
+#include <QDockWidget>
 #include <QFileDialog>
 #include <QInputDialog>
 #include <QMenuBar>
 #include <QMessageBox>
 #include <QMimeData>
+#include <QPrintDialog>
+#include <QPrintPreviewDialog>
+#include <QPrinter>
 #include <QSettings>
-
+#include <QStatusBar>
+#include <functional>
+#include <map>
 #include <set>
 
 namespace lineward::ui {
 
 namespace {
-QAction* menuAction(QMenu* menu, const QString& text, QKeySequence key, QObject* ctx, std::function<void()> fn) {
+QAction* menuAction(QMenu* menu, const QString& text, QKeySequence key, QObject* ctx,
+                    std::function<void()> fn) {
     auto* a = menu->addAction(text);
     a->setShortcut(key);
     QObject::connect(a, &QAction::triggered, ctx, std::move(fn));
@@ -68,7 +66,8 @@ void MainWindow::buildFileMenu() {
     menuAction(file, tr("&Open…"), QKeySequence::Open, this, [this] {
         if (!maybeSave())
             return;
-        const auto path = QFileDialog::getOpenFileName(this, tr("Open drawing"), {}, tr("Lineward drawings (*.lineward)"));
+        const auto path = QFileDialog::getOpenFileName(this, tr("Open drawing"), {},
+                                                       tr("Lineward drawings (*.lineward)"));
         if (!path.isEmpty())
             openFile(path);
     });
@@ -78,7 +77,8 @@ void MainWindow::buildFileMenu() {
         const auto path = QFileDialog::getSaveFileName(this, tr("Save drawing"), m_doc.filePath(),
                                                        tr("Lineward drawings (*.lineward)"));
         if (!path.isEmpty())
-            if (auto why = saveTo(path.endsWith(".lineward") ? path : path + ".lineward"); !why.isEmpty())
+            if (auto why = saveTo(path.endsWith(".lineward") ? path : path + ".lineward");
+                !why.isEmpty())
                 QMessageBox::warning(this, tr("Save failed"), why);
     };
     menuAction(file, tr("&Save"), QKeySequence::Save, this, [this, saveAs] {
@@ -94,7 +94,8 @@ void MainWindow::buildFileMenu() {
     menuAction(file, tr("Print Pre&view…"), QKeySequence(), this, [this] { printPreview(); });
     menuAction(file, tr("&Print…"), QKeySequence::Print, this, [this] { printSubmittal(); });
     menuAction(file, tr("Export Submittal &PDF…"), QKeySequence(), this, [this] {
-        const auto path = QFileDialog::getSaveFileName(this, tr("Export Submittal PDF"), {}, tr("PDF (*.pdf)"));
+        const auto path =
+            QFileDialog::getSaveFileName(this, tr("Export Submittal PDF"), {}, tr("PDF (*.pdf)"));
         if (path.isEmpty())
             return;
         auto r = writeSubmittalPdf(path, m_doc.drawing(), m_doc.sharedTables(), SubmittalOptions{});
@@ -104,9 +105,11 @@ void MainWindow::buildFileMenu() {
             statusBar()->showMessage(tr("Wrote %1 (%2 pages)").arg(path).arg(r.pages), 8000);
     });
     menuAction(file, tr("Export One-line &SVG…"), QKeySequence(), this, [this] {
-        const auto path = QFileDialog::getSaveFileName(this, tr("Export one-line SVG"), {}, tr("SVG (*.svg)"));
+        const auto path =
+            QFileDialog::getSaveFileName(this, tr("Export one-line SVG"), {}, tr("SVG (*.svg)"));
         if (!path.isEmpty())
-            if (auto why = writeOneLineSvg(path, m_doc.drawing(), m_doc.sharedTables()); !why.isEmpty())
+            if (auto why = writeOneLineSvg(path, m_doc.drawing(), m_doc.sharedTables());
+                !why.isEmpty())
                 QMessageBox::warning(this, tr("Export failed"), why);
     });
     menuAction(file, tr("Export Schedules &CSV…"), QKeySequence(), this, [this] {
@@ -140,9 +143,12 @@ void MainWindow::buildEditMenu() {
             item->setSelected(true);
     });
     edit->addSeparator();
-    menuAction(edit, tr("&Rotate"), QKeySequence(tr("Ctrl+R")), this, [this] { rotateSelection(); });
-    menuAction(edit, tr("&Group as Bucket"), QKeySequence(tr("Ctrl+G")), this, [this] { groupSelectionAsBucket(); });
-    menuAction(edit, tr("Cancel Placing"), QKeySequence::Cancel, this, [this] { m_view->setPlaceKind(std::nullopt); });
+    menuAction(edit, tr("&Rotate"), QKeySequence(tr("Ctrl+R")), this,
+               [this] { rotateSelection(); });
+    menuAction(edit, tr("&Group as Bucket"), QKeySequence(tr("Ctrl+G")), this,
+               [this] { groupSelectionAsBucket(); });
+    menuAction(edit, tr("Cancel Placing"), QKeySequence::Cancel, this,
+               [this] { m_view->setPlaceKind(std::nullopt); });
 }
 
 void MainWindow::buildViewMenu() {
@@ -150,7 +156,8 @@ void MainWindow::buildViewMenu() {
     menuAction(view, tr("Zoom &In"), QKeySequence::ZoomIn, this, [this] { m_view->zoomBy(1.25); });
     menuAction(view, tr("Zoom &Out"), QKeySequence::ZoomOut, this, [this] { m_view->zoomBy(0.8); });
     menuAction(view, tr("&Fit Sheet"), QKeySequence(tr("Ctrl+0")), this, [this] {
-        m_view->fitInView(m_scene->itemsBoundingRect().adjusted(-20, -20, 20, 20), Qt::KeepAspectRatio);
+        m_view->fitInView(m_scene->itemsBoundingRect().adjusted(-20, -20, 20, 20),
+                          Qt::KeepAspectRatio);
     });
     view->addSeparator();
     for (auto* dock : findChildren<QDockWidget*>())
@@ -219,10 +226,13 @@ void MainWindow::paste() {
     const QMimeData* data = QApplication::clipboard()->mimeData();
     if (!data)
         return;
-    const QByteArray text = data->hasFormat(kClipboardMime) ? data->data(kClipboardMime) : data->text().toUtf8();
+    const QByteArray text =
+        data->hasFormat(kClipboardMime) ? data->data(kClipboardMime) : data->text().toUtf8();
     auto loaded = io::parseDrawing(text.toStdString(), "clipboard");
     if (!loaded) {
-        statusBar()->showMessage(tr("Clipboard holds no Lineward parts: %1").arg(QString::fromStdString(loaded.error->message)), 8000);
+        statusBar()->showMessage(tr("Clipboard holds no Lineward parts: %1")
+                                     .arg(QString::fromStdString(loaded.error->message)),
+                                 8000);
         return;
     }
     // New ids and tags after the drawing's own; the copy lands 40 units down and right.
@@ -244,7 +254,9 @@ void MainWindow::paste() {
     std::vector<Wire> wires;
     WireId nextWire = m_doc.drawing().nextWireId();
     for (const auto& w : src.wires()) {
-        wires.push_back(Wire{nextWire, {newId[w.a.part.value], w.a.terminal}, {newId[w.b.part.value], w.b.terminal}});
+        wires.push_back(Wire{nextWire,
+                             {newId[w.a.part.value], w.a.terminal},
+                             {newId[w.b.part.value], w.b.terminal}});
         nextWire = WireId(nextWire.value + 1);
     }
     std::vector<Bucket> buckets;
@@ -256,7 +268,8 @@ void MainWindow::paste() {
         buckets.push_back(nb);
         nextBucket = BucketId(nextBucket.value + 1);
     }
-    m_doc.undoStack().push(new AddPartsCommand(m_doc, parts, wires, buckets, tr("Paste %1 parts").arg(parts.size())));
+    m_doc.undoStack().push(
+        new AddPartsCommand(m_doc, parts, wires, buckets, tr("Paste %1 parts").arg(parts.size())));
     m_scene->clearSelection();
     for (const auto& p : parts)
         if (auto* item = m_scene->itemFor(p.id))
@@ -268,14 +281,16 @@ void MainWindow::groupSelectionAsBucket() {
     if (ids.empty())
         return;
     bool ok = false;
-    const QString tag = QInputDialog::getText(this, tr("Group as bucket"), tr("Bucket tag"), QLineEdit::Normal,
-                                              QString("B-%1").arg(m_doc.drawing().nextBucketId().value), &ok);
+    const QString tag =
+        QInputDialog::getText(this, tr("Group as bucket"), tr("Bucket tag"), QLineEdit::Normal,
+                              QString("B-%1").arg(m_doc.drawing().nextBucketId().value), &ok);
     if (!ok || tag.trimmed().isEmpty())
         return;
-    const double sccr = QInputDialog::getDouble(this, tr("Group as bucket"), tr("Short-circuit current rating (kA)"),
-                                                65, 1, 300, 1, &ok);
+    const double sccr = QInputDialog::getDouble(
+        this, tr("Group as bucket"), tr("Short-circuit current rating (kA)"), 65, 1, 300, 1, &ok);
     if (ok)
-        m_doc.undoStack().push(new GroupBucketCommand(m_doc, ids, tag.trimmed().toStdString(), sccr));
+        m_doc.undoStack().push(
+            new GroupBucketCommand(m_doc, ids, tag.trimmed().toStdString(), sccr));
 }
 
 } // namespace lineward::ui

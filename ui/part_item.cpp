@@ -8,14 +8,14 @@
 #include <QPainter>
 #include <QStyleOptionGraphicsItem>
 #include <QSvgRenderer>
-
+#include <cmath>
 #include <map>
 #include <memory>
 
-#include <cmath>
-
 // Qt resources in a static library must be registered by hand, outside any namespace.
-static void registerSymbols() { Q_INIT_RESOURCE(symbols); }
+static void registerSymbols() {
+    Q_INIT_RESOURCE(symbols);
+}
 
 namespace lineward::ui {
 
@@ -29,7 +29,8 @@ QSvgRenderer* symbolRenderer(PartKind kind) {
         static const bool registered = (registerSymbols(), true);
         (void)registered;
         const auto key = kindInfo(kind).key;
-        auto r = std::make_unique<QSvgRenderer>(":/symbols/" + QString::fromUtf8(key.data(), static_cast<int>(key.size())) + ".svg");
+        auto r = std::make_unique<QSvgRenderer>(
+            ":/symbols/" + QString::fromUtf8(key.data(), static_cast<int>(key.size())) + ".svg");
         it = cache.emplace(kind, r->isValid() ? std::move(r) : nullptr).first;
     }
     return it->second.get();
@@ -62,7 +63,9 @@ void PartItem::setPart(const Part& part) {
     update();
 }
 
-int PartItem::terminalCount() const { return static_cast<int>(kindInfo(m_part.kind).terminals.size()); }
+int PartItem::terminalCount() const {
+    return static_cast<int>(kindInfo(m_part.kind).terminals.size());
+}
 
 QPainterPath PartItem::shape() const {
     QPainterPath p;
@@ -190,12 +193,11 @@ void PartItem::paint(QPainter* p, const QStyleOptionGraphicsItem* option, QWidge
                 QString::fromStdString(m_part.tag));
     p->setFont(f);
     p->setPen(QColor(0x55, 0x5f, 0x6a));
-    p->drawText(QRectF(textX, textY + 13, 130, 14), Qt::AlignLeft | Qt::AlignVCenter,
-                ratingText());
+    p->drawText(QRectF(textX, textY + 13, 130, 14), Qt::AlignLeft | Qt::AlignVCenter, ratingText());
     if (m_badge) {
         // upper right of the symbol, between it and the tag
-        const QPointF at = m_part.kind == PartKind::Bus ? QPointF(m_barRight + 2, -12)
-                                                        : QPointF(14, -14);
+        const QPointF at =
+            m_part.kind == PartKind::Bus ? QPointF(m_barRight + 2, -12) : QPointF(14, -14);
         p->save();
         p->translate(at);
         p->setPen(QPen(Qt::white, 1.2));

@@ -13,22 +13,28 @@ PartsPalette::PartsPalette(QWidget* parent) : QListWidget(parent) {
     setDragDropMode(QAbstractItemView::DragOnly);
     for (int k = 0; k < kPartKindCount; ++k) {
         const auto& info = kindInfo(static_cast<PartKind>(k));
-        auto* item = new QListWidgetItem(QString::fromUtf8(info.name.data(), static_cast<int>(info.name.size())), this);
+        auto* item = new QListWidgetItem(
+            QString::fromUtf8(info.name.data(), static_cast<int>(info.name.size())), this);
         item->setData(Qt::UserRole, k);
-        item->setToolTip(tr("Click, then click on the Sheet to place (Shift-click to place several); or drag"));
+        item->setToolTip(
+            tr("Click, then click on the Sheet to place (Shift-click to place several); or drag"));
     }
     connect(this, &QListWidget::itemClicked, this, [this](QListWidgetItem* item) {
         emit kindChosen(static_cast<PartKind>(item->data(Qt::UserRole).toInt()));
     });
 }
 
-QStringList PartsPalette::mimeTypes() const { return {kPartKindMime}; }
+QStringList PartsPalette::mimeTypes() const {
+    return {kPartKindMime};
+}
 
 QMimeData* PartsPalette::mimeData(const QList<QListWidgetItem*>& items) const {
     auto* data = new QMimeData;
     if (!items.isEmpty()) {
-        const auto& info = kindInfo(static_cast<PartKind>(items.first()->data(Qt::UserRole).toInt()));
-        data->setData(kPartKindMime, QByteArray(info.key.data(), static_cast<int>(info.key.size())));
+        const auto& info =
+            kindInfo(static_cast<PartKind>(items.first()->data(Qt::UserRole).toInt()));
+        data->setData(kPartKindMime,
+                      QByteArray(info.key.data(), static_cast<int>(info.key.size())));
     }
     return data;
 }

@@ -22,7 +22,8 @@ void SchedulesPanel::refresh() {
         delete w;
     }
     for (const auto& s : buildSchedules(m_doc.drawing(), m_doc.tables())) {
-        auto* table = new QTableWidget(static_cast<int>(s.rows.size()), static_cast<int>(s.headers.size()));
+        auto* table =
+            new QTableWidget(static_cast<int>(s.rows.size()), static_cast<int>(s.headers.size()));
         table->setObjectName(QString::fromStdString("schedule_" + s.name));
         QStringList headers;
         for (const auto& h : s.headers)

@@ -39,6 +39,8 @@ QPainterPath severityShape(Severity s, qreal size) {
     return path;
 }
 
-QString severityLabel(Severity s) { return QString::fromUtf8(severityName(s).data()); }
+QString severityLabel(Severity s) {
+    return QString::fromUtf8(severityName(s).data());
+}
 
 } // namespace lineward::ui

@@ -121,7 +121,8 @@ void SheetScene::routeWires() {
     // A bus bar spans every part wired to it.
     std::unordered_map<PartId, std::pair<qreal, qreal>> span;
     for (auto& [id, w] : m_wires) {
-        for (auto [bus, other] : {std::pair{w->wire().a, w->wire().b}, std::pair{w->wire().b, w->wire().a}}) {
+        for (auto [bus, other] :
+             {std::pair{w->wire().a, w->wire().b}, std::pair{w->wire().b, w->wire().a}}) {
             PartItem* bi = itemFor(bus.part);
             PartItem* oi = itemFor(other.part);
             if (!bi || !oi || bi->part().kind != PartKind::Bus || oi->part().kind == PartKind::Bus)
@@ -135,14 +136,16 @@ void SheetScene::routeWires() {
     for (auto& [id, item] : m_parts)
         if (item->part().kind == PartKind::Bus) {
             auto it = span.find(id);
-            item->setBarSpan(it == span.end() ? -60 : it->second.first - 30, it == span.end() ? 60 : it->second.second + 30);
+            item->setBarSpan(it == span.end() ? -60 : it->second.first - 30,
+                             it == span.end() ? 60 : it->second.second + 30);
         }
     for (auto& [id, w] : m_wires) {
         PartItem* a = itemFor(w->wire().a.part);
         PartItem* b = itemFor(w->wire().b.part);
         if (!a || !b)
             continue;
-        const QPointF pa = a->terminalScenePos(w->wire().a.terminal, b->terminalScenePos(w->wire().b.terminal));
+        const QPointF pa =
+            a->terminalScenePos(w->wire().a.terminal, b->terminalScenePos(w->wire().b.terminal));
         const QPointF pb = b->terminalScenePos(w->wire().b.terminal, pa);
         w->route(pa, pb);
     }

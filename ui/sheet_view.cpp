@@ -13,7 +13,8 @@
 
 namespace lineward::ui {
 
-SheetView::SheetView(SheetScene* scene, QWidget* parent) : QGraphicsView(scene, parent), m_scene(scene) {
+SheetView::SheetView(SheetScene* scene, QWidget* parent)
+    : QGraphicsView(scene, parent), m_scene(scene) {
     setObjectName("sheetView");
     setRenderHint(QPainter::Antialiasing);
     setDragMode(QGraphicsView::RubberBandDrag);
@@ -26,11 +27,14 @@ void SheetView::setPlaceKind(std::optional<PartKind> kind) {
     viewport()->setCursor(kind ? Qt::CrossCursor : Qt::ArrowCursor);
 }
 
-void SheetView::zoomBy(qreal factor) { scale(factor, factor); }
+void SheetView::zoomBy(qreal factor) {
+    scale(factor, factor);
+}
 
 std::optional<WireEnd> SheetView::terminalAt(QPointF scenePos) const {
     const qreal reach = 7.0;
-    for (auto* gi : m_scene->items(QRectF(scenePos - QPointF(reach, reach), QSizeF(2 * reach, 2 * reach)))) {
+    for (auto* gi :
+         m_scene->items(QRectF(scenePos - QPointF(reach, reach), QSizeF(2 * reach, 2 * reach)))) {
         auto* item = qgraphicsitem_cast<PartItem*>(gi);
         if (!item)
             continue;
@@ -43,7 +47,9 @@ std::optional<WireEnd> SheetView::terminalAt(QPointF scenePos) const {
     return std::nullopt;
 }
 
-static QPointF snapped(QPointF p) { return QPointF(std::round(p.x() / 10.0) * 10.0, std::round(p.y() / 10.0) * 10.0); }
+static QPointF snapped(QPointF p) {
+    return QPointF(std::round(p.x() / 10.0) * 10.0, std::round(p.y() / 10.0) * 10.0);
+}
 
 void SheetView::mousePressEvent(QMouseEvent* e) {
     const QPointF sp = mapToScene(e->pos());
@@ -61,7 +67,8 @@ void SheetView::mousePressEvent(QMouseEvent* e) {
     if (e->button() == Qt::LeftButton) {
         if (auto t = terminalAt(sp)) {
             m_wireFrom = t;
-            m_rubberWire = m_scene->addLine(QLineF(sp, sp), QPen(QColor(0x1d, 0x7f, 0xb8), 1.2, Qt::DashLine));
+            m_rubberWire =
+                m_scene->addLine(QLineF(sp, sp), QPen(QColor(0x1d, 0x7f, 0xb8), 1.2, Qt::DashLine));
             return;
         }
     }
@@ -99,7 +106,8 @@ void SheetView::mouseReleaseEvent(QMouseEvent* e) {
         delete m_rubberWire;
         m_rubberWire = nullptr;
         auto to = terminalAt(mapToScene(e->pos()));
-        if (to && m_wireFrom && !(to->part == m_wireFrom->part && to->terminal == m_wireFrom->terminal))
+        if (to && m_wireFrom &&
+            !(to->part == m_wireFrom->part && to->terminal == m_wireFrom->terminal))
             emit connectRequested(*m_wireFrom, *to);
         m_wireFrom.reset();
         return;
@@ -130,7 +138,9 @@ void SheetView::dragEnterEvent(QDragEnterEvent* e) {
         e->acceptProposedAction();
 }
 
-void SheetView::dragMoveEvent(QDragMoveEvent* e) { e->acceptProposedAction(); }
+void SheetView::dragMoveEvent(QDragMoveEvent* e) {
+    e->acceptProposedAction();
+}
 
 void SheetView::dropEvent(QDropEvent* e) {
     if (e->mimeData()->hasFormat(kPartKindMime)) {

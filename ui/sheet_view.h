@@ -26,7 +26,8 @@ public:
 signals:
     void placeRequested(lineward::PartKind kind, QPointF scenePos);
     void connectRequested(lineward::WireEnd a, lineward::WireEnd b);
-    void moveFinished(std::vector<lineward::PartId> parts, std::vector<QPointF> from, std::vector<QPointF> to);
+    void moveFinished(std::vector<lineward::PartId> parts, std::vector<QPointF> from,
+                      std::vector<QPointF> to);
     void filesDropped(QStringList paths);
 
 protected:

@@ -35,10 +35,16 @@ struct PageCtx {
     int pageCount = 0;
     QString date;
     QRectF page() const { return QRectF(18, 18, dev.width() - 36, dev.height() - 36); }
-    QRectF body() const { QRectF r = page(); r.setBottom(r.bottom() - kTitleH - 6); return r.adjusted(8, 8, -8, -8); }
+    QRectF body() const {
+        QRectF r = page();
+        r.setBottom(r.bottom() - kTitleH - 6);
+        return r.adjusted(8, 8, -8, -8);
+    }
 };
 
-QString qs(const std::string& s) { return QString::fromStdString(s); }
+QString qs(const std::string& s) {
+    return QString::fromStdString(s);
+}
 
 void titleBlock(PageCtx& c, const QString& sheetTitle) {
     QPainter& p = c.p;
@@ -59,11 +65,12 @@ void titleBlock(PageCtx& c, const QString& sheetTitle) {
     big.setPointSizeF(10);
     big.setBold(true);
     p.setFont(small);
-    p.drawText(QRectF(tb.left() + 4, tb.top() + 3, x1 - tb.left() - 8, kTitleH - 6), Qt::TextWordWrap,
-               QString("CAUTION — ") + QString::fromUtf8(kSafetyCaution));
+    p.drawText(QRectF(tb.left() + 4, tb.top() + 3, x1 - tb.left() - 8, kTitleH - 6),
+               Qt::TextWordWrap, QString("CAUTION — ") + QString::fromUtf8(kSafetyCaution));
     p.drawText(QRectF(x1 + 4, tb.top() + 3, x2 - x1 - 8, 12), "PROJECT");
     p.setFont(big);
-    p.drawText(QRectF(x1 + 4, tb.top() + 14, x2 - x1 - 8, 20), Qt::TextWordWrap, qs(c.d.sheet.project));
+    p.drawText(QRectF(x1 + 4, tb.top() + 14, x2 - x1 - 8, 20), Qt::TextWordWrap,
+               qs(c.d.sheet.project));
     p.setFont(small);
     p.drawText(QRectF(x1 + 4, tb.top() + 40, x2 - x1 - 8, 12), "TITLE");
     p.setFont(big);
@@ -72,12 +79,14 @@ void titleBlock(PageCtx& c, const QString& sheetTitle) {
     p.setFont(small);
     QString revs = "REV   DATE         BY            NOTE\n";
     for (const auto& r : c.d.sheet.revisions)
-        revs += qs(r.rev).leftJustified(6) + qs(r.date).leftJustified(13) + qs(r.by).leftJustified(14) + qs(r.note) + "\n";
+        revs += qs(r.rev).leftJustified(6) + qs(r.date).leftJustified(13) +
+                qs(r.by).leftJustified(14) + qs(r.note) + "\n";
     p.drawText(QRectF(x2 + 4, tb.top() + 3, x3 - x2 - 8, kTitleH - 6), Qt::TextWordWrap, revs);
-    p.drawText(QRectF(x3 + 4, tb.top() + 3, tb.right() - x3 - 8, kTitleH - 6), Qt::TextWordWrap,
-               QString("DRAWING %1\nSHEET %2 OF %3\nDRAWN %4\nCHECKED %5\nDATE %6\nRULE SET %7\nLineward")
-                   .arg(qs(c.d.sheet.drawingNo), QString::number(c.pageNo), QString::number(c.pageCount),
-                        qs(c.d.sheet.drawnBy), qs(c.d.sheet.checkedBy), c.date, qs(c.d.sheet.ruleSet)));
+    p.drawText(
+        QRectF(x3 + 4, tb.top() + 3, tb.right() - x3 - 8, kTitleH - 6), Qt::TextWordWrap,
+        QString("DRAWING %1\nSHEET %2 OF %3\nDRAWN %4\nCHECKED %5\nDATE %6\nRULE SET %7\nLineward")
+            .arg(qs(c.d.sheet.drawingNo), QString::number(c.pageNo), QString::number(c.pageCount),
+                 qs(c.d.sheet.drawnBy), qs(c.d.sheet.checkedBy), c.date, qs(c.d.sheet.ruleSet)));
 }
 
 bool nextPage(PageCtx& c) {
@@ -88,7 +97,8 @@ bool nextPage(PageCtx& c) {
 }
 
 // Rows of text laid out over as many pages as they need.
-void textPages(PageCtx& c, const QString& title, const std::vector<QStringList>& rows, const std::vector<double>& widths) {
+void textPages(PageCtx& c, const QString& title, const std::vector<QStringList>& rows,
+               const std::vector<double>& widths) {
     QFont f = c.p.font();
     f.setPointSizeF(8);
     std::size_t i = 0;
@@ -150,8 +160,10 @@ void paintOneLine(PageCtx& c, SheetScene& scene, int& sheets, const SubmittalOpt
         for (int k = 0; k < cols; ++k) {
             if (r || k)
                 nextPage(c);
-            titleBlock(c, QString("One-line, part %1 of %2").arg(r * cols + k + 1).arg(rows * cols));
-            const QRectF part(src.left() + k * tile.width(), src.top() + r * tile.height(), tile.width(), tile.height());
+            titleBlock(c,
+                       QString("One-line, part %1 of %2").arg(r * cols + k + 1).arg(rows * cols));
+            const QRectF part(src.left() + k * tile.width(), src.top() + r * tile.height(),
+                              tile.width(), tile.height());
             c.p.save();
             c.p.setClipRect(body);
             scene.render(&c.p, body, part, Qt::KeepAspectRatio);
@@ -177,11 +189,14 @@ void paintOneLine(PageCtx& c, SheetScene& scene, int& sheets, const SubmittalOpt
             if (k + 1 < cols)
                 edge(QLineF(body.topRight(), body.bottomRight()), first + r * cols + k + 1, true);
             if (k > 0)
-                edge(QLineF(body.topLeft() + QPointF(16, 0), body.bottomLeft() + QPointF(16, 0)), first + r * cols + k - 1, true);
+                edge(QLineF(body.topLeft() + QPointF(16, 0), body.bottomLeft() + QPointF(16, 0)),
+                     first + r * cols + k - 1, true);
             if (r + 1 < rows)
-                edge(QLineF(body.bottomLeft(), body.bottomRight()), first + (r + 1) * cols + k, false);
+                edge(QLineF(body.bottomLeft(), body.bottomRight()), first + (r + 1) * cols + k,
+                     false);
             if (r > 0)
-                edge(QLineF(body.topLeft() + QPointF(0, 16), body.topRight() + QPointF(0, 16)), first + (r - 1) * cols + k, false);
+                edge(QLineF(body.topLeft() + QPointF(0, 16), body.topRight() + QPointF(0, 16)),
+                     first + (r - 1) * cols + k, false);
         }
     sheets = rows * cols;
 }
@@ -195,20 +210,24 @@ std::vector<std::vector<QStringList>> findingRows(const Drawing& d, const CheckR
                 t << qs(p->tag);
         return t.join(", ");
     };
-    std::vector<QStringList> open{{"\x01Severity", "Rule", "Clause", "Parts", "Computed / limit", "Finding"}};
+    std::vector<QStringList> open{
+        {"\x01Severity", "Rule", "Clause", "Parts", "Computed / limit", "Finding"}};
     std::vector<QStringList> accepted{{"\x01Rule", "Parts", "By", "Date", "Note"}};
     for (const auto& f : r.findings) {
         auto n = [](double v) {
             return QString::number(v, 'f', std::abs(v) < 10 ? 2 : std::abs(v) < 1000 ? 1 : 0);
         };
-        const QString vs = f.computed && f.limit ? n(*f.computed) + " / " + n(*f.limit) + " " + qs(f.unit) : QString();
+        const QString vs = f.computed && f.limit
+                               ? n(*f.computed) + " / " + n(*f.limit) + " " + qs(f.unit)
+                               : QString();
         if (f.accepted) {
             for (const auto& a : d.accepted())
                 if (a.rule == f.ruleId && !f.parts.empty() &&
                     std::find(a.parts.begin(), a.parts.end(), f.parts.front()) != a.parts.end())
                     accepted.push_back({qs(f.ruleId), tags(f), qs(a.by), qs(a.date), qs(a.note)});
         } else if (f.severity != Severity::Note) {
-            open.push_back({qs(std::string(severityName(f.severity))), qs(f.ruleId), qs(f.clause), tags(f), vs, qs(f.message)});
+            open.push_back({qs(std::string(severityName(f.severity))), qs(f.ruleId), qs(f.clause),
+                            tags(f), vs, qs(f.message)});
         }
     }
     if (open.size() == 1)
@@ -247,8 +266,8 @@ struct SubmittalData {
 };
 
 // Lays out and paints every page; returns the page count (and one-line sheet count).
-int paintPages(QPagedPaintDevice& dev, const SubmittalData& s, const SubmittalOptions& o, const QString& date,
-               int pageCount, int& oneLineSheets, QString& error) {
+int paintPages(QPagedPaintDevice& dev, const SubmittalData& s, const SubmittalOptions& o,
+               const QString& date, int pageCount, int& oneLineSheets, QString& error) {
     QPainter painter;
     if (!painter.begin(&dev)) {
         error = "cannot start painting on the output";
@@ -272,8 +291,9 @@ int paintPages(QPagedPaintDevice& dev, const SubmittalData& s, const SubmittalOp
                 row << qs(cell);
             rows.push_back(row);
         }
-        textPages(c, "Schedule — " + qs(sch.name), rows,
-                  std::vector<double>(sch.headers.size(), 1.0 / static_cast<double>(sch.headers.size())));
+        textPages(
+            c, "Schedule — " + qs(sch.name), rows,
+            std::vector<double>(sch.headers.size(), 1.0 / static_cast<double>(sch.headers.size())));
     }
     for (auto id : s.curveParts) {
         nextPage(c);
@@ -286,15 +306,16 @@ int paintPages(QPagedPaintDevice& dev, const SubmittalData& s, const SubmittalOp
 
 } // namespace
 
-SubmittalResult paintSubmittal(QPagedPaintDevice& dev, const Drawing& d, std::shared_ptr<const Tables> tables,
-                               const SubmittalOptions& o) {
+SubmittalResult paintSubmittal(QPagedPaintDevice& dev, const Drawing& d,
+                               std::shared_ptr<const Tables> tables, const SubmittalOptions& o) {
     SubmittalResult res;
     // The layout is in points (72 per inch); a printer is asked for that resolution and the
     // driver scales, so print, preview and PDF are the same vector pages.
     if (auto* printer = dynamic_cast<QPrinter*>(&dev))
         printer->setResolution(72);
     if (std::abs(dev.logicalDpiX() - 72) > 1) {
-        res.error = QString("the output must be set to 72 dots per inch (it is %1)").arg(dev.logicalDpiX());
+        res.error =
+            QString("the output must be set to 72 dots per inch (it is %1)").arg(dev.logicalDpiX());
         return res;
     }
     Document doc(tables);
@@ -328,8 +349,8 @@ SubmittalResult paintSubmittal(QPagedPaintDevice& dev, const Drawing& d, std::sh
     return res;
 }
 
-SubmittalResult writeSubmittalPdf(const QString& path, const Drawing& d, std::shared_ptr<const Tables> tables,
-                                  const SubmittalOptions& o) {
+SubmittalResult writeSubmittalPdf(const QString& path, const Drawing& d,
+                                  std::shared_ptr<const Tables> tables, const SubmittalOptions& o) {
     QPdfWriter pdf(path);
     pdf.setPageLayout(QPageLayout(o.paper, o.orientation, QMarginsF(0, 0, 0, 0)));
     pdf.setResolution(72);
@@ -341,7 +362,8 @@ SubmittalResult writeSubmittalPdf(const QString& path, const Drawing& d, std::sh
     return r;
 }
 
-QString writeOneLineSvg(const QString& path, const Drawing& d, std::shared_ptr<const Tables> tables) {
+QString writeOneLineSvg(const QString& path, const Drawing& d,
+                        std::shared_ptr<const Tables> tables) {
     Document doc(std::move(tables));
     doc.reset(d);
     doc.waitForCheck();

@@ -35,13 +35,14 @@ struct SubmittalResult {
     int oneLineSheets = 0;
     QString error;
 };
-SubmittalResult paintSubmittal(QPagedPaintDevice& device, const Drawing& d, std::shared_ptr<const Tables> tables,
-                               const SubmittalOptions& o);
+SubmittalResult paintSubmittal(QPagedPaintDevice& device, const Drawing& d,
+                               std::shared_ptr<const Tables> tables, const SubmittalOptions& o);
 /// paintSubmittal into a PDF file (vector, selectable text).
-SubmittalResult writeSubmittalPdf(const QString& path, const Drawing& d, std::shared_ptr<const Tables> tables,
-                                  const SubmittalOptions& o);
+SubmittalResult writeSubmittalPdf(const QString& path, const Drawing& d,
+                                  std::shared_ptr<const Tables> tables, const SubmittalOptions& o);
 /// The one-line drawing as SVG; the reason on failure.
-QString writeOneLineSvg(const QString& path, const Drawing& d, std::shared_ptr<const Tables> tables);
+QString writeOneLineSvg(const QString& path, const Drawing& d,
+                        std::shared_ptr<const Tables> tables);
 /// motors.csv, cables.csv, devices.csv (RFC 4180) into a folder; the reason on failure.
 QString writeScheduleCsvs(const QString& dir, const Drawing& d, const Tables& tables);
 

@@ -40,7 +40,8 @@ TitleBlockDialog::TitleBlockDialog(const SheetInfo& s, QWidget* parent)
     form->addRow(tr("Checked by"), m_checked);
     form->addRow(tr("Units"), m_units);
     auto* addRev = new QPushButton(tr("Add revision"));
-    connect(addRev, &QPushButton::clicked, this, [this] { m_revisions->insertRow(m_revisions->rowCount()); });
+    connect(addRev, &QPushButton::clicked, this,
+            [this] { m_revisions->insertRow(m_revisions->rowCount()); });
     auto* buttons = new QDialogButtonBox(QDialogButtonBox::Ok | QDialogButtonBox::Cancel);
     connect(buttons, &QDialogButtonBox::accepted, this, &QDialog::accept);
     connect(buttons, &QDialogButtonBox::rejected, this, &QDialog::reject);
@@ -62,7 +63,10 @@ SheetInfo TitleBlockDialog::result() const {
     s.units = m_units->currentIndex() == 1 ? UnitSystem::SI : UnitSystem::US;
     s.revisions.clear();
     for (int r = 0; r < m_revisions->rowCount(); ++r) {
-        auto cell = [&](int c) { return m_revisions->item(r, c) ? m_revisions->item(r, c)->text().toStdString() : std::string(); };
+        auto cell = [&](int c) {
+            return m_revisions->item(r, c) ? m_revisions->item(r, c)->text().toStdString()
+                                           : std::string();
+        };
         if (!cell(0).empty() || !cell(3).empty())
             s.revisions.push_back({cell(0), cell(1), cell(2), cell(3)});
     }

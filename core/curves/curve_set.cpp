@@ -34,7 +34,8 @@ PlotSeries sampled(const CurveSet& set, PlotSeries::Kind kind, std::string label
 }
 
 // The axis spans half the smallest pickup to twice the available fault, in whole decades.
-void chooseAxis(CurveSet& set, const std::vector<PathDevice>& devices, const std::optional<StartProfile>& prof) {
+void chooseAxis(CurveSet& set, const std::vector<PathDevice>& devices,
+                const std::optional<StartProfile>& prof) {
     double lo = 1e9;
     const double hi = std::max(set.faultA * 2, 100.0);
     for (const auto& dv : devices)
@@ -51,25 +52,33 @@ void addDeviceBands(CurveSet& set, const RuleContext& ctx, const std::vector<Pat
     for (const auto& dv : devices) {
         // A device across a transformer sees the current scaled by the voltage ratio.
         const Part& p = *dv.part;
-        const NodeIndex at = isTwoTerminal(p.kind) ? ctx.flow.lineNode(p.id) : ctx.net.nodeOf(p.id, 0);
+        const NodeIndex at =
+            isTwoTerminal(p.kind) ? ctx.flow.lineNode(p.id) : ctx.net.nodeOf(p.id, 0);
         const double v = ctx.net.graph()[at].nominalV;
         const double ratio = set.voltsBase > 0 && v > 0 ? set.voltsBase / v : 1.0;
         const TripCurve c = dv.curve;
         const std::string label =
-            c.label() + (ratio != 1.0 ? " (at " + std::to_string(static_cast<int>(set.voltsBase)) + " V)" : "");
-        set.series.push_back(sampled(set, PlotSeries::Kind::Band, label,
-                                     [&](double a) { return std::pair{c.minTime(a * ratio), c.maxTime(a * ratio)}; }));
+            c.label() +
+            (ratio != 1.0 ? " (at " + std::to_string(static_cast<int>(set.voltsBase)) + " V)" : "");
+        set.series.push_back(sampled(set, PlotSeries::Kind::Band, label, [&](double a) {
+            return std::pair{c.minTime(a * ratio), c.maxTime(a * ratio)};
+        }));
     }
 }
 
 void addMotorSeries(CurveSet& set, const Part& motor, const StartProfile& prof) {
     PlotSeries s{PlotSeries::Kind::StartProfile,
-                 motor.tag + " start: " + std::to_string(static_cast<int>(prof.lockedRotorA)) + " A for " +
-                     std::to_string(prof.accelS).substr(0, 4) + " s",
-                 {}, {}, {}};
-    const double pts[][2] = {{prof.asymA, 0.01},           {prof.asymA, StartProfile::kAsymS},
-                             {prof.lockedRotorA, StartProfile::kAsymS}, {prof.lockedRotorA, prof.accelS},
-                             {prof.runningA, prof.accelS}, {prof.runningA, 1000}};
+                 motor.tag + " start: " + std::to_string(static_cast<int>(prof.lockedRotorA)) +
+                     " A for " + std::to_string(prof.accelS).substr(0, 4) + " s",
+                 {},
+                 {},
+                 {}};
+    const double pts[][2] = {{prof.asymA, 0.01},
+                             {prof.asymA, StartProfile::kAsymS},
+                             {prof.lockedRotorA, StartProfile::kAsymS},
+                             {prof.lockedRotorA, prof.accelS},
+                             {prof.runningA, prof.accelS},
+                             {prof.runningA, 1000}};
     for (const auto& p : pts) {
         s.amps.push_back(p[0]);
         s.minS.push_back(p[1]);
@@ -77,7 +86,8 @@ void addMotorSeries(CurveSet& set, const Part& motor, const StartProfile& prof) 
     }
     set.series.push_back(std::move(s));
     // The motor's safe stall times at locked-rotor current, as markers.
-    PlotSeries stall{PlotSeries::Kind::StallPoints, motor.tag + " safe stall (hot, cold)", {}, {}, {}};
+    PlotSeries stall{
+        PlotSeries::Kind::StallPoints, motor.tag + " safe stall (hot, cold)", {}, {}, {}};
     for (const char* key : {"stall_hot_s", "stall_cold_s"})
         if (auto t = motor.number(key)) {
             stall.amps.push_back(prof.lockedRotorA);
@@ -98,11 +108,12 @@ void addDamageCurve(CurveSet& set, const RuleContext& ctx, const Part& part) {
         return;
     if (auto i2t = cableDamageI2t(ctx, *cable)) {
         const double v = *i2t;
-        set.series.push_back(sampled(set, PlotSeries::Kind::DamageCurve,
-                                     cable->tag + " damage (" + cable->word("size").value_or("") + ")", [&](double a) {
-                                         const double tt = v / (a * a);
-                                         return tt > 10 || tt < 0.01 ? std::pair{kNoTrip, kNoTrip} : std::pair{tt, tt};
-                                     }));
+        set.series.push_back(sampled(
+            set, PlotSeries::Kind::DamageCurve,
+            cable->tag + " damage (" + cable->word("size").value_or("") + ")", [&](double a) {
+                const double tt = v / (a * a);
+                return tt > 10 || tt < 0.01 ? std::pair{kNoTrip, kNoTrip} : std::pair{tt, tt};
+            }));
     }
 }
 
@@ -120,7 +131,8 @@ CurveSet buildCurveSet(const RuleContext& ctx, PartId id) {
     if (part->kind == PartKind::Motor)
         prof = startProfile(ctx, *part);
     chooseAxis(set, devices, prof);
-    const NodeIndex here = isTwoTerminal(part->kind) ? ctx.flow.lineNode(id) : ctx.net.nodeOf(id, 0);
+    const NodeIndex here =
+        isTwoTerminal(part->kind) ? ctx.flow.lineNode(id) : ctx.net.nodeOf(id, 0);
     set.voltsBase = ctx.net.graph()[here].nominalV;
     addDeviceBands(set, ctx, devices);
     if (prof)

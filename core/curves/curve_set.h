@@ -22,9 +22,9 @@ struct PlotSeries {
 struct CurveSet {
     std::string title;
     std::vector<PlotSeries> series;
-    double faultA = 0;            ///< available at the part (0: unknown)
-    double minA = 0.5, maxA = 1e5;///< current axis, whole decades
-    double voltsBase = 0;         ///< currents are referred to this voltage
+    double faultA = 0;             ///< available at the part (0: unknown)
+    double minA = 0.5, maxA = 1e5; ///< current axis, whole decades
+    double voltsBase = 0;          ///< currents are referred to this voltage
 };
 
 struct RuleContext;

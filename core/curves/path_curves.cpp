@@ -57,7 +57,8 @@ std::optional<double> cableDamageI2t(const RuleContext& ctx, const Part& c) {
     const bool al = c.word("material").value_or("cu") == "al";
     double perSet = 0;
     if (size.ends_with(" mm2")) {
-        const double k = ins >= 90 ? (al ? 94 : 143) : (al ? 76 : 115); // IEC 60364-4-43 (from memory)
+        const double k =
+            ins >= 90 ? (al ? 94 : 143) : (al ? 76 : 115); // IEC 60364-4-43 (from memory)
         perSet = std::pow(k * std::stod(size), 2);
     } else if (auto area = ctx.tables.areaCmil(size)) {
         const double t2 = ins >= 90 ? 250 : 150, k = al ? 0.0125 : 0.0297, base = al ? 228 : 234;

@@ -24,7 +24,8 @@ std::vector<PathDevice> devicesOnPath(const RuleContext& ctx, PartId part);
 /// A motor's starting current against time: (amps, seconds) corners of a step curve.
 struct StartProfile {
     double asymA = 0, lockedRotorA = 0, runningA = 0, accelS = 0;
-    static constexpr double kAsymS = 0.1; ///< asymmetrical inrush lasts a few cycles (common practice)
+    static constexpr double kAsymS =
+        0.1; ///< asymmetrical inrush lasts a few cycles (common practice)
     bool lraAssumed = false;
 };
 std::optional<StartProfile> startProfile(const RuleContext& ctx, const Part& motor);

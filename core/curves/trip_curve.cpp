@@ -31,7 +31,9 @@ double interpolate(const std::vector<CurvePoint>& pts, double amps, bool wantMax
     return kNoTrip;
 }
 
-std::string num(double v) { return formatNumber(std::round(v * 100) / 100); }
+std::string num(double v) {
+    return formatNumber(std::round(v * 100) / 100);
+}
 
 } // namespace
 
@@ -77,7 +79,9 @@ TripCurve TripCurve::ofBreaker(const Part& p) {
         c.m_d = p.number("inst_x").value_or(0) * c.m_ratingA;
         c.m_pickupA = 1.05 * ir;
         c.m_label = p.tag + " " + num(c.m_ratingA) + " A LSI, LT " + num(c.m_b) + " s" +
-                    (c.m_c > 0 ? ", ST " + num(c.m_c) + " A " + num(p.number("st_delay_s").value_or(0.1)) + " s" : "") +
+                    (c.m_c > 0 ? ", ST " + num(c.m_c) + " A " +
+                                     num(p.number("st_delay_s").value_or(0.1)) + " s"
+                               : "") +
                     (c.m_d > 0 ? ", I " + num(c.m_d) + " A" : "");
     } else {
         c.m_model = Model::ThermalMagnetic;
@@ -134,11 +138,13 @@ std::optional<TripCurve> TripCurve::of(const Part& p) {
         c.m_label = p.tag + " inst " + num(c.m_ratingA) + " A";
         return c;
     case PartKind::Fuse:
-        c.m_model = p.word("fuse_type").value_or("time_delay") == "fast" ? Model::FastFuse : Model::TimeDelayFuse;
+        c.m_model = p.word("fuse_type").value_or("time_delay") == "fast" ? Model::FastFuse
+                                                                         : Model::TimeDelayFuse;
         c.m_ratingA = p.number("amps").value_or(30);
         c.m_a = c.m_ratingA <= 30 ? 120 : 240; // UL 248 opening limit at 200 % (from memory)
         c.m_pickupA = 1.1 * c.m_ratingA;
-        c.m_label = p.tag + " " + num(c.m_ratingA) + " A " + (c.m_model == Model::FastFuse ? "fast" : "time-delay") + " fuse";
+        c.m_label = p.tag + " " + num(c.m_ratingA) + " A " +
+                    (c.m_model == Model::FastFuse ? "fast" : "time-delay") + " fuse";
         return c;
     case PartKind::Overload:
         return ofOverload(p);
@@ -160,7 +166,8 @@ double TripCurve::minTime(double amps) const {
     }
     case Model::Electronic: {
         const double mr = amps / m_a;
-        double t = mr <= 1.05 ? kNoTrip : 0.8 * m_b * 36.0 / (mr * mr); // LT I²t, −20 % (common practice)
+        double t =
+            mr <= 1.05 ? kNoTrip : 0.8 * m_b * 36.0 / (mr * mr); // LT I²t, −20 % (common practice)
         if (m_c > 0 && amps >= 0.9 * m_c)
             t = std::min(t, stDelay(amps)); // ST delay (flat or I²t), pickup ±10 %
         if (m_d > 0 && amps >= 0.9 * m_d)
@@ -207,8 +214,9 @@ double TripCurve::maxTime(double amps) const {
         // UL 248 opening limits (from memory): within 1 h at 135 %, within m_a seconds at 200 %.
         if (m < 1.35)
             return kNoTrip;
-        const double t = m <= 2 ? 3600.0 * std::pow(m_a / 3600.0, std::log(m / 1.35) / std::log(2 / 1.35))
-                                : m_a * std::pow(2.0 / m, 2.5);
+        const double t =
+            m <= 2 ? 3600.0 * std::pow(m_a / 3600.0, std::log(m / 1.35) / std::log(2 / 1.35))
+                   : m_a * std::pow(2.0 / m, 2.5);
         return std::max({t, 0.004, minTime(amps) * 1.2});
     }
     case Model::Overload:

@@ -24,7 +24,15 @@ std::optional<std::string> parseCurvePoints(const std::string& text, std::vector
 /// A protective part's band. Built from its ratings, or from its user points when it has them.
 class TripCurve {
 public:
-    enum class Model { ThermalMagnetic, Electronic, Instantaneous, TimeDelayFuse, FastFuse, Overload, Points };
+    enum class Model {
+        ThermalMagnetic,
+        Electronic,
+        Instantaneous,
+        TimeDelayFuse,
+        FastFuse,
+        Overload,
+        Points
+    };
 
     /// The band of a breaker, instantaneous-only breaker, fuse or overload relay; nothing for
     /// other parts.
@@ -48,11 +56,11 @@ private:
     static TripCurve ofBreaker(const Part& p);
     static TripCurve ofOverload(const Part& p);
     Model m_model = Model::Points;
-    double m_ratingA = 0;   ///< In, Ir, fuse rating or relay setting
+    double m_ratingA = 0; ///< In, Ir, fuse rating or relay setting
     double m_pickupA = 0;
     double m_a = 0, m_b = 0, m_c = 0, m_d = 0; ///< model parameters (see trip_curve.cpp)
-    double m_stDelayS = 0.1;                    ///< electronic short-time delay
-    bool m_stI2t = false;                       ///< short-time delay ramps as I²t below 10 × Ir
+    double m_stDelayS = 0.1;                   ///< electronic short-time delay
+    bool m_stI2t = false;                      ///< short-time delay ramps as I²t below 10 × Ir
     double stDelay(double amps) const;
     std::vector<CurvePoint> m_points;
     std::string m_label;

@@ -50,8 +50,9 @@ public:
         if (!root.is_object())
             throw Failure{"", "expected an object at the top of the file, found " +
                                   std::string(typeName(root))};
-        checkKeys(root, "", {"format", "version", "sheet", "revisions", "settings", "parts",
-                             "wires", "buckets", "accepted"});
+        checkKeys(root, "",
+                  {"format", "version", "sheet", "revisions", "settings", "parts", "wires",
+                   "buckets", "accepted"});
         if (!root.contains("format") || text(root.at("format"), "/format") != kFormatName)
             throw Failure{"/format", "expected \"format\": \"lineward\" (is this a Lineward "
                                      "drawing?)"};
@@ -85,8 +86,8 @@ private:
         if (!j.is_array())
             throw Failure{ptr, "expected a list, found " + std::string(typeName(j))};
         if (j.size() > max)
-            throw Failure{ptr, "list has " + std::to_string(j.size()) +
-                                   " items; at most " + std::to_string(max) + " are accepted"};
+            throw Failure{ptr, "list has " + std::to_string(j.size()) + " items; at most " +
+                                   std::to_string(max) + " are accepted"};
         return j;
     }
 
@@ -95,7 +96,8 @@ private:
             throw Failure{ptr, "expected an object, found " + std::string(typeName(j))};
     }
 
-    void checkKeys(const json& j, const std::string& ptr, std::initializer_list<std::string_view> keys) {
+    void checkKeys(const json& j, const std::string& ptr,
+                   std::initializer_list<std::string_view> keys) {
         for (const auto& [k, v] : j.items()) {
             bool known = false;
             for (auto key : keys)
@@ -137,8 +139,9 @@ private:
 
     void readSheet(const json& j, SheetInfo& s) {
         object(j, "/sheet");
-        checkKeys(j, "/sheet", {"title", "project", "drawing_no", "drawn_by", "checked_by",
-                                "units", "rule_set"});
+        checkKeys(
+            j, "/sheet",
+            {"title", "project", "drawing_no", "drawn_by", "checked_by", "units", "rule_set"});
         s.title = optText(j, "/sheet", "title");
         s.project = optText(j, "/sheet", "project");
         s.drawingNo = optText(j, "/sheet", "drawing_no");
@@ -147,14 +150,15 @@ private:
         if (j.contains("units")) {
             auto u = text(j.at("units"), "/sheet/units");
             if (u != "us" && u != "si")
-                throw Failure{"/sheet/units", "units must be \"us\" or \"si\", found \"" + u + "\""};
+                throw Failure{"/sheet/units",
+                              "units must be \"us\" or \"si\", found \"" + u + "\""};
             s.units = u == "si" ? UnitSystem::SI : UnitSystem::US;
         }
         if (j.contains("rule_set")) {
             s.ruleSet = text(j.at("rule_set"), "/sheet/rule_set");
             if (s.ruleSet != "NEC 2023")
-                throw Failure{"/sheet/rule_set", "rule set \"" + s.ruleSet +
-                                                     "\" is not available; use \"NEC 2023\""};
+                throw Failure{"/sheet/rule_set",
+                              "rule set \"" + s.ruleSet + "\" is not available; use \"NEC 2023\""};
         }
     }
 
@@ -182,9 +186,10 @@ private:
 
     void readSettings(const json& j, Settings& s) {
         object(j, "/settings");
-        checkKeys(j, "/settings", {"vdrop_branch_pct", "vdrop_total_pct", "start_dip_pct",
-                                   "start_terminal_pct", "coordination_margin_s", "ambient_c",
-                                   "asymmetry_factor", "start_pf", "motor_contribution_x"});
+        checkKeys(j, "/settings",
+                  {"vdrop_branch_pct", "vdrop_total_pct", "start_dip_pct", "start_terminal_pct",
+                   "coordination_margin_s", "ambient_c", "asymmetry_factor", "start_pf",
+                   "motor_contribution_x"});
         setting(j, "vdrop_branch_pct", s.vdropBranchPct, 0.1, 50);
         setting(j, "vdrop_total_pct", s.vdropTotalPct, 0.1, 50);
         setting(j, "start_dip_pct", s.startDipPct, 1, 90);
@@ -241,14 +246,13 @@ private:
                 if (r != 0 && r != 90 && r != 180 && r != 270)
                     throw Failure{fptr, "rot must be 0, 90, 180 or 270, found " + formatNumber(r)};
                 p.rotation = static_cast<int>(r);
-            }
-            else if (auto idx = fieldIndex(*kind, k)) {
+            } else if (auto idx = fieldIndex(*kind, k)) {
                 p.values[*idx] = fieldValue(fields[*idx], v, fptr);
                 if (auto why = validateField(fields[*idx], p.values[*idx]))
                     throw Failure{fptr, partName(p) + ": " + *why};
             } else {
-                throw Failure{fptr, std::string(kindInfo(*kind).name) + " has no rating '" + k +
-                                        "'"};
+                throw Failure{fptr,
+                              std::string(kindInfo(*kind).name) + " has no rating '" + k + "'"};
             }
         }
         for (std::size_t i = 0; i < fields.size(); ++i)
@@ -290,7 +294,8 @@ private:
         }
         const Part* p = d.part(PartId(id));
         if (!p)
-            throw Failure{ptr, "wire end names part " + std::to_string(id) + ", which does not exist"};
+            throw Failure{ptr,
+                          "wire end names part " + std::to_string(id) + ", which does not exist"};
         const auto term = s.substr(dot + 1);
         const auto& terms = kindInfo(p->kind).terminals;
         for (std::size_t t = 0; t < terms.size(); ++t)
@@ -313,7 +318,8 @@ private:
                 if (!j[i].contains(k))
                     throw Failure{ptr, std::string("wire has no \"") + k + "\""};
             Wire w{WireId(idValue(j[i].at("id"), ptr + "/id")),
-                   wireEnd(d, j[i].at("from"), ptr + "/from"), wireEnd(d, j[i].at("to"), ptr + "/to")};
+                   wireEnd(d, j[i].at("from"), ptr + "/from"),
+                   wireEnd(d, j[i].at("to"), ptr + "/to")};
             if (d.wire(w.id))
                 throw Failure{ptr + "/id", "duplicate wire id " + std::to_string(w.id.value)};
             if (w.a == w.b)
@@ -355,8 +361,8 @@ private:
             if (j[i].contains("sccr_ka")) {
                 const double v = number(j[i].at("sccr_ka"), ptr + "/sccr_ka");
                 if (v <= 0 || v > 300)
-                    throw Failure{ptr + "/sccr_ka", "sccr_ka " + formatNumber(v) +
-                                                        " kA is outside 0 to 300 kA"};
+                    throw Failure{ptr + "/sccr_ka",
+                                  "sccr_ka " + formatNumber(v) + " kA is outside 0 to 300 kA"};
                 b.sccrKa = v;
             }
             if (j[i].contains("parts"))
@@ -396,18 +402,19 @@ private:
 LoadResult failAt(std::string_view text, std::string_view file, std::size_t offset,
                   std::string message) {
     auto pos = textPosition(text, offset);
-    return LoadResult{std::nullopt, LoadError{std::string(file), pos.line, pos.column,
-                                              std::move(message)}};
+    return LoadResult{std::nullopt,
+                      LoadError{std::string(file), pos.line, pos.column, std::move(message)}};
 }
 
 } // namespace
 
-LoadResult parseDrawing(std::string_view text, std::string_view fileName, const FileLimits& limits) {
+LoadResult parseDrawing(std::string_view text, std::string_view fileName,
+                        const FileLimits& limits) {
     if (text.size() > limits.maxFileBytes)
-        return LoadResult{std::nullopt,
-                          LoadError{std::string(fileName), 0, 0,
-                                    "file is larger than " +
-                                        std::to_string(limits.maxFileBytes >> 20) + " MiB"}};
+        return LoadResult{
+            std::nullopt,
+            LoadError{std::string(fileName), 0, 0,
+                      "file is larger than " + std::to_string(limits.maxFileBytes >> 20) + " MiB"}};
     // Parse fast first; only a refused file is parsed again with every offset recorded, so
     // its message can name the line and column.
     JsonSyntaxError syntax;
@@ -434,10 +441,10 @@ LoadResult loadDrawing(const std::filesystem::path& path, const FileLimits& limi
     if (ec)
         return LoadResult{std::nullopt, LoadError{name, 0, 0, "cannot read: " + ec.message()}};
     if (size > limits.maxFileBytes)
-        return LoadResult{std::nullopt,
-                          LoadError{name, 0, 0,
-                                    "file is larger than " +
-                                        std::to_string(limits.maxFileBytes >> 20) + " MiB"}};
+        return LoadResult{
+            std::nullopt,
+            LoadError{name, 0, 0,
+                      "file is larger than " + std::to_string(limits.maxFileBytes >> 20) + " MiB"}};
     std::ifstream in(path, std::ios::binary);
     if (!in)
         return LoadResult{std::nullopt, LoadError{name, 0, 0, "cannot open for reading"}};

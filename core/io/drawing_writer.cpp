@@ -12,7 +12,8 @@ using ojson = nlohmann::ordered_json;
 std::string endName(const Drawing& d, const WireEnd& e) {
     const Part* p = d.part(e.part);
     std::string term = "?";
-    if (p && e.terminal >= 0 && static_cast<std::size_t>(e.terminal) < kindInfo(p->kind).terminals.size())
+    if (p && e.terminal >= 0 &&
+        static_cast<std::size_t>(e.terminal) < kindInfo(p->kind).terminals.size())
         term = std::string(kindInfo(p->kind).terminals[e.terminal]);
     return std::to_string(e.part.value) + "." + term;
 }
@@ -101,41 +102,53 @@ std::string serializeDrawing(const Drawing& d) {
     out += "  \"format\": \"" + std::string(kFormatName) + "\",\n";
     out += "  \"version\": " + std::to_string(kFormatVersion) + ",\n";
     out += "  \"sheet\": " + sheetJson(d.sheet).dump() + ",\n";
-    writeList(out, "revisions", d.sheet.revisions, [](const Revision& r) {
-        ojson j;
-        j["rev"] = r.rev;
-        j["date"] = r.date;
-        j["by"] = r.by;
-        j["note"] = r.note;
-        return j;
-    }, false);
+    writeList(
+        out, "revisions", d.sheet.revisions,
+        [](const Revision& r) {
+            ojson j;
+            j["rev"] = r.rev;
+            j["date"] = r.date;
+            j["by"] = r.by;
+            j["note"] = r.note;
+            return j;
+        },
+        false);
     out += "  \"settings\": " + settingsJson(d.settings).dump() + ",\n";
     writeList(out, "parts", d.parts(), partJson, false);
-    writeList(out, "wires", d.wires(), [&](const Wire& w) {
-        ojson j;
-        j["id"] = w.id.value;
-        j["from"] = endName(d, w.a);
-        j["to"] = endName(d, w.b);
-        return j;
-    }, false);
-    writeList(out, "buckets", d.buckets(), [](const Bucket& b) {
-        ojson j;
-        j["id"] = b.id.value;
-        j["tag"] = b.tag;
-        if (b.sccrKa)
-            j["sccr_ka"] = fieldJson(*b.sccrKa);
-        j["parts"] = idList(b.parts);
-        return j;
-    }, false);
-    writeList(out, "accepted", d.accepted(), [](const Accepted& a) {
-        ojson j;
-        j["rule"] = a.rule;
-        j["parts"] = idList(a.parts);
-        j["by"] = a.by;
-        j["date"] = a.date;
-        j["note"] = a.note;
-        return j;
-    }, true);
+    writeList(
+        out, "wires", d.wires(),
+        [&](const Wire& w) {
+            ojson j;
+            j["id"] = w.id.value;
+            j["from"] = endName(d, w.a);
+            j["to"] = endName(d, w.b);
+            return j;
+        },
+        false);
+    writeList(
+        out, "buckets", d.buckets(),
+        [](const Bucket& b) {
+            ojson j;
+            j["id"] = b.id.value;
+            j["tag"] = b.tag;
+            if (b.sccrKa)
+                j["sccr_ka"] = fieldJson(*b.sccrKa);
+            j["parts"] = idList(b.parts);
+            return j;
+        },
+        false);
+    writeList(
+        out, "accepted", d.accepted(),
+        [](const Accepted& a) {
+            ojson j;
+            j["rule"] = a.rule;
+            j["parts"] = idList(a.parts);
+            j["by"] = a.by;
+            j["date"] = a.date;
+            j["note"] = a.note;
+            return j;
+        },
+        true);
     out += "}\n";
     return out;
 }

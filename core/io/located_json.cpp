@@ -67,8 +67,8 @@ using json = nlohmann::json;
 
 class LocatingSax {
 public:
-    LocatingSax(const char* base, const char** cursor, const JsonLimits& limits,
-                LocatedJson& out, JsonSyntaxError& err)
+    LocatingSax(const char* base, const char** cursor, const JsonLimits& limits, LocatedJson& out,
+                JsonSyntaxError& err)
         : m_base(base), m_cursor(cursor), m_limits(limits), m_out(out), m_err(err) {}
 
     bool null() { return value(json(nullptr)); }
@@ -99,7 +99,8 @@ public:
             m_out.offsets[m_paths.back() + "/" + escape(k)] = start;
         return true;
     }
-    bool parse_error(std::size_t position, const std::string&, const nlohmann::detail::exception& ex) {
+    bool parse_error(std::size_t position, const std::string&,
+                     const nlohmann::detail::exception& ex) {
         m_err.offset = position > 0 ? position - 1 : 0;
         std::string msg = ex.what();
         // Drop nlohmann's "[json.exception.x.n] " tag and its own "parse error at line L,

@@ -2,9 +2,8 @@
 // that errors found after parsing can still name a line and column.
 #pragma once
 
-#include <nlohmann/json.hpp>
-
 #include <cstddef>
+#include <nlohmann/json.hpp>
 #include <optional>
 #include <string>
 #include <string_view>

@@ -10,11 +10,10 @@ namespace lineward {
 
 namespace {
 constexpr std::array<std::string_view, 28> kAwg{
-    "14 AWG",      "12 AWG",      "10 AWG",      "8 AWG",        "6 AWG",       "4 AWG",
-    "3 AWG",       "2 AWG",       "1 AWG",       "1/0 AWG",      "2/0 AWG",     "3/0 AWG",
-    "4/0 AWG",     "250 kcmil",   "300 kcmil",   "350 kcmil",    "400 kcmil",   "500 kcmil",
-    "600 kcmil",   "700 kcmil",   "750 kcmil",   "800 kcmil",    "900 kcmil",   "1000 kcmil",
-    "1250 kcmil",  "1500 kcmil",  "1750 kcmil",  "2000 kcmil"};
+    "14 AWG",    "12 AWG",    "10 AWG",     "8 AWG",      "6 AWG",      "4 AWG",      "3 AWG",
+    "2 AWG",     "1 AWG",     "1/0 AWG",    "2/0 AWG",    "3/0 AWG",    "4/0 AWG",    "250 kcmil",
+    "300 kcmil", "350 kcmil", "400 kcmil",  "500 kcmil",  "600 kcmil",  "700 kcmil",  "750 kcmil",
+    "800 kcmil", "900 kcmil", "1000 kcmil", "1250 kcmil", "1500 kcmil", "1750 kcmil", "2000 kcmil"};
 constexpr std::array<std::string_view, 19> kMetric{
     "1.5 mm2", "2.5 mm2", "4 mm2",   "6 mm2",   "10 mm2",  "16 mm2",  "25 mm2",
     "35 mm2",  "50 mm2",  "70 mm2",  "95 mm2",  "120 mm2", "150 mm2", "185 mm2",
@@ -22,8 +21,12 @@ constexpr std::array<std::string_view, 19> kMetric{
 constexpr double kMm2PerCmil = 5.067075e-4;
 } // namespace
 
-std::span<const std::string_view> awgSizes() { return kAwg; }
-std::span<const std::string_view> metricSizes() { return kMetric; }
+std::span<const std::string_view> awgSizes() {
+    return kAwg;
+}
+std::span<const std::string_view> metricSizes() {
+    return kMetric;
+}
 
 bool isKnownConductorSize(std::string_view size) {
     auto a = awgSizes(), m = metricSizes();

@@ -74,7 +74,8 @@ void Drawing::addPart(Part p) {
 }
 
 std::optional<Part> Drawing::removePart(PartId id) {
-    auto it = std::find_if(m_parts.begin(), m_parts.end(), [&](const Part& p) { return p.id == id; });
+    auto it =
+        std::find_if(m_parts.begin(), m_parts.end(), [&](const Part& p) { return p.id == id; });
     if (it == m_parts.end())
         return std::nullopt;
     Part removed = std::move(*it);
@@ -96,7 +97,8 @@ void Drawing::addWire(Wire w) {
 }
 
 std::optional<Wire> Drawing::removeWire(WireId id) {
-    auto it = std::find_if(m_wires.begin(), m_wires.end(), [&](const Wire& w) { return w.id == id; });
+    auto it =
+        std::find_if(m_wires.begin(), m_wires.end(), [&](const Wire& w) { return w.id == id; });
     if (it == m_wires.end())
         return std::nullopt;
     Wire w = *it;

@@ -30,15 +30,15 @@ struct SheetInfo {
 
 /// Limits that are recommendations or common practice; each produces a caution when exceeded.
 struct Settings {
-    double vdropBranchPct = 3.0;   ///< NEC 210.19(A) informational note
-    double vdropTotalPct = 5.0;    ///< NEC 215.2(A) informational note
-    double startDipPct = 15.0;     ///< common practice
-    double startTerminalPct = 80.0;///< common practice
+    double vdropBranchPct = 3.0;      ///< NEC 210.19(A) informational note
+    double vdropTotalPct = 5.0;       ///< NEC 215.2(A) informational note
+    double startDipPct = 15.0;        ///< common practice
+    double startTerminalPct = 80.0;   ///< common practice
     double coordinationMarginS = 0.1; ///< common practice for low-voltage devices
-    double ambientC = 30.0;        ///< NEC Table 310.16 base ambient
-    double asymmetryFactor = 1.5;  ///< common practice
-    double startPf = 0.3;          ///< common practice
-    double motorContributionX = 4.0; ///< common practice: running motor feeds ~4 x FLC
+    double ambientC = 30.0;           ///< NEC Table 310.16 base ambient
+    double asymmetryFactor = 1.5;     ///< common practice
+    double startPf = 0.3;             ///< common practice
+    double motorContributionX = 4.0;  ///< common practice: running motor feeds ~4 x FLC
     bool operator==(const Settings&) const = default;
 };
 

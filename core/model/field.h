@@ -20,10 +20,10 @@ struct FieldSpec {
     std::string_view label;
     std::string_view unit; ///< empty where the value has no unit
     FieldType type = FieldType::Number;
-    double minValue = 0.0;       ///< smallest accepted value (Number/Integer)
-    double maxValue = 0.0;       ///< largest accepted value (Number/Integer)
-    bool minExclusive = false;   ///< true where the minimum itself is refused (e.g. 0 kVA)
-    bool required = false;       ///< a drawing without it is refused
+    double minValue = 0.0;     ///< smallest accepted value (Number/Integer)
+    double maxValue = 0.0;     ///< largest accepted value (Number/Integer)
+    bool minExclusive = false; ///< true where the minimum itself is refused (e.g. 0 kVA)
+    bool required = false;     ///< a drawing without it is refused
     FieldValue defaultValue = {};
     std::vector<std::string_view> choices = {}; ///< accepted words (Choice)
     std::string_view help = {};

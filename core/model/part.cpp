@@ -26,8 +26,8 @@ Part Part::make(PartKind kind, PartId id, std::string tag) {
 const FieldValue& Part::value(std::string_view key) const {
     auto i = fieldIndex(kind, key);
     if (!i)
-        throw std::logic_error("part kind " + std::string(kindInfo(kind).key) +
-                               " has no field " + std::string(key));
+        throw std::logic_error("part kind " + std::string(kindInfo(kind).key) + " has no field " +
+                               std::string(key));
     return *i < values.size() ? values[*i] : kNone;
 }
 
@@ -85,8 +85,7 @@ void notAbove(const Part& p, std::string_view lo, std::string_view hi,
 void temperatureColumn(const Part& p, std::string_view key, std::vector<std::string>& out) {
     auto t = p.number(key);
     if (t && *t != 60 && *t != 75 && *t != 90)
-        out.push_back(std::string(key) + " must be 60, 75 or 90 °C (got " + formatNumber(*t) +
-                      ")");
+        out.push_back(std::string(key) + " must be 60, 75 or 90 °C (got " + formatNumber(*t) + ")");
 }
 
 } // namespace

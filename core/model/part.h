@@ -14,9 +14,9 @@ namespace lineward {
 struct Part {
     PartId id;
     PartKind kind = PartKind::Load;
-    std::string tag;          ///< the user's label, e.g. "M-101"
-    double x = 0.0, y = 0.0;  ///< Sheet position (grid units of 1/10 in)
-    int rotation = 0;         ///< 0, 90, 180 or 270 degrees
+    std::string tag;                ///< the user's label, e.g. "M-101"
+    double x = 0.0, y = 0.0;        ///< Sheet position (grid units of 1/10 in)
+    int rotation = 0;               ///< 0, 90, 180 or 270 degrees
     std::vector<FieldValue> values; ///< one per field of the kind
 
     /// A part of this kind with every field at its default.

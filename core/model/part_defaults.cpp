@@ -7,7 +7,9 @@ namespace lineward {
 
 Part makeStarterPart(PartKind kind, PartId id, std::string tag) {
     Part p = Part::make(kind, id, std::move(tag));
-    auto set = [&](const char* key, FieldValue v) { p.values[*fieldIndex(kind, key)] = std::move(v); };
+    auto set = [&](const char* key, FieldValue v) {
+        p.values[*fieldIndex(kind, key)] = std::move(v);
+    };
     switch (kind) {
     case PartKind::Source:
         set("kv", 0.48);

@@ -12,18 +12,18 @@ namespace lineward {
 
 /// Every kind of part the Sheet can hold.
 enum class PartKind {
-    Source,       ///< utility source
-    Transformer,  ///< two-winding transformer
-    Bus,          ///< switchboard, MCC section or panelboard bus (one electrical node)
-    Breaker,      ///< inverse-time breaker (thermal-magnetic or electronic trip)
-    InstBreaker,  ///< instantaneous-only breaker (motor circuit protector)
-    Fuse,         ///< fuse (time-delay or fast-acting)
-    Disconnect,   ///< disconnect switch
-    Contactor,    ///< motor contactor
-    Overload,     ///< overload relay
-    Cable,        ///< cable run (one or more parallel sets)
-    Motor,        ///< induction motor
-    Load,         ///< static load
+    Source,      ///< utility source
+    Transformer, ///< two-winding transformer
+    Bus,         ///< switchboard, MCC section or panelboard bus (one electrical node)
+    Breaker,     ///< inverse-time breaker (thermal-magnetic or electronic trip)
+    InstBreaker, ///< instantaneous-only breaker (motor circuit protector)
+    Fuse,        ///< fuse (time-delay or fast-acting)
+    Disconnect,  ///< disconnect switch
+    Contactor,   ///< motor contactor
+    Overload,    ///< overload relay
+    Cable,       ///< cable run (one or more parallel sets)
+    Motor,       ///< induction motor
+    Load,        ///< static load
 };
 
 inline constexpr int kPartKindCount = 12;
@@ -31,13 +31,13 @@ inline constexpr int kPartKindCount = 12;
 /// What the engine needs to know about a kind besides its fields.
 struct KindInfo {
     PartKind kind;
-    std::string_view key;          ///< word used in the file ("motor")
-    std::string_view name;         ///< name shown to people ("Motor")
-    std::string_view tagPrefix;    ///< default tag prefix ("M-")
+    std::string_view key;                        ///< word used in the file ("motor")
+    std::string_view name;                       ///< name shown to people ("Motor")
+    std::string_view tagPrefix;                  ///< default tag prefix ("M-")
     std::span<const std::string_view> terminals; ///< terminal names; one or two
     std::span<const FieldSpec> fields;
-    bool switching = false;        ///< has an open/closed state
-    bool protective = false;       ///< interrupts fault current
+    bool switching = false;  ///< has an open/closed state
+    bool protective = false; ///< interrupts fault current
 };
 
 const KindInfo& kindInfo(PartKind kind);
@@ -46,6 +46,8 @@ std::optional<PartKind> kindFromKey(std::string_view key);
 std::optional<std::size_t> fieldIndex(PartKind kind, std::string_view key);
 const FieldSpec* findField(PartKind kind, std::string_view key);
 
-inline bool isTwoTerminal(PartKind k) { return kindInfo(k).terminals.size() == 2; }
+inline bool isTwoTerminal(PartKind k) {
+    return kindInfo(k).terminals.size() == 2;
+}
 
 } // namespace lineward

@@ -11,7 +11,9 @@ namespace lineward {
 
 namespace {
 
-std::string num(std::optional<double> v, int decimals = 1) { return v ? fmt(*v, decimals) : ""; }
+std::string num(std::optional<double> v, int decimals = 1) {
+    return v ? fmt(*v, decimals) : "";
+}
 
 std::string deviceText(const Part* d) {
     if (!d)
@@ -33,7 +35,9 @@ double dropPct(const StudyResults& r, const Network& net, const Flow& flow, cons
     const int bus = r.busOf(isTwoTerminal(p.kind) ? flow.loadNode(p.id) : net.nodeOf(p.id, 0));
     if (bus < 0 || r.voltage.empty())
         return std::nan("");
-    return (r.originVoltagePu[static_cast<std::size_t>(bus)] - std::abs(r.voltage[static_cast<std::size_t>(bus)])) * 100;
+    return (r.originVoltagePu[static_cast<std::size_t>(bus)] -
+            std::abs(r.voltage[static_cast<std::size_t>(bus)])) *
+           100;
 }
 
 std::string faultAt(const StudyResults& r, NodeIndex n) {
@@ -49,8 +53,9 @@ std::vector<Schedule> buildSchedules(const Drawing& d, const Tables& t) {
     const StudyResults r = runStudies(net, flow, t, d.settings);
     const RuleContext ctx{d, net, flow, t, r};
     Schedule motors{"motors",
-                    {"Tag", "Rating", "Volts", "FLC A", "FLA A", "Short-circuit device", "Contactor",
-                     "Overload A", "Class", "Conductor", "Length ft", "EGC", "Drop %", "Fault kA"},
+                    {"Tag", "Rating", "Volts", "FLC A", "FLA A", "Short-circuit device",
+                     "Contactor", "Overload A", "Class", "Conductor", "Length ft", "EGC", "Drop %",
+                     "Fault kA"},
                     {}};
     for (const auto& b : motorBranches(ctx)) {
         const Part& m = *b.motor;
@@ -58,40 +63,49 @@ std::vector<Schedule> buildSchedules(const Drawing& d, const Tables& t) {
         const Part* cable = b.cables.empty() ? nullptr : b.cables.front();
         const double drop = dropPct(r, net, flow, m);
         motors.rows.push_back(
-            {m.tag, m.number("hp") ? num(m.number("hp"), 2) + " hp" : num(m.number("kw"), 2) + " kW",
-             num(m.number("volts"), 0), flc ? fmt(flc->amps) : "", num(m.number("fla")), deviceText(b.scpd),
-             b.contactor ? (b.contactor->word("nema_size") ? "NEMA " + *b.contactor->word("nema_size")
-                                                           : num(b.contactor->number("ac3_a"), 0) + " A AC-3")
+            {m.tag,
+             m.number("hp") ? num(m.number("hp"), 2) + " hp" : num(m.number("kw"), 2) + " kW",
+             num(m.number("volts"), 0), flc ? fmt(flc->amps) : "", num(m.number("fla")),
+             deviceText(b.scpd),
+             b.contactor ? (b.contactor->word("nema_size")
+                                ? "NEMA " + *b.contactor->word("nema_size")
+                                : num(b.contactor->number("ac3_a"), 0) + " A AC-3")
                          : "",
              b.overload ? num(b.overload->number("setting_a")) : "",
              b.overload ? b.overload->word("trip_class").value_or("") : "",
-             cable ? (cable->number("sets").value_or(1) > 1 ? num(cable->number("sets"), 0) + " × " : "") +
+             cable ? (cable->number("sets").value_or(1) > 1 ? num(cable->number("sets"), 0) + " × "
+                                                            : "") +
                          cable->word("size").value_or("")
                    : "",
-             cable ? num(cable->number("length_ft"), 0) : "", cable ? cable->word("egc_size").value_or("") : "",
+             cable ? num(cable->number("length_ft"), 0) : "",
+             cable ? cable->word("egc_size").value_or("") : "",
              std::isnan(drop) ? "" : fmt(drop, 2),
              b.scpd ? faultAt(r, flow.lineNode(b.scpd->id)) : faultAt(r, net.nodeOf(m.id, 0))});
     }
     Schedule cables{"cables",
-                    {"Tag", "Material", "Size", "Sets", "Length ft", "Insulation °C", "Ampacity A", "Load A",
-                     "Drop at load end %", "Fault kA at line end"},
+                    {"Tag", "Material", "Size", "Sets", "Length ft", "Insulation °C", "Ampacity A",
+                     "Load A", "Drop at load end %", "Fault kA at line end"},
                     {}};
-    Schedule devices{"devices", {"Tag", "Kind", "Rating", "Interrupting kA", "Line-side fault kA", "Duty %"}, {}};
+    Schedule devices{"devices",
+                     {"Tag", "Kind", "Rating", "Interrupting kA", "Line-side fault kA", "Duty %"},
+                     {}};
     for (const auto& p : d.parts()) {
         auto load = r.loadAmps.find(p.id);
         if (p.kind == PartKind::Cable) {
-            auto amp = cableAmpacity(p.word("size").value_or(""), conditionsOf(p, d.settings), t, false);
+            auto amp =
+                cableAmpacity(p.word("size").value_or(""), conditionsOf(p, d.settings), t, false);
             const double drop = dropPct(r, net, flow, p);
-            cables.rows.push_back({p.tag, p.word("material").value_or("cu") == "al" ? "Al" : "Cu",
-                                   p.word("size").value_or(""), num(p.number("sets"), 0),
-                                   num(p.number("length_ft"), 0), num(p.number("insulation_c"), 0),
-                                   amp ? fmt(amp->amps) : "", load == r.loadAmps.end() ? "" : fmt(load->second),
-                                   std::isnan(drop) ? "" : fmt(drop, 2), faultAt(r, flow.lineNode(p.id))});
+            cables.rows.push_back(
+                {p.tag, p.word("material").value_or("cu") == "al" ? "Al" : "Cu",
+                 p.word("size").value_or(""), num(p.number("sets"), 0),
+                 num(p.number("length_ft"), 0), num(p.number("insulation_c"), 0),
+                 amp ? fmt(amp->amps) : "", load == r.loadAmps.end() ? "" : fmt(load->second),
+                 std::isnan(drop) ? "" : fmt(drop, 2), faultAt(r, flow.lineNode(p.id))});
         } else if (kindInfo(p.kind).protective) {
             const auto* f = r.faultAtNode(flow.lineNode(p.id));
             const auto ic = p.number("interrupting_ka");
-            devices.rows.push_back({p.tag, std::string(kindInfo(p.kind).name), deviceText(&p), num(ic),
-                                    f ? fmt(f->ikKa, 2) : "",
+            devices.rows.push_back({p.tag, std::string(kindInfo(p.kind).name), deviceText(&p),
+                                    num(ic), f ? fmt(f->ikKa, 2) : "",
                                     f && ic ? fmt(f->ikKa / *ic * 100, 0) : ""});
         }
     }

@@ -11,8 +11,12 @@ namespace lineward {
 
 namespace {
 
-std::string kA(double a) { return fmt(a / 1000.0, 2) + " kA"; }
-std::string secs(double t) { return std::isinf(t) ? std::string("no trip") : fmt(t, 3) + " s"; }
+std::string kA(double a) {
+    return fmt(a / 1000.0, 2) + " kA";
+}
+std::string secs(double t) {
+    return std::isinf(t) ? std::string("no trip") : fmt(t, 3) + " s";
+}
 
 void motorChecks(const RuleContext& ctx, const Part& m, std::vector<Finding>& out) {
     auto prof = startProfile(ctx, m);
@@ -21,23 +25,26 @@ void motorChecks(const RuleContext& ctx, const Part& m, std::vector<Finding>& ou
     const auto devices = devicesOnPath(ctx, m.id);
     for (const auto& d : devices) {
         if (d.part->kind == PartKind::Overload) {
-            const double hot = d.curve.maxTimeHot(prof->lockedRotorA), cold = d.curve.minTime(prof->lockedRotorA);
+            const double hot = d.curve.maxTimeHot(prof->lockedRotorA),
+                         cold = d.curve.minTime(prof->lockedRotorA);
             if (auto stall = m.number("stall_hot_s"); stall && hot > *stall) {
                 auto f = makeFinding("curve.overload.stall", {d.part->id, m.id},
-                                     d.part->tag + " may take " + secs(hot) + " hot at locked rotor (" +
-                                         fmt(prof->lockedRotorA, 0) + " A); " + m.tag + " is safe for " +
-                                         fmt(*stall, 1) + " s");
+                                     d.part->tag + " may take " + secs(hot) +
+                                         " hot at locked rotor (" + fmt(prof->lockedRotorA, 0) +
+                                         " A); " + m.tag + " is safe for " + fmt(*stall, 1) + " s");
                 f.computed = hot;
                 f.limit = *stall;
                 f.unit = "s";
-                f.trace = {{"relay", d.curve.label()}, {"model", "thermal, preloaded at setting (IEC 60947-4-1 class limits)"}};
+                f.trace = {{"relay", d.curve.label()},
+                           {"model", "thermal, preloaded at setting (IEC 60947-4-1 class limits)"}};
                 f.fix = Fix{"choose a faster trip class", {}};
                 out.push_back(std::move(f));
             }
             if (cold < prof->accelS) {
-                auto f = makeFinding("curve.overload.start", {d.part->id, m.id},
-                                     d.part->tag + " may trip in " + secs(cold) + " at locked rotor; " + m.tag +
-                                         " needs " + fmt(prof->accelS, 1) + " s to start");
+                auto f =
+                    makeFinding("curve.overload.start", {d.part->id, m.id},
+                                d.part->tag + " may trip in " + secs(cold) + " at locked rotor; " +
+                                    m.tag + " needs " + fmt(prof->accelS, 1) + " s to start");
                 f.computed = cold;
                 f.limit = prof->accelS;
                 f.unit = "s";
@@ -60,15 +67,19 @@ void motorChecks(const RuleContext& ctx, const Part& m, std::vector<Finding>& ou
             if (t > pt.seconds)
                 continue;
             auto f = makeFinding("curve.nuisance", {d.part->id, m.id},
-                                 d.part->tag + " may trip in " + secs(t) + " on " + m.tag + "'s " + pt.what + " (" +
-                                     fmt(pt.amps, 0) + " A for " + fmt(pt.seconds, 2) + " s)");
+                                 d.part->tag + " may trip in " + secs(t) + " on " + m.tag + "'s " +
+                                     pt.what + " (" + fmt(pt.amps, 0) + " A for " +
+                                     fmt(pt.seconds, 2) + " s)");
             f.computed = t;
             f.limit = pt.seconds;
             f.unit = "s";
             f.trace = {{"device", d.curve.label()},
-                       {"starting profile", fmt(prof->asymA, 0) + " A for 0.1 s, " + fmt(prof->lockedRotorA, 0) +
-                                                " A for " + fmt(prof->accelS, 1) + " s, then " + fmt(prof->runningA, 1) + " A"}};
-            f.fix = Fix{"raise " + d.part->tag + "'s setting or rating within the code's limits", {}};
+                       {"starting profile", fmt(prof->asymA, 0) + " A for 0.1 s, " +
+                                                fmt(prof->lockedRotorA, 0) + " A for " +
+                                                fmt(prof->accelS, 1) + " s, then " +
+                                                fmt(prof->runningA, 1) + " A"}};
+            f.fix =
+                Fix{"raise " + d.part->tag + "'s setting or rating within the code's limits", {}};
             out.push_back(std::move(f));
             break;
         }
@@ -78,7 +89,8 @@ void motorChecks(const RuleContext& ctx, const Part& m, std::vector<Finding>& ou
 void cableDamage(const RuleContext& ctx, const Part& c, std::vector<Finding>& out) {
     auto i2t = cableDamageI2t(ctx, c);
     const double fault = availableFaultA(ctx, c);
-    auto amp = cableAmpacity(c.word("size").value_or(""), conditionsOf(c, ctx.settings()), ctx.tables, false);
+    auto amp = cableAmpacity(c.word("size").value_or(""), conditionsOf(c, ctx.settings()),
+                             ctx.tables, false);
     if (!i2t || fault <= 0 || !amp)
         return;
     const auto devices = devicesOnPath(ctx, c.id);
@@ -93,15 +105,18 @@ void cableDamage(const RuleContext& ctx, const Part& c, std::vector<Finding>& ou
         if (i >= fault || i <= 0)
             break;
         double combined = kNoTrip;
-        for (const auto& d : devices) // an overload relay acts through its bucket's listed contactor
+        for (const auto& d :
+             devices) // an overload relay acts through its bucket's listed contactor
             combined = std::min(combined, d.curve.maxTime(i));
         if (combined <= 0.05)
             break; // instantaneous region: duty.withstand's domain
         const double damage = *i2t / (i * i);
         if (combined <= damage)
             continue;
-        auto f = makeFinding("curve.cable.damage", {c.id}, c.tag + " would be damaged at " + kA(i) + ": its protection clears in " +
-                                                               secs(combined) + ", the cable lasts " + secs(damage));
+        auto f =
+            makeFinding("curve.cable.damage", {c.id},
+                        c.tag + " would be damaged at " + kA(i) + ": its protection clears in " +
+                            secs(combined) + ", the cable lasts " + secs(damage));
         f.computed = combined;
         f.limit = damage;
         f.unit = "s";
@@ -113,12 +128,15 @@ void cableDamage(const RuleContext& ctx, const Part& c, std::vector<Finding>& ou
 }
 
 double nominalV(const RuleContext& ctx, const Part& p) {
-    return ctx.net.graph()[isTwoTerminal(p.kind) ? ctx.flow.lineNode(p.id) : ctx.net.nodeOf(p.id, 0)].nominalV;
+    return ctx.net
+        .graph()[isTwoTerminal(p.kind) ? ctx.flow.lineNode(p.id) : ctx.net.nodeOf(p.id, 0)]
+        .nominalV;
 }
 
 // `overloadBelow`: the overload relay of the motor branch `d` heads, if any; it and `d` act
 // together as the downstream protection.
-void selectivity(const RuleContext& ctx, const Part& d, const Part* overloadBelow, std::vector<Finding>& out) {
+void selectivity(const RuleContext& ctx, const Part& d, const Part* overloadBelow,
+                 std::vector<Finding>& out) {
     auto path = devicesOnPath(ctx, d.id);
     if (path.empty() || path.front().part->id != d.id)
         return;
@@ -137,7 +155,8 @@ void selectivity(const RuleContext& ctx, const Part& d, const Part* overloadBelo
     const double ratio = vd > 0 && vu > 0 ? vd / vu : 1.0;
     const double fault = availableFaultA(ctx, d);
     const double margin = ctx.settings().coordinationMarginS;
-    const double lo = 1.25 * (olCurve ? std::min(down.pickupA(), olCurve->pickupA()) : down.pickupA());
+    const double lo =
+        1.25 * (olCurve ? std::min(down.pickupA(), olCurve->pickupA()) : down.pickupA());
     if (fault <= lo)
         return;
     auto downMax = [&](double i) {
@@ -155,16 +174,21 @@ void selectivity(const RuleContext& ctx, const Part& d, const Part* overloadBelo
             continue;
         }
         auto f = makeFinding("curve.selectivity", {d.id, up->part->id},
-                             d.tag + " and " + up->part->tag + " are selective only up to " + kA(goodUpTo) + " of the " +
-                                 kA(fault) + " available");
+                             d.tag + " and " + up->part->tag + " are selective only up to " +
+                                 kA(goodUpTo) + " of the " + kA(fault) + " available");
         f.computed = goodUpTo / 1000.0;
         f.limit = fault / 1000.0;
         f.unit = "kA";
-        f.trace = {{"downstream", down.label() + (olCurve ? " with " + olCurve->label() : std::string())},
-                   {"upstream", up->curve.label() + (ratio != 1.0 ? " (currents × " + fmt(ratio, 3) + " across the transformer)" : "")},
-                   {"at " + kA(i), "downstream clears by " + secs(dmax) + ", upstream may trip in " + secs(umin) +
-                                       " (margin " + fmt(margin, 2) + " s)"}};
-        f.fix = Fix{"raise " + up->part->tag + "'s short-time or instantaneous setting, or add a delay", {}};
+        f.trace = {
+            {"downstream", down.label() + (olCurve ? " with " + olCurve->label() : std::string())},
+            {"upstream", up->curve.label() + (ratio != 1.0 ? " (currents × " + fmt(ratio, 3) +
+                                                                 " across the transformer)"
+                                                           : "")},
+            {"at " + kA(i), "downstream clears by " + secs(dmax) + ", upstream may trip in " +
+                                secs(umin) + " (margin " + fmt(margin, 2) + " s)"}};
+        f.fix =
+            Fix{"raise " + up->part->tag + "'s short-time or instantaneous setting, or add a delay",
+                {}};
         out.push_back(std::move(f));
         return;
     }
@@ -184,7 +208,8 @@ void checkCurves(const RuleContext& ctx, std::vector<Finding>& out) {
             motorChecks(ctx, p, out);
         else if (p.kind == PartKind::Cable)
             cableDamage(ctx, p, out);
-        else if (p.kind == PartKind::Breaker || p.kind == PartKind::Fuse || p.kind == PartKind::InstBreaker)
+        else if (p.kind == PartKind::Breaker || p.kind == PartKind::Fuse ||
+                 p.kind == PartKind::InstBreaker)
             selectivity(ctx, p, overloadOf.count(p.id) ? overloadOf.at(p.id) : nullptr, out);
     }
 }

@@ -1,9 +1,9 @@
 // The duty.* rules: interrupting ratings (110.9), SCCR and bracing (110.10, 430.8, 409.22),
 // and conductor short-circuit withstand (ICEA P-32-382 / IEC adiabatic).
+#include "model/conductor.h"
 #include "rules/rule_catalog.h"
 #include "rules/rule_context.h"
 #include "sizing/motor_sizing.h"
-#include "model/conductor.h"
 
 #include <cmath>
 
@@ -16,14 +16,15 @@ void interrupting(const RuleContext& ctx, const Part& d, std::vector<Finding>& o
     const auto rating = d.number("interrupting_ka");
     if (!f || !rating || *rating >= f->ikKa - 1e-9)
         return;
-    auto x = makeFinding("duty.interrupting", {d.id}, d.tag + " interrupting rating " + fmt(*rating) +
-                                                          " kA is below the " + fmt(f->ikKa, 2) +
-                                                          " kA available at its line side");
+    auto x = makeFinding("duty.interrupting", {d.id},
+                         d.tag + " interrupting rating " + fmt(*rating) + " kA is below the " +
+                             fmt(f->ikKa, 2) + " kA available at its line side");
     x.computed = f->ikKa;
     x.limit = *rating;
     x.unit = "kA";
-    x.trace = {{"available fault current", fmt(f->ikKa, 2) + " kA symmetrical, X/R " + fmt(f->xOverR, 1)},
-               {"interrupting rating", fmt(*rating) + " kA"}};
+    x.trace = {
+        {"available fault current", fmt(f->ikKa, 2) + " kA symmetrical, X/R " + fmt(f->xOverR, 1)},
+        {"interrupting rating", fmt(*rating) + " kA"}};
     const double next = std::ceil(f->ikKa / 5.0) * 5.0 < 10 ? 10 : std::ceil(f->ikKa / 5.0) * 5.0;
     x.fix = Fix{"use a device rated " + fmt(next, 0) + " kA or more (or series-rated, listed)",
                 {{d.id, "interrupting_ka", next}}};
@@ -35,12 +36,14 @@ void bracing(const RuleContext& ctx, const Part& bus, std::vector<Finding>& out)
     const auto rating = bus.number("bracing_ka");
     if (!f || !rating || *rating >= f->ikKa - 1e-9)
         return;
-    auto x = makeFinding("duty.bracing", {bus.id}, bus.tag + " bus bracing " + fmt(*rating) +
-                                                       " kA is below the " + fmt(f->ikKa, 2) + " kA available");
+    auto x = makeFinding("duty.bracing", {bus.id},
+                         bus.tag + " bus bracing " + fmt(*rating) + " kA is below the " +
+                             fmt(f->ikKa, 2) + " kA available");
     x.computed = f->ikKa;
     x.limit = *rating;
     x.unit = "kA";
-    x.trace = {{"available fault current", fmt(f->ikKa, 2) + " kA symmetrical, peak " + fmt(f->peakKa, 2) + " kA"}};
+    x.trace = {{"available fault current",
+                fmt(f->ikKa, 2) + " kA symmetrical, peak " + fmt(f->peakKa, 2) + " kA"}};
     const double next = std::ceil(f->ikKa / 5.0) * 5.0;
     x.fix = Fix{"brace the bus for " + fmt(next, 0) + " kA", {{bus.id, "bracing_ka", next}}};
     out.push_back(std::move(x));
@@ -59,14 +62,15 @@ void sccr(const RuleContext& ctx, const Bucket& b, std::vector<Finding>& out) {
     }
     if (!worst || *b.sccrKa >= worst->ikKa - 1e-9)
         return;
-    auto x = makeFinding("duty.sccr", {b.parts.front()}, "bucket " + b.tag + " SCCR " + fmt(*b.sccrKa) +
-                                                             " kA is below the " + fmt(worst->ikKa, 2) +
-                                                             " kA available");
+    auto x = makeFinding("duty.sccr", {b.parts.front()},
+                         "bucket " + b.tag + " SCCR " + fmt(*b.sccrKa) + " kA is below the " +
+                             fmt(worst->ikKa, 2) + " kA available");
     x.computed = worst->ikKa;
     x.limit = *b.sccrKa;
     x.unit = "kA";
     x.trace = {{"bucket", b.tag}, {"available fault current", fmt(worst->ikKa, 2) + " kA"}};
-    x.fix = Fix{"use a combination listed for " + fmt(std::ceil(worst->ikKa / 5) * 5, 0) + " kA", {}};
+    x.fix =
+        Fix{"use a combination listed for " + fmt(std::ceil(worst->ikKa / 5) * 5, 0) + " kA", {}};
     out.push_back(std::move(x));
 }
 
@@ -103,8 +107,8 @@ std::optional<double> letThrough(const Part& d, double amps, bool& stated, std::
     if (!t)
         return std::nullopt;
     if (how)
-        *how = fmt(amps, 0) + "² A² × " + fmt(*t, 3) + " s (" + (stated ? "stated" : "assumed, common practice") +
-               " clearing time)";
+        *how = fmt(amps, 0) + "² A² × " + fmt(*t, 3) + " s (" +
+               (stated ? "stated" : "assumed, common practice") + " clearing time)";
     return amps * amps * *t;
 }
 
@@ -114,7 +118,8 @@ std::optional<double> cableI2t(const RuleContext& ctx, const Part& cable, std::s
     const double ins = cable.number("insulation_c").value_or(90);
     const bool al = cable.word("material").value_or("cu") == "al";
     if (size.ends_with(" mm2")) {
-        const double k = ins >= 90 ? (al ? 94 : 143) : (al ? 76 : 115); // IEC 60364-4-43 Table 43A (from memory)
+        const double k =
+            ins >= 90 ? (al ? 94 : 143) : (al ? 76 : 115); // IEC 60364-4-43 Table 43A (from memory)
         const double s = std::stod(size);
         if (how)
             *how = "k²S² = (" + fmt(k, 0) + " × " + fmt(s, 1) + ")²";
@@ -126,8 +131,8 @@ std::optional<double> cableI2t(const RuleContext& ctx, const Part& cable, std::s
     const double t2 = ins >= 90 ? 250 : 150; // thermoset / thermoplastic limits (ICEA, from memory)
     const double k = al ? 0.0125 : 0.0297, base = al ? 228 : 234;
     if (how)
-        *how = fmt(k, 4) + " × log10((" + fmt(t2, 0) + " + " + fmt(base, 0) + ") / (" + fmt(ins, 0) + " + " +
-               fmt(base, 0) + ")) × " + fmt(*area, 0) + "² cmil²";
+        *how = fmt(k, 4) + " × log10((" + fmt(t2, 0) + " + " + fmt(base, 0) + ") / (" +
+               fmt(ins, 0) + " + " + fmt(base, 0) + ")) × " + fmt(*area, 0) + "² cmil²";
     return k * std::log10((t2 + base) / (ins + base)) * *area * *area;
 }
 
@@ -148,13 +153,14 @@ void withstand(const RuleContext& ctx, const Part& cable, std::vector<Finding>& 
     letThrough(dev, perSet, stated, &devHow); // the explanations only when reporting
     cableI2t(ctx, cable, &cableHow);
     auto x = makeFinding(stated ? "duty.withstand" : "duty.withstand.assumed", {cable.id, dev.id},
-                         cable.tag + " takes " + fmt(*limit, 0) + " A²s; " + dev.tag + " lets through " +
-                             fmt(*let, 0) + " A²s at " + fmt(f->ikKa, 2) + " kA" +
-                             (stated ? "" : " (assumed; enter its let-through I²t)"));
+                         cable.tag + " takes " + fmt(*limit, 0) + " A²s; " + dev.tag +
+                             " lets through " + fmt(*let, 0) + " A²s at " + fmt(f->ikKa, 2) +
+                             " kA" + (stated ? "" : " (assumed; enter its let-through I²t)"));
     x.computed = *let;
     x.limit = *limit;
     x.unit = "A²s";
-    x.trace = {{"fault current at the cable", fmt(f->ikKa, 2) + " kA" + (sets > 1 ? ", per set " + fmt(perSet, 0) + " A" : "")},
+    x.trace = {{"fault current at the cable",
+                fmt(f->ikKa, 2) + " kA" + (sets > 1 ? ", per set " + fmt(perSet, 0) + " A" : "")},
                {"cable withstand", cableHow + " = " + fmt(*limit, 0) + " A²s"},
                {"let-through of " + dev.tag, devHow + " = " + fmt(*let, 0) + " A²s"}};
     auto cur = ctx.tables.areaCmil(cable.word("size").value_or(""));

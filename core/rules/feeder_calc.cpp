@@ -53,14 +53,16 @@ FeederLoad feederLoad(const RuleContext& ctx, const MotorFactMap& motors, NodeIn
 
 std::vector<TraceStep> FeederLoad::trace(const RuleContext& ctx) const {
     std::vector<TraceStep> t;
-    t.push_back({"loads", std::to_string(motors) + " motor(s), " + std::to_string(loads) + " other load(s)"});
+    t.push_back({"loads", std::to_string(motors) + " motor(s), " + std::to_string(loads) +
+                              " other load(s)"});
     if (motors)
         t.push_back({"largest motor", ctx.tag(largestMotor) + ", FLC " + fmt(largestFlc) + " A"});
     t.push_back({"other motors' FLC", fmt(otherFlc) + " A"});
-    t.push_back({"continuous / non-continuous loads", fmt(continuousA) + " A / " + fmt(nonContinuousA) + " A"});
+    t.push_back({"continuous / non-continuous loads",
+                 fmt(continuousA) + " A / " + fmt(nonContinuousA) + " A"});
     t.push_back({"required", "1.25 × " + fmt(largestFlc) + " + " + fmt(otherFlc) + " + 1.25 × " +
-                                 fmt(continuousA) + " + " + fmt(nonContinuousA) + " = " + fmt(required()) +
-                                 " A (NEC 430.24, 215.2(A)(1))"});
+                                 fmt(continuousA) + " + " + fmt(nonContinuousA) + " = " +
+                                 fmt(required()) + " A (NEC 430.24, 215.2(A)(1))"});
     return t;
 }
 
@@ -87,10 +89,12 @@ FeederDeviceLimit feederDeviceLimit(const RuleContext& ctx, const MotorFactMap& 
             if (type == ScpdType::InstantaneousBreaker)
                 rating = scpdLimit(feederType, motorTypeOf(p), flc, ctx.tables).rawA;
             else
-                rating = d->number(d->kind == PartKind::Breaker ? "trip_a" : "amps").value_or(flc) * ratio;
+                rating = d->number(d->kind == PartKind::Breaker ? "trip_a" : "amps").value_or(flc) *
+                         ratio;
         }
         // The largest-rated branch device counts in full (ties: the one adding most).
-        if (rating > bestRating + 1e-9 || (rating > bestRating - 1e-9 && rating - flc > bestExtra)) {
+        if (rating > bestRating + 1e-9 ||
+            (rating > bestRating - 1e-9 && rating - flc > bestExtra)) {
             bestRating = rating;
             bestExtra = rating - flc;
             bestTag = p.tag + " branch device " + fmt(rating, 0) + " A, FLC " + fmt(flc) + " A";

@@ -11,11 +11,13 @@ namespace lineward {
 struct FeederLoad {
     double largestFlc = 0;
     PartId largestMotor;
-    double otherFlc = 0;   ///< every other motor's FLC
+    double otherFlc = 0; ///< every other motor's FLC
     double continuousA = 0, nonContinuousA = 0;
     int motors = 0, loads = 0;
     /// 1.25 × largest FLC + other FLC + 1.25 × continuous + non-continuous
-    double required() const { return 1.25 * largestFlc + otherFlc + 1.25 * continuousA + nonContinuousA; }
+    double required() const {
+        return 1.25 * largestFlc + otherFlc + 1.25 * continuousA + nonContinuousA;
+    }
     /// Plain sum of the running currents (for transformer loading).
     double running() const { return largestFlc + otherFlc + continuousA + nonContinuousA; }
     std::vector<TraceStep> trace(const RuleContext& ctx) const;

@@ -37,8 +37,8 @@ void feederConductor(FeederCheck& c, const Part& cable) {
         return;
     amp = cableAmpacity(size, cond, c.ctx.tables); // again, with its trace
     auto f = makeFinding("feeder.conductor.ampacity", {cable.id},
-                         "cable " + cable.tag + " carries " + fmt(amp->amps) + " A; its loads need " +
-                             fmt(need) + " A");
+                         "cable " + cable.tag + " carries " + fmt(amp->amps) +
+                             " A; its loads need " + fmt(need) + " A");
     f.computed = amp->amps;
     f.limit = need;
     f.unit = "A";
@@ -47,7 +47,8 @@ void feederConductor(FeederCheck& c, const Part& cable) {
     CableConditions perSet = cond;
     perSet.sets = 1;
     if (auto next = smallestCable(need / cond.sets, perSet, c.ctx.tables, size))
-        f.fix = Fix{"use " + next->first + (cond.sets > 1 ? " in each of " + std::to_string(cond.sets) + " sets" : ""),
+        f.fix = Fix{"use " + next->first +
+                        (cond.sets > 1 ? " in each of " + std::to_string(cond.sets) + " sets" : ""),
                     {{cable.id, "size", next->first}}};
     c.out.push_back(std::move(f));
 }
@@ -67,7 +68,8 @@ void conductorProtection(FeederCheck& c, const Part& cable) {
     auto amp = cableAmpacity(size, cond, c.ctx.tables, false);
     if (!rating || !amp)
         return;
-    auto small = cond.sets == 1 ? c.ctx.tables.smallConductorLimit(size, cond.material) : std::nullopt;
+    auto small =
+        cond.sets == 1 ? c.ctx.tables.smallConductorLimit(size, cond.material) : std::nullopt;
     const bool nextUpOk = *rating <= 800 && !c.ctx.tables.isStandardRating(amp->amps) &&
                           c.ctx.tables.nextStandardAtOrAbove(amp->amps) == *rating;
     const bool ampOk = *rating <= amp->amps + 1e-9 || nextUpOk;
@@ -76,17 +78,21 @@ void conductorProtection(FeederCheck& c, const Part& cable) {
         return;
     amp = cableAmpacity(size, cond, c.ctx.tables); // again, with its trace
     const double limit = smallOk ? (nextUpOk ? *rating : amp->amps) : std::min(amp->amps, *small);
-    auto f = makeFinding("conductor.protection", {cable.id, d.id},
-                         "cable " + cable.tag + " (" + fmt(amp->amps) + " A) is protected by " + d.tag +
-                             " at " + fmt(*rating, 0) + " A" +
-                             (smallOk ? "" : "; 240.4(D) limits " + size + " to " + fmt(*small, 0) + " A"));
+    auto f = makeFinding(
+        "conductor.protection", {cable.id, d.id},
+        "cable " + cable.tag + " (" + fmt(amp->amps) + " A) is protected by " + d.tag + " at " +
+            fmt(*rating, 0) + " A" +
+            (smallOk ? "" : "; 240.4(D) limits " + size + " to " + fmt(*small, 0) + " A"));
     f.computed = *rating;
     f.limit = limit;
     f.unit = "A";
     f.trace = amp->trace;
-    f.trace.push_back({"240.4(B)", *rating <= 800 ? "next standard rating above the ampacity: " +
-                                                        fmt(c.ctx.tables.nextStandardAtOrAbove(amp->amps).value_or(0), 0) + " A"
-                                                  : "not available above 800 A"});
+    f.trace.push_back(
+        {"240.4(B)", *rating <= 800
+                         ? "next standard rating above the ampacity: " +
+                               fmt(c.ctx.tables.nextStandardAtOrAbove(amp->amps).value_or(0), 0) +
+                               " A"
+                         : "not available above 800 A"});
     auto perSet = cond;
     perSet.sets = 1;
     auto next = smallestCable(*rating / cond.sets, perSet, c.ctx.tables, size);
@@ -127,20 +133,24 @@ void busLoad(FeederCheck& c, const Part& bus) {
     const double rating = bus.number("amps").value_or(0), need = load.required();
     if (need <= rating + 1e-9)
         return;
-    auto f = makeFinding("bus.load", {bus.id}, "bus " + bus.tag + " rated " + fmt(rating, 0) +
-                                                   " A carries a calculated load of " + fmt(need) + " A");
+    auto f = makeFinding("bus.load", {bus.id},
+                         "bus " + bus.tag + " rated " + fmt(rating, 0) +
+                             " A carries a calculated load of " + fmt(need) + " A");
     f.computed = need;
     f.limit = rating;
     f.unit = "A";
     f.trace = load.trace(c.ctx);
-    f.fix = Fix{"use a bus rated " + fmt(c.ctx.tables.nextStandardAtOrAbove(need).value_or(need), 0) + " A or more",
-                {{bus.id, "amps", c.ctx.tables.nextStandardAtOrAbove(need).value_or(std::ceil(need))}}};
+    f.fix =
+        Fix{"use a bus rated " + fmt(c.ctx.tables.nextStandardAtOrAbove(need).value_or(need), 0) +
+                " A or more",
+            {{bus.id, "amps", c.ctx.tables.nextStandardAtOrAbove(need).value_or(std::ceil(need))}}};
     c.out.push_back(std::move(f));
 }
 
 } // namespace
 
-void checkTransformers(const RuleContext& ctx, const MotorFactMap& motors, std::vector<Finding>& out);
+void checkTransformers(const RuleContext& ctx, const MotorFactMap& motors,
+                       std::vector<Finding>& out);
 
 void checkFeeders(const RuleContext& ctx, std::vector<Finding>& out) {
     const auto branches = motorBranches(ctx);

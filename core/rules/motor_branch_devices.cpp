@@ -25,16 +25,18 @@ void overload(BranchCheck& c) {
     if (setting <= lim.maxA + 1e-9)
         return;
     const bool withinC = setting <= lim.maxC + 1e-9;
-    auto& f = c.add(withinC ? "branch.overload.exception" : "branch.overload.setting", *ol,
-                    ol->tag + " set at " + fmt(setting) + " A exceeds " + fmt(lim.pctA, 0) + " % of FLA " +
-                        fmt(*fla) + " A = " + fmt(lim.maxA) + " A" +
-                        (withinC ? "; 430.32(C) allows up to " + fmt(lim.maxC) +
-                                       " A only where the lower setting will not let the motor start"
-                                 : ""));
-    f.trace = {{"nameplate FLA", fmt(*fla) + " A (NEC 430.6(A)(2))"},
-               {"basis", lim.basis},
-               {"430.32(A)(1)", fmt(lim.pctA, 0) + " % × " + fmt(*fla) + " = " + fmt(lim.maxA) + " A"},
-               {"430.32(C)", fmt(lim.pctC, 0) + " % × " + fmt(*fla) + " = " + fmt(lim.maxC) + " A"}};
+    auto& f =
+        c.add(withinC ? "branch.overload.exception" : "branch.overload.setting", *ol,
+              ol->tag + " set at " + fmt(setting) + " A exceeds " + fmt(lim.pctA, 0) +
+                  " % of FLA " + fmt(*fla) + " A = " + fmt(lim.maxA) + " A" +
+                  (withinC ? "; 430.32(C) allows up to " + fmt(lim.maxC) +
+                                 " A only where the lower setting will not let the motor start"
+                           : ""));
+    f.trace = {
+        {"nameplate FLA", fmt(*fla) + " A (NEC 430.6(A)(2))"},
+        {"basis", lim.basis},
+        {"430.32(A)(1)", fmt(lim.pctA, 0) + " % × " + fmt(*fla) + " = " + fmt(lim.maxA) + " A"},
+        {"430.32(C)", fmt(lim.pctC, 0) + " % × " + fmt(*fla) + " = " + fmt(lim.maxC) + " A"}};
     f.computed = setting;
     f.limit = withinC ? lim.maxC : lim.maxA;
     f.unit = "A";
@@ -55,12 +57,14 @@ void contactor(BranchCheck& c) {
     if (auto ac3 = k->number("ac3_a")) {
         if (*ac3 >= amps - 1e-9)
             return;
-        auto& f = c.add("branch.contactor.size", *k, k->tag + " AC-3 rating " + fmt(*ac3) +
-                                                         " A is below the motor current " + fmt(amps) + " A");
+        auto& f = c.add("branch.contactor.size", *k,
+                        k->tag + " AC-3 rating " + fmt(*ac3) + " A is below the motor current " +
+                            fmt(amps) + " A");
         f.computed = *ac3;
         f.limit = amps;
         f.unit = "A";
-        f.fix = Fix{"use a contactor rated at least " + fmt(amps) + " A AC-3", {{k->id, "ac3_a", std::ceil(amps)}}};
+        f.fix = Fix{"use a contactor rated at least " + fmt(amps) + " A AC-3",
+                    {{k->id, "ac3_a", std::ceil(amps)}}};
         return;
     }
     const auto size = k->word("nema_size").value_or("");
@@ -68,15 +72,17 @@ void contactor(BranchCheck& c) {
     auto rated = row ? c.ctx.tables.nemaHp(*row, v, ph) : std::nullopt;
     if (row && rated && *rated >= hp - 1e-9 && row->continuousA >= amps - 1e-9)
         return;
-    auto& f = c.add("branch.contactor.size", *k,
-                    k->tag + " NEMA size " + size + " is rated " +
-                        (rated ? fmt(*rated, 2) + " hp" : std::string("no hp")) + " at " + fmt(v, 0) +
-                        " V and " + (row ? fmt(row->continuousA, 0) : std::string("?")) + " A; " +
-                        c.motorName() + " needs " + fmt(hp, 2) + " hp and " + fmt(amps) + " A");
+    auto& f =
+        c.add("branch.contactor.size", *k,
+              k->tag + " NEMA size " + size + " is rated " +
+                  (rated ? fmt(*rated, 2) + " hp" : std::string("no hp")) + " at " + fmt(v, 0) +
+                  " V and " + (row ? fmt(row->continuousA, 0) : std::string("?")) + " A; " +
+                  c.motorName() + " needs " + fmt(hp, 2) + " hp and " + fmt(amps) + " A");
     f.computed = rated.value_or(0);
     f.limit = hp;
     f.unit = "hp";
-    f.trace.push_back({"NEMA ICS 2 size " + size, row ? fmt(row->continuousA, 0) + " A continuous" : "unknown"});
+    f.trace.push_back(
+        {"NEMA ICS 2 size " + size, row ? fmt(row->continuousA, 0) + " A continuous" : "unknown"});
     if (auto next = smallestNemaSize(hp, v, ph, amps, c.ctx.tables))
         f.fix = Fix{"use NEMA size " + *next, {{k->id, "nema_size", *next}}};
 }
@@ -90,8 +96,9 @@ void disconnect(BranchCheck& c) {
         return;
     const double need = 1.15 * c.flc.amps, amps = ds->number("amps").value_or(0);
     if (amps < need - 1e-9) {
-        auto& f = c.add("branch.disconnect.rating", *ds, ds->tag + " rated " + fmt(amps, 0) +
-                                                             " A is below 115 % of FLC = " + fmt(need) + " A");
+        auto& f = c.add("branch.disconnect.rating", *ds,
+                        ds->tag + " rated " + fmt(amps, 0) +
+                            " A is below 115 % of FLC = " + fmt(need) + " A");
         f.computed = amps;
         f.limit = need;
         f.unit = "A";
@@ -106,9 +113,12 @@ void disconnect(BranchCheck& c) {
     const auto hpRating = ds->number("hp_rating");
     if (hpRating && *hpRating >= hp - 1e-9)
         return;
-    auto& f = c.add("branch.disconnect.hp", *ds,
-                    ds->tag + (hpRating ? " is rated " + fmt(*hpRating, 2) + " hp" : std::string(" has no hp rating")) +
-                        "; " + c.motorName() + " needs a switch rated at least " + fmt(hp, 2) + " hp");
+    auto& f =
+        c.add("branch.disconnect.hp", *ds,
+              ds->tag +
+                  (hpRating ? " is rated " + fmt(*hpRating, 2) + " hp"
+                            : std::string(" has no hp rating")) +
+                  "; " + c.motorName() + " needs a switch rated at least " + fmt(hp, 2) + " hp");
     f.computed = hpRating.value_or(0);
     f.limit = hp;
     f.unit = "hp";
@@ -119,7 +129,8 @@ void groundingConductor(BranchCheck& c) {
     if (!c.b.scpd)
         return;
     const auto type = *scpdTypeOf(*c.b.scpd);
-    const double deviceA = egcDeviceRating(*c.b.scpd, type, motorTypeOf(*c.b.motor), c.flc.amps, c.ctx.tables);
+    const double deviceA =
+        egcDeviceRating(*c.b.scpd, type, motorTypeOf(*c.b.motor), c.flc.amps, c.ctx.tables);
     for (const Part* cable : c.b.cables) {
         const auto given = cable->word("egc_size").value_or("");
         const auto phase = cable->word("size").value_or("");
@@ -129,20 +140,23 @@ void groundingConductor(BranchCheck& c) {
         CableConditions one = cond;
         one.sets = 1;
         auto minPhase = smallestCable(1.25 * c.flc.amps / cond.sets, one, c.ctx.tables);
-        auto need = egcSize(deviceA, cond.material, phase, minPhase ? minPhase->first : phase, c.ctx.tables);
+        auto need = egcSize(deviceA, cond.material, phase, minPhase ? minPhase->first : phase,
+                            c.ctx.tables);
         auto needArea = need ? c.ctx.tables.areaCmil(need->size) : std::nullopt;
         auto givenArea = c.ctx.tables.areaCmil(given);
         if (!need || !needArea || !givenArea || *givenArea >= *needArea - 1e-6)
             continue;
-        auto& f = c.add("branch.egc.size", *cable, cable->tag + " equipment grounding conductor " + given +
-                                                       " is smaller than " + need->size);
+        auto& f = c.add("branch.egc.size", *cable,
+                        cable->tag + " equipment grounding conductor " + given +
+                            " is smaller than " + need->size);
         f.computed = *givenArea;
         f.limit = *needArea;
         f.unit = "cmil";
-        f.trace.push_back({"device rating for the EGC", fmt(deviceA, 0) + " A" +
-                                                            (type == ScpdType::InstantaneousBreaker
-                                                                 ? " (time-delay fuse maximum, 250.122(D)(1))"
-                                                                 : "")});
+        f.trace.push_back(
+            {"device rating for the EGC", fmt(deviceA, 0) + " A" +
+                                              (type == ScpdType::InstantaneousBreaker
+                                                   ? " (time-delay fuse maximum, 250.122(D)(1))"
+                                                   : "")});
         f.trace.insert(f.trace.end(), need->trace.begin(), need->trace.end());
         f.fix = Fix{"use " + need->size, {{cable->id, "egc_size", need->size}}};
     }

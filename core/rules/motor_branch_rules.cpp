@@ -23,8 +23,8 @@ void conductor(BranchCheck& c) {
         f.computed = amp->amps;
         f.limit = need;
         f.unit = "A";
-        f.trace.push_back({"required", "1.25 × FLC = 1.25 × " + fmt(c.flc.amps) + " = " + fmt(need) +
-                                           " A (NEC 430.22)"});
+        f.trace.push_back({"required", "1.25 × FLC = 1.25 × " + fmt(c.flc.amps) + " = " +
+                                           fmt(need) + " A (NEC 430.22)"});
         f.trace.insert(f.trace.end(), amp->trace.begin(), amp->trace.end());
         f.trace.push_back({"240.4(D)", "not applied: Article 430 permits the motor branch device "
                                        "to exceed it (240.4(G))"});
@@ -36,7 +36,9 @@ void conductor(BranchCheck& c) {
 }
 
 std::string deviceField(const Part& d) {
-    return d.kind == PartKind::Breaker ? "trip_a" : d.kind == PartKind::InstBreaker ? "pickup_a" : "amps";
+    return d.kind == PartKind::Breaker       ? "trip_a"
+           : d.kind == PartKind::InstBreaker ? "pickup_a"
+                                             : "amps";
 }
 
 void ratedDevice(BranchCheck& c, const Part& d, ScpdType type, const ScpdLimit& lim) {
@@ -46,24 +48,28 @@ void ratedDevice(BranchCheck& c, const Part& d, ScpdType type, const ScpdLimit& 
     const bool withinExc = rating <= lim.excMaxA + 1e-9;
     const bool hard = c.b.motor->flag("hard_to_start");
     const char* rule = withinExc && hard ? "branch.scpd.exception" : "branch.scpd.rating";
-    auto& f = c.add(rule, d, std::string(scpdTypeKey(type)) + " " + d.tag + " rated " + fmt(rating, 0) +
-                                 " A exceeds " + fmt(lim.maxA, 0) + " A for " + c.motorName() +
-                                 (withinExc && hard ? "; Exception No. 2 allows up to " +
-                                                          fmt(lim.excMaxA, 0) + " A for a motor that "
-                                                          "will not start"
-                                                    : ""));
+    auto& f =
+        c.add(rule, d,
+              std::string(scpdTypeKey(type)) + " " + d.tag + " rated " + fmt(rating, 0) +
+                  " A exceeds " + fmt(lim.maxA, 0) + " A for " + c.motorName() +
+                  (withinExc && hard ? "; Exception No. 2 allows up to " + fmt(lim.excMaxA, 0) +
+                                           " A for a motor that "
+                                           "will not start"
+                                     : ""));
     f.computed = rating;
     f.limit = withinExc && hard ? lim.excMaxA : lim.maxA;
     f.unit = "A";
-    f.trace.push_back({"Table 430.52(C)(1)", fmt(lim.pct, 0) + " % × " + fmt(c.flc.amps) + " A = " +
-                                                 fmt(lim.rawA) + " A"});
+    f.trace.push_back({"Table 430.52(C)(1)", fmt(lim.pct, 0) + " % × " + fmt(c.flc.amps) +
+                                                 " A = " + fmt(lim.rawA) + " A"});
     f.trace.push_back({"next standard size (Exc. No. 1, 240.6(A))", fmt(lim.maxA, 0) + " A"});
-    f.trace.push_back({"Exception No. 2 ceiling", fmt(lim.excPct, 0) + " % → " + fmt(lim.excMaxA, 0) +
+    f.trace.push_back({"Exception No. 2 ceiling", fmt(lim.excPct, 0) + " % → " +
+                                                      fmt(lim.excMaxA, 0) +
                                                       " A, only where the motor will not start"});
     if (!hard && withinExc)
         f.trace.push_back({"hard-to-start flag", "not set on the motor"});
     if (!(withinExc && hard))
-        f.fix = Fix{"set " + d.tag + " to " + fmt(lim.maxA, 0) + " A", {{d.id, deviceField(d), lim.maxA}}};
+        f.fix = Fix{"set " + d.tag + " to " + fmt(lim.maxA, 0) + " A",
+                    {{d.id, deviceField(d), lim.maxA}}};
 }
 
 void instantaneous(BranchCheck& c, const Part& d, const ScpdLimit& lim) {
@@ -77,18 +83,20 @@ void instantaneous(BranchCheck& c, const Part& d, const ScpdLimit& lim) {
     const bool excJustified = lra && needSetting > lim.maxA;
     const double allowed = excJustified ? lim.excMaxA : lim.maxA;
     if (setting > allowed + 1e-9) {
-        auto& f = c.add("branch.inst.setting", d, d.tag + " set at " + fmt(setting, 0) + " A exceeds " +
-                                                      fmt(allowed, 0) + " A for " + c.motorName());
+        auto& f = c.add("branch.inst.setting", d,
+                        d.tag + " set at " + fmt(setting, 0) + " A exceeds " + fmt(allowed, 0) +
+                            " A for " + c.motorName());
         f.computed = setting;
         f.limit = allowed;
         f.unit = "A";
-        f.trace.push_back({"Table 430.52(C)(1)", fmt(lim.pct, 0) + " % × " + fmt(c.flc.amps) + " A = " +
-                                                     fmt(lim.maxA) + " A"});
+        f.trace.push_back({"Table 430.52(C)(1)", fmt(lim.pct, 0) + " % × " + fmt(c.flc.amps) +
+                                                     " A = " + fmt(lim.maxA) + " A"});
         f.trace.insert(f.trace.end(), inrushTrace.begin(), inrushTrace.end());
-        f.trace.push_back({"430.52(C)(3) increase", excJustified ? "justified by the inrush, up to " +
-                                                                      fmt(lim.excMaxA, 0) + " A"
-                                                                : "not justified: the table setting "
-                                                                  "carries the start"});
+        f.trace.push_back({"430.52(C)(3) increase",
+                           excJustified
+                               ? "justified by the inrush, up to " + fmt(lim.excMaxA, 0) + " A"
+                               : "not justified: the table setting "
+                                 "carries the start"});
         f.fix = Fix{"set " + d.tag + " to " + fmt(std::floor(allowed), 0) + " A",
                     {{d.id, "pickup_a", std::floor(allowed)}}};
     }
@@ -97,23 +105,27 @@ void instantaneous(BranchCheck& c, const Part& d, const ScpdLimit& lim) {
     const double lowEdge = setting * (1.0 - kInstantaneousTolerance), inrush = *lra * asym;
     if (lowEdge >= inrush - 1e-9)
         return;
-    auto& f = c.add("branch.inst.inrush", d, d.tag + " lowest pickup " + fmt(lowEdge, 0) +
-                                                  " A is below the asymmetrical inrush " + fmt(inrush, 0) +
-                                                  " A of " + c.motorName() + "; it may trip on start");
+    auto& f =
+        c.add("branch.inst.inrush", d,
+              d.tag + " lowest pickup " + fmt(lowEdge, 0) + " A is below the asymmetrical inrush " +
+                  fmt(inrush, 0) + " A of " + c.motorName() + "; it may trip on start");
     f.computed = lowEdge;
     f.limit = inrush;
     f.unit = "A";
     f.trace.insert(f.trace.end(), inrushTrace.begin(), inrushTrace.end());
-    f.trace.push_back({"asymmetrical inrush", fmt(*lra, 0) + " A × " + fmt(asym, 2) +
-                                                  " (setting, common practice) = " + fmt(inrush, 0) + " A"});
-    f.trace.push_back({"lowest pickup", fmt(setting, 0) + " A × (1 − " + fmt(kInstantaneousTolerance, 2) +
-                                            " tolerance, common practice) = " + fmt(lowEdge, 0) + " A"});
+    f.trace.push_back(
+        {"asymmetrical inrush", fmt(*lra, 0) + " A × " + fmt(asym, 2) +
+                                    " (setting, common practice) = " + fmt(inrush, 0) + " A"});
+    f.trace.push_back(
+        {"lowest pickup", fmt(setting, 0) + " A × (1 − " + fmt(kInstantaneousTolerance, 2) +
+                              " tolerance, common practice) = " + fmt(lowEdge, 0) + " A"});
     const double fixTo = std::ceil(needSetting / 5.0) * 5.0;
     if (fixTo <= lim.excMaxA && fixTo <= d.number("pickup_max_a").value_or(1e9))
         f.fix = Fix{"set " + d.tag + " to " + fmt(fixTo, 0) + " A", {{d.id, "pickup_a", fixTo}}};
     else
         f.fix = Fix{"no setting within 430.52(C)(3) clears the inrush: review the motor data or "
-                    "starting method", {}};
+                    "starting method",
+                    {}};
 }
 
 void scpd(BranchCheck& c) {
@@ -148,9 +160,10 @@ void checkMotorBranches(const RuleContext& ctx, std::vector<Finding>& out) {
             continue;
         }
         if (!flc->fromTable) {
-            auto f = makeFinding("branch.flc.nameplate", {b.motor->id},
-                                 b.motor->tag + ": no row in the FLC table; sized from nameplate FLA " +
-                                     fmt(flc->amps) + " A");
+            auto f =
+                makeFinding("branch.flc.nameplate", {b.motor->id},
+                            b.motor->tag + ": no row in the FLC table; sized from nameplate FLA " +
+                                fmt(flc->amps) + " A");
             f.trace = motorFlc(*b.motor, ctx.tables)->trace;
             out.push_back(std::move(f));
         }

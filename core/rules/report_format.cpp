@@ -18,7 +18,9 @@ std::string partLabel(const Drawing& d, PartId id) {
 }
 
 // Two decimals are enough for people; JSON keeps full precision.
-std::string rounded(double v) { return formatNumber(std::round(v * 100.0) / 100.0); }
+std::string rounded(double v) {
+    return formatNumber(std::round(v * 100.0) / 100.0);
+}
 
 nlohmann::ordered_json fieldValueJson(const FieldValue& v) {
     if (auto d = std::get_if<double>(&v))
@@ -39,8 +41,8 @@ std::string findingHeadline(const Finding& f) {
 
 std::string reportText(const Drawing& d, const CheckReport& r, const std::string& file) {
     std::ostringstream s;
-    s << file << ": " << r.openCounts[2] << " violation(s), " << r.openCounts[1]
-      << " caution(s), " << r.openCounts[0] << " note(s)";
+    s << file << ": " << r.openCounts[2] << " violation(s), " << r.openCounts[1] << " caution(s), "
+      << r.openCounts[0] << " note(s)";
     if (r.acceptedCount)
         s << ", " << r.acceptedCount << " accepted";
     s << "\n";
@@ -96,7 +98,8 @@ nlohmann::ordered_json reportJson(const Drawing& d, const CheckReport& r, const 
         if (f.fix) {
             oj changes = oj::array();
             for (const auto& c : f.fix->changes)
-                changes.push_back({{"part", c.part.value}, {"field", c.field},
+                changes.push_back({{"part", c.part.value},
+                                   {"field", c.field},
                                    {"value", fieldValueJson(c.value)}});
             e["fix"] = {{"description", f.fix->description}, {"changes", changes}};
         } else {

@@ -5,7 +5,6 @@
 #include "rules/check.h"
 
 #include <nlohmann/json.hpp>
-
 #include <string>
 
 namespace lineward {

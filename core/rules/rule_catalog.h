@@ -11,11 +11,11 @@ namespace lineward {
 
 /// Fixed facts about one rule.
 struct RuleInfo {
-    std::string_view id;       ///< dotted id of our own, e.g. "topology.unfed"
-    std::string_view title;    ///< short title shown in the Findings list
-    std::string_view clause;   ///< code clause or source ("NEC 2023 430.32", "common practice")
-    Severity severity;         ///< severity when the rule is broken
-    std::string_view formula;  ///< the test, in words or symbols
+    std::string_view id;      ///< dotted id of our own, e.g. "topology.unfed"
+    std::string_view title;   ///< short title shown in the Findings list
+    std::string_view clause;  ///< code clause or source ("NEC 2023 430.32", "common practice")
+    Severity severity;        ///< severity when the rule is broken
+    std::string_view formula; ///< the test, in words or symbols
 };
 
 std::span<const RuleInfo> ruleCatalog();

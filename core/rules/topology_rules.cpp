@@ -100,11 +100,13 @@ void voltage(const Network& net, std::vector<Finding>& out) {
         f.limit = c.ratedV;
         f.unit = "V";
         const double tol = motor ? 10.0 : 5.0;
-        f.trace = {{"system voltage at the part", formatNumber(c.systemV) + " V"},
-                   {"rated voltage", formatNumber(c.ratedV) + " V"},
-                   {"difference", formatNumber(std::round(std::abs(c.systemV - c.ratedV) /
-                                                          c.ratedV * 1000.0) / 10.0) + " %"},
-                   {"accepted difference", formatNumber(tol) + " % of rated"}};
+        f.trace = {
+            {"system voltage at the part", formatNumber(c.systemV) + " V"},
+            {"rated voltage", formatNumber(c.ratedV) + " V"},
+            {"difference",
+             formatNumber(std::round(std::abs(c.systemV - c.ratedV) / c.ratedV * 1000.0) / 10.0) +
+                 " %"},
+            {"accepted difference", formatNumber(tol) + " % of rated"}};
         f.fix = Fix{"use equipment rated for the " + formatNumber(c.systemV) +
                         " V system, or feed it from a system of its voltage",
                     {}};

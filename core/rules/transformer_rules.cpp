@@ -38,7 +38,8 @@ double ratingOf(const Part& d) {
 }
 
 // Largest rating Table 450.3(B) permits for one side and method.
-double limitFor(const Tables& t, bool primaryOnly, bool primarySide, double ratedA, std::string& why) {
+double limitFor(const Tables& t, bool primaryOnly, bool primarySide, double ratedA,
+                std::string& why) {
     for (const auto& r : t.transformerProtection) {
         if (r.primaryOnly != primaryOnly || r.primarySide != primarySide)
             continue;
@@ -58,7 +59,8 @@ void protection(const RuleContext& ctx, const Part& tx, std::vector<Finding>& ou
                  sv = tx.number("sec_v").value_or(0);
     if (pv > 1000 || sv > 1000)
         return; // Table 450.3(A) governs; not checked here
-    const double ip = kva * 1000.0 / (std::sqrt(3.0) * pv), is = kva * 1000.0 / (std::sqrt(3.0) * sv);
+    const double ip = kva * 1000.0 / (std::sqrt(3.0) * pv),
+                 is = kva * 1000.0 / (std::sqrt(3.0) * sv);
     auto priId = ctx.flow.protectionAbove(ctx.flow.lineNode(tx.id));
     const Part* pri = priId ? ctx.drawing.part(*priId) : nullptr;
     const Part* sec = protectionBelow(ctx, ctx.flow.loadNode(tx.id), tx.id);
@@ -69,8 +71,8 @@ void protection(const RuleContext& ctx, const Part& tx, std::vector<Finding>& ou
     if (pri && ratingOf(*pri) <= priLim + 1e-9)
         return;
     auto f = makeFinding("transformer.protection", {tx.id},
-                         pri ? tx.tag + " primary device " + pri->tag + " at " + fmt(ratingOf(*pri), 0) +
-                                   " A exceeds " + fmt(priLim, 0) + " A"
+                         pri ? tx.tag + " primary device " + pri->tag + " at " +
+                                   fmt(ratingOf(*pri), 0) + " A exceeds " + fmt(priLim, 0) + " A"
                              : tx.tag + " has no primary overcurrent device");
     if (pri)
         f.parts.push_back(pri->id);
@@ -84,7 +86,8 @@ void protection(const RuleContext& ctx, const Part& tx, std::vector<Finding>& ou
                {"method", secOk ? "primary and secondary protection" : "primary protection only"},
                {"primary limit", priWhy}};
     if (pri)
-        f.fix = Fix{"set " + pri->tag + " to " + fmt(ctx.tables.standardAtOrBelow(priLim).value_or(priLim), 0) + " A",
+        f.fix = Fix{"set " + pri->tag + " to " +
+                        fmt(ctx.tables.standardAtOrBelow(priLim).value_or(priLim), 0) + " A",
                     {{pri->id, pri->kind == PartKind::Breaker ? "trip_a" : "amps",
                       ctx.tables.standardAtOrBelow(priLim).value_or(priLim)}}};
     else
@@ -92,28 +95,31 @@ void protection(const RuleContext& ctx, const Part& tx, std::vector<Finding>& ou
     out.push_back(std::move(f));
 }
 
-void loading(const RuleContext& ctx, const MotorFactMap& motors, const Part& tx, std::vector<Finding>& out) {
+void loading(const RuleContext& ctx, const MotorFactMap& motors, const Part& tx,
+             std::vector<Finding>& out) {
     const double kva = tx.number("kva").value_or(0), sv = tx.number("sec_v").value_or(0);
     const double rated = kva * 1000.0 / (std::sqrt(3.0) * sv);
     const auto load = feederLoad(ctx, motors, ctx.flow.loadNode(tx.id));
     if (load.running() <= rated + 1e-9)
         return;
-    auto f = makeFinding("transformer.load", {tx.id}, tx.tag + " carries " + fmt(load.running()) +
-                                                          " A, above its rated " + fmt(rated) + " A");
+    auto f = makeFinding("transformer.load", {tx.id},
+                         tx.tag + " carries " + fmt(load.running()) + " A, above its rated " +
+                             fmt(rated) + " A");
     f.computed = load.running();
     f.limit = rated;
     f.unit = "A";
     f.trace = load.trace(ctx);
     f.trace.push_back({"running load", fmt(load.running()) + " A (sum of FLC and load currents)"});
-    f.trace.push_back({"rated secondary current", fmt(kva, 0) + " kVA × 1000 / (√3 × " + fmt(sv, 0) +
-                                                      " V) = " + fmt(rated) + " A"});
+    f.trace.push_back({"rated secondary current", fmt(kva, 0) + " kVA × 1000 / (√3 × " +
+                                                      fmt(sv, 0) + " V) = " + fmt(rated) + " A"});
     f.fix = Fix{"use a larger transformer or move load", {}};
     out.push_back(std::move(f));
 }
 
 } // namespace
 
-void checkTransformers(const RuleContext& ctx, const MotorFactMap& motors, std::vector<Finding>& out) {
+void checkTransformers(const RuleContext& ctx, const MotorFactMap& motors,
+                       std::vector<Finding>& out) {
     for (const auto& p : ctx.drawing.parts()) {
         if (p.kind != PartKind::Transformer || !ctx.net.partEnergized(p.id))
             continue;

@@ -25,11 +25,13 @@ void drops(const RuleContext& ctx, const Part& load, std::vector<Finding>& out) 
     const NodeIndex head = chain.empty() ? at : ctx.flow.lineNode(chain.back());
     const double vLoad = vAt(ctx, at), vHead = vAt(ctx, head);
     const double branchPct = (vHead - vLoad) * 100.0;
-    const double totalPct = (ctx.study.originVoltagePu[static_cast<std::size_t>(bus)] - vLoad) * 100.0;
+    const double totalPct =
+        (ctx.study.originVoltagePu[static_cast<std::size_t>(bus)] - vLoad) * 100.0;
     const auto& s = ctx.settings();
     if (branchPct > s.vdropBranchPct + 1e-9) {
-        auto f = makeFinding("voltage.drop.branch", {load.id}, load.tag + " branch drop " + fmt(branchPct, 2) +
-                                                                   " % exceeds " + fmt(s.vdropBranchPct, 1) + " %");
+        auto f = makeFinding("voltage.drop.branch", {load.id},
+                             load.tag + " branch drop " + fmt(branchPct, 2) + " % exceeds " +
+                                 fmt(s.vdropBranchPct, 1) + " %");
         f.computed = branchPct;
         f.limit = s.vdropBranchPct;
         f.unit = "%";
@@ -42,8 +44,9 @@ void drops(const RuleContext& ctx, const Part& load, std::vector<Finding>& out) 
         out.push_back(std::move(f));
     }
     if (totalPct > s.vdropTotalPct + 1e-9) {
-        auto f = makeFinding("voltage.drop.total", {load.id}, load.tag + " total drop " + fmt(totalPct, 2) +
-                                                                  " % exceeds " + fmt(s.vdropTotalPct, 1) + " %");
+        auto f = makeFinding("voltage.drop.total", {load.id},
+                             load.tag + " total drop " + fmt(totalPct, 2) + " % exceeds " +
+                                 fmt(s.vdropTotalPct, 1) + " %");
         f.computed = totalPct;
         f.limit = s.vdropTotalPct;
         f.unit = "%";
@@ -55,29 +58,35 @@ void drops(const RuleContext& ctx, const Part& load, std::vector<Finding>& out) 
     }
 }
 
-void starting(const RuleContext& ctx, const Part& motor, const MotorStart& ms, std::vector<Finding>& out) {
+void starting(const RuleContext& ctx, const Part& motor, const MotorStart& ms,
+              std::vector<Finding>& out) {
     const auto& s = ctx.settings();
     if (ms.busDipPct <= s.startDipPct + 1e-9 && ms.terminalPctOfRated >= s.startTerminalPct - 1e-9)
         return;
     std::vector<TraceStep> trace{
-        {"locked-rotor current", fmt(ms.lockedRotorA, 0) + " A" + (ms.lraAssumed ? " (6 × FLC assumed, common practice)" : "")},
+        {"locked-rotor current", fmt(ms.lockedRotorA, 0) + " A" +
+                                     (ms.lraAssumed ? " (6 × FLC assumed, common practice)" : "")},
         {"starting power factor", fmt(s.startPf, 2) + " (setting)"},
-        {"method", "superposition on the load-flow state: the motor at locked-rotor impedance, others running"}};
+        {"method", "superposition on the load-flow state: the motor at locked-rotor impedance, "
+                   "others running"}};
     if (ms.busDipPct > s.startDipPct + 1e-9) {
-        auto f = makeFinding("voltage.start.dip", {motor.id}, "starting " + motor.tag + " dips its bus " +
-                                                                  fmt(ms.busDipPct, 1) + " % (limit " +
-                                                                  fmt(s.startDipPct, 0) + " %)");
+        auto f = makeFinding("voltage.start.dip", {motor.id},
+                             "starting " + motor.tag + " dips its bus " + fmt(ms.busDipPct, 1) +
+                                 " % (limit " + fmt(s.startDipPct, 0) + " %)");
         f.computed = ms.busDipPct;
         f.limit = s.startDipPct;
         f.unit = "%";
         f.trace = trace;
-        f.fix = Fix{"reduce the starting current (reduced-voltage starter or drive) or stiffen the supply", {}};
+        f.fix = Fix{
+            "reduce the starting current (reduced-voltage starter or drive) or stiffen the supply",
+            {}};
         out.push_back(std::move(f));
     }
     if (ms.terminalPctOfRated < s.startTerminalPct - 1e-9) {
         auto f = makeFinding("voltage.start.terminal", {motor.id},
-                             motor.tag + " sees " + fmt(ms.terminalPctOfRated, 1) + " % of its rated voltage while "
-                                                                                     "starting (limit " +
+                             motor.tag + " sees " + fmt(ms.terminalPctOfRated, 1) +
+                                 " % of its rated voltage while "
+                                 "starting (limit " +
                                  fmt(s.startTerminalPct, 0) + " %)");
         f.computed = ms.terminalPctOfRated;
         f.limit = s.startTerminalPct;

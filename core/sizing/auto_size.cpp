@@ -20,8 +20,8 @@ std::string chooseTripClass(const Part& motor, const Tables& t) {
 
 } // namespace
 
-std::optional<BucketProposal> proposeBucket(const Part& motor, const SizeOptions& o, const Tables& t,
-                                            std::string& why) {
+std::optional<BucketProposal> proposeBucket(const Part& motor, const SizeOptions& o,
+                                            const Tables& t, std::string& why) {
     BucketProposal p;
     auto flc = motorFlc(motor, t);
     if (!flc) {
@@ -42,22 +42,26 @@ std::optional<BucketProposal> proposeBucket(const Part& motor, const SizeOptions
     }
     p.conductorSize = cable->first;
     p.conductorAmpacityA = cable->second.amps;
-    p.trace.push_back({"conductor", "1.25 × " + fmt(flc->amps) + " = " + fmt(p.conductorMinA) + " A → " +
-                                        cable->first + " (" + fmt(p.conductorAmpacityA) + " A)"});
-    for (auto d : {ScpdType::InverseTimeBreaker, ScpdType::InstantaneousBreaker, ScpdType::TimeDelayFuse,
-                   ScpdType::NonTimeDelayFuse})
+    p.trace.push_back({"conductor", "1.25 × " + fmt(flc->amps) + " = " + fmt(p.conductorMinA) +
+                                        " A → " + cable->first + " (" + fmt(p.conductorAmpacityA) +
+                                        " A)"});
+    for (auto d : {ScpdType::InverseTimeBreaker, ScpdType::InstantaneousBreaker,
+                   ScpdType::TimeDelayFuse, ScpdType::NonTimeDelayFuse})
         p.scpdMaxA[d] = scpdLimit(d, type, flc->amps, t).maxA;
     p.device = o.device;
     const auto lim = scpdLimit(o.device, type, flc->amps, t);
     p.deviceRatingA = lim.maxA;
     if (o.device == ScpdType::InstantaneousBreaker) {
-        // Lowest setting that clears the asymmetrical inrush; the table value where no LRA is known.
+        // Lowest setting that clears the asymmetrical inrush; the table value where no LRA is
+        // known.
         if (auto lra = lockedRotorA(motor, t, &p.trace)) {
-            const double need = std::ceil(*lra * o.asymmetryFactor / (1 - kInstantaneousTolerance) / 5) * 5;
+            const double need =
+                std::ceil(*lra * o.asymmetryFactor / (1 - kInstantaneousTolerance) / 5) * 5;
             p.deviceRatingA = need <= lim.maxA ? need : std::min(need, lim.excMaxA);
             if (need > lim.excMaxA)
-                p.trace.push_back({"instantaneous setting", "inrush needs " + fmt(need, 0) +
-                                                                " A, above the 430.52(C)(3) ceiling"});
+                p.trace.push_back(
+                    {"instantaneous setting",
+                     "inrush needs " + fmt(need, 0) + " A, above the 430.52(C)(3) ceiling"});
         }
     }
     if (auto fla = motor.number("fla")) {
@@ -70,8 +74,9 @@ std::optional<BucketProposal> proposeBucket(const Part& motor, const SizeOptions
     p.disconnectMinA = std::round(115.0 * flc->amps) / 100.0; // 1.15 × FLC to the cent
     const double hp = motorHp(motor), v = motor.number("volts").value_or(0);
     const int ph = static_cast<int>(motor.number("phases").value_or(3));
-    p.nemaSize = smallestNemaSize(hp, v, ph, std::max(flc->amps, motor.number("fla").value_or(0)), t)
-                     .value_or("");
+    p.nemaSize =
+        smallestNemaSize(hp, v, ph, std::max(flc->amps, motor.number("fla").value_or(0)), t)
+            .value_or("");
     const double egcDevice = o.device == ScpdType::InstantaneousBreaker
                                  ? scpdLimit(ScpdType::TimeDelayFuse, type, flc->amps, t).maxA
                                  : p.deviceRatingA;

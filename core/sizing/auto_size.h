@@ -17,9 +17,9 @@ struct BucketProposal {
     int terminationC = 75;
     std::map<ScpdType, double> scpdMaxA; ///< largest permitted rating or setting per device type
     ScpdType device = ScpdType::InverseTimeBreaker;
-    double deviceRatingA = 0;            ///< proposed rating, or instantaneous setting
-    std::optional<double> overloadMaxA;  ///< 430.32(A)(1), when the nameplate FLA is known
-    double overloadSettingA = 0;         ///< proposed: the nameplate FLA (else the FLC)
+    double deviceRatingA = 0;           ///< proposed rating, or instantaneous setting
+    std::optional<double> overloadMaxA; ///< 430.32(A)(1), when the nameplate FLA is known
+    double overloadSettingA = 0;        ///< proposed: the nameplate FLA (else the FLC)
     std::string tripClass;
     double disconnectMinA = 0;
     std::string nemaSize;
@@ -39,7 +39,7 @@ struct SizeOptions {
 };
 
 /// Proposes a bucket; returns the reason when it cannot (no FLC, no conductor large enough...).
-std::optional<BucketProposal> proposeBucket(const Part& motor, const SizeOptions& o, const Tables& t,
-                                            std::string& why);
+std::optional<BucketProposal> proposeBucket(const Part& motor, const SizeOptions& o,
+                                            const Tables& t, std::string& why);
 
 } // namespace lineward

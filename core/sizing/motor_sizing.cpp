@@ -57,23 +57,24 @@ std::optional<MotorFlc> motorFlc(const Part& m, const Tables& t, bool withTrace)
             }
         if (withTrace)
             r.trace.push_back({"kW as hp", fmt(*m.number("kw"), 2) + " kW / 0.746 = " + fmt(eq, 2) +
-                                           " hp → table row " + fmt(hp, 2) + " hp"});
+                                               " hp → table row " + fmt(hp, 2) + " hp"});
     }
     if (auto a = t.flc(hp, volts, phases, &r.columnV)) {
         r.amps = *a;
         r.hpUsed = hp;
         if (withTrace)
             r.trace.push_back({"FLC", fmt(*a, 1) + " A (NEC Table " +
-                                      std::string(phases == 1 ? "430.248" : "430.250") + ", " +
-                                      fmt(hp, 2) + " hp, " + fmt(r.columnV, 0) + " V column)"});
+                                          std::string(phases == 1 ? "430.248" : "430.250") + ", " +
+                                          fmt(hp, 2) + " hp, " + fmt(r.columnV, 0) + " V column)"});
         return r;
     }
     if (auto fla = m.number("fla")) {
         r.amps = *fla;
         r.fromTable = false;
         if (withTrace)
-            r.trace.push_back({"FLC", fmt(*fla, 1) + " A from the nameplate: the table has no row for " +
-                                      fmt(hp, 2) + " hp at " + fmt(volts, 0) + " V"});
+            r.trace.push_back({"FLC", fmt(*fla, 1) +
+                                          " A from the nameplate: the table has no row for " +
+                                          fmt(hp, 2) + " hp at " + fmt(volts, 0) + " V"});
         return r;
     }
     return std::nullopt;
@@ -87,7 +88,7 @@ std::optional<ScpdType> scpdTypeOf(const Part& d) {
         return ScpdType::InstantaneousBreaker;
     case PartKind::Fuse:
         return d.word("fuse_type").value_or("time_delay") == "fast" ? ScpdType::NonTimeDelayFuse
-                                                                   : ScpdType::TimeDelayFuse;
+                                                                    : ScpdType::TimeDelayFuse;
     default:
         return std::nullopt;
     }
@@ -133,9 +134,9 @@ std::optional<double> lockedRotorA(const Part& m, const Tables& t, std::vector<T
     const double lra = *kvaHp * hp * 1000.0 / (one ? v : std::sqrt(3.0) * v);
     if (trace)
         trace->push_back({"locked-rotor current",
-                          fmt(lra, 0) + " A = " + fmt(*kvaHp, 2) + " kVA/hp (code letter " + *letter +
-                              ", NEC Table 430.7(B), top of range) × " + fmt(hp, 2) + " hp × 1000 / (" +
-                              (one ? "" : "√3 × ") + fmt(v, 0) + " V)"});
+                          fmt(lra, 0) + " A = " + fmt(*kvaHp, 2) + " kVA/hp (code letter " +
+                              *letter + ", NEC Table 430.7(B), top of range) × " + fmt(hp, 2) +
+                              " hp × 1000 / (" + (one ? "" : "√3 × ") + fmt(v, 0) + " V)"});
     return lra;
 }
 
@@ -150,8 +151,8 @@ CableConditions conditionsOf(const Part& c, const Settings& s) {
     return k;
 }
 
-std::optional<Ampacity> cableAmpacity(const std::string& size, const CableConditions& c, const Tables& t,
-                                      bool withTrace) {
+std::optional<Ampacity> cableAmpacity(const std::string& size, const CableConditions& c,
+                                      const Tables& t, bool withTrace) {
     Ampacity a;
     const char* mat = c.material == Material::Cu ? "Cu" : "Al";
     auto ins = t.ampacityAt(size, c.material, c.insulationC);
@@ -165,34 +166,40 @@ std::optional<Ampacity> cableAmpacity(const std::string& size, const CableCondit
     a.amps = perSet * c.sets;
     if (!withTrace)
         return a;
-    a.trace.push_back({"conductor", size + " " + mat + ", " + std::to_string(c.insulationC) +
-                                        " °C insulation, " + std::to_string(c.terminationC) +
-                                        " °C terminations" +
-                                        (c.sets > 1 ? ", " + std::to_string(c.sets) + " sets" : "")});
-    a.trace.push_back({"table ampacity", fmt(*ins, 0) + " A in the " + std::to_string(c.insulationC) +
+    a.trace.push_back(
+        {"conductor", size + " " + mat + ", " + std::to_string(c.insulationC) + " °C insulation, " +
+                          std::to_string(c.terminationC) + " °C terminations" +
+                          (c.sets > 1 ? ", " + std::to_string(c.sets) + " sets" : "")});
+    a.trace.push_back({"table ampacity", fmt(*ins, 0) + " A in the " +
+                                             std::to_string(c.insulationC) +
                                              " °C column (NEC Table 310.16)"});
     a.trace.push_back({"ambient factor", fmt(*amb, 2) + " at " + fmt(c.ambientC, 0) +
                                              " °C (NEC Table 310.15(B)(1)(1))"});
-    a.trace.push_back({"adjustment factor", fmt(adj, 2) + " for " + std::to_string(c.conductors) +
-                                                " current-carrying conductors (NEC Table 310.15(C)(1))"});
-    a.trace.push_back({"termination limit", fmt(*term, 0) + " A in the " +
-                                                std::to_string(std::min(c.insulationC, c.terminationC)) +
-                                                " °C column (NEC 110.14(C)(1))"});
-    a.trace.push_back({"ampacity", "min(" + fmt(*ins, 0) + " × " + fmt(*amb, 2) + " × " + fmt(adj, 2) +
-                                       ", " + fmt(*term, 0) + ")" +
+    a.trace.push_back(
+        {"adjustment factor", fmt(adj, 2) + " for " + std::to_string(c.conductors) +
+                                  " current-carrying conductors (NEC Table 310.15(C)(1))"});
+    a.trace.push_back(
+        {"termination limit", fmt(*term, 0) + " A in the " +
+                                  std::to_string(std::min(c.insulationC, c.terminationC)) +
+                                  " °C column (NEC 110.14(C)(1))"});
+    a.trace.push_back({"ampacity", "min(" + fmt(*ins, 0) + " × " + fmt(*amb, 2) + " × " +
+                                       fmt(adj, 2) + ", " + fmt(*term, 0) + ")" +
                                        (c.sets > 1 ? " × " + std::to_string(c.sets) : "") + " = " +
                                        fmt(a.amps, 1) + " A"});
     return a;
 }
 
-std::optional<std::pair<std::string, Ampacity>> smallestCable(double requiredA, const CableConditions& c,
-                                                              const Tables& t, const std::string& minSize) {
+std::optional<std::pair<std::string, Ampacity>> smallestCable(double requiredA,
+                                                              const CableConditions& c,
+                                                              const Tables& t,
+                                                              const std::string& minSize) {
     bool started = false;
     for (auto size : awgSizes()) {
         started = started || size == minSize;
         if (!started)
             continue;
-        if (auto a = cableAmpacity(std::string(size), c, t, false); a && a->amps >= requiredA - 1e-9)
+        if (auto a = cableAmpacity(std::string(size), c, t, false);
+            a && a->amps >= requiredA - 1e-9)
             return std::pair{std::string(size), *cableAmpacity(std::string(size), c, t)};
     }
     return std::nullopt;
@@ -223,7 +230,8 @@ std::optional<std::string> smallestNemaSize(double hp, double volts, int phases,
     return std::nullopt;
 }
 
-double egcDeviceRating(const Part& device, ScpdType type, MotorType motor, double flc, const Tables& t) {
+double egcDeviceRating(const Part& device, ScpdType type, MotorType motor, double flc,
+                       const Tables& t) {
     if (type == ScpdType::InstantaneousBreaker)
         return scpdLimit(ScpdType::TimeDelayFuse, motor, flc, t).maxA;
     return device.number(device.kind == PartKind::Breaker ? "trip_a" : "amps").value_or(0);
@@ -235,9 +243,10 @@ std::optional<EgcSize> egcSize(double deviceA, Material m, const std::string& ph
     if (!base)
         return std::nullopt;
     EgcSize e{*base, {}};
-    e.trace.push_back({"EGC from device rating", *base + " for " + fmt(deviceA, 0) +
-                                                     " A (NEC Table 250.122)"});
-    auto phase = t.areaCmil(phaseSize), minPhase = t.areaCmil(minPhaseSize), egc = t.areaCmil(*base);
+    e.trace.push_back(
+        {"EGC from device rating", *base + " for " + fmt(deviceA, 0) + " A (NEC Table 250.122)"});
+    auto phase = t.areaCmil(phaseSize), minPhase = t.areaCmil(minPhaseSize),
+         egc = t.areaCmil(*base);
     if (phase && minPhase && egc && *phase > *minPhase) {
         // 250.122(B): increase the EGC in proportion to the phase conductors' circular mils.
         const double ratio = *phase / *minPhase;
@@ -249,9 +258,9 @@ std::optional<EgcSize> egcSize(double deviceA, Material m, const std::string& ph
                 break;
             }
         }
-        e.trace.push_back({"proportional increase", fmt(*phase, 0) + " / " + fmt(*minPhase, 0) +
-                                                        " cmil = " + fmt(ratio, 2) + " × " + fmt(*egc, 0) +
-                                                        " cmil → " + e.size + " (NEC 250.122(B))"});
+        e.trace.push_back({"proportional increase",
+                           fmt(*phase, 0) + " / " + fmt(*minPhase, 0) + " cmil = " + fmt(ratio, 2) +
+                               " × " + fmt(*egc, 0) + " cmil → " + e.size + " (NEC 250.122(B))"});
     }
     if (auto a = t.areaCmil(e.size); a && phase && *a > *phase) {
         e.size = phaseSize;

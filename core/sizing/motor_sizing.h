@@ -26,18 +26,19 @@ MotorType motorTypeOf(const Part& motor);
 
 /// Largest permitted rating or setting by Table 430.52(C)(1).
 struct ScpdLimit {
-    double pct = 0;       ///< table percentage
-    double rawA = 0;      ///< pct × FLC
-    double maxA = 0;      ///< after the next-standard-size rule (Exc. 1); the raw value for settings
+    double pct = 0;  ///< table percentage
+    double rawA = 0; ///< pct × FLC
+    double maxA = 0; ///< after the next-standard-size rule (Exc. 1); the raw value for settings
     bool roundedUp = false;
-    double excPct = 0;    ///< Exception No. 2 or 430.52(C)(3) percentage
-    double excMaxA = 0;   ///< largest rating the exception permits (rounded down for ratings)
+    double excPct = 0;  ///< Exception No. 2 or 430.52(C)(3) percentage
+    double excMaxA = 0; ///< largest rating the exception permits (rounded down for ratings)
 };
 ScpdLimit scpdLimit(ScpdType type, MotorType motor, double flc, const Tables& t);
 std::optional<ScpdType> scpdTypeOf(const Part& device);
 
 /// Locked-rotor current: the given LRA, else from the code letter (upper end of its range).
-std::optional<double> lockedRotorA(const Part& motor, const Tables& t, std::vector<TraceStep>* trace);
+std::optional<double> lockedRotorA(const Part& motor, const Tables& t,
+                                   std::vector<TraceStep>* trace);
 /// Instantaneous pickup tolerance assumed below the setting (common practice: ±20 %).
 inline constexpr double kInstantaneousTolerance = 0.20;
 
@@ -57,12 +58,12 @@ struct Ampacity {
     std::vector<TraceStep> trace;
 };
 /// `withTrace` false skips building the trace text (the checks ask again when they report).
-std::optional<Ampacity> cableAmpacity(const std::string& size, const CableConditions& c, const Tables& t,
-                                      bool withTrace = true);
+std::optional<Ampacity> cableAmpacity(const std::string& size, const CableConditions& c,
+                                      const Tables& t, bool withTrace = true);
 /// Smallest US size (from `minSize`) whose ampacity reaches `requiredA`.
-std::optional<std::pair<std::string, Ampacity>> smallestCable(double requiredA, const CableConditions& c,
-                                                              const Tables& t,
-                                                              const std::string& minSize = "14 AWG");
+std::optional<std::pair<std::string, Ampacity>>
+smallestCable(double requiredA, const CableConditions& c, const Tables& t,
+              const std::string& minSize = "14 AWG");
 
 /// Overload limits of 430.32(A)(1) and (C) from the nameplate FLA.
 struct OverloadLimit {
@@ -86,7 +87,8 @@ std::optional<EgcSize> egcSize(double deviceA, Material m, const std::string& ph
                                const std::string& minPhaseSize, const Tables& t);
 /// Device rating used for the EGC (250.122(D)(1): a time-delay fuse rating for instantaneous
 /// breakers).
-double egcDeviceRating(const Part& device, ScpdType type, MotorType motor, double flc, const Tables& t);
+double egcDeviceRating(const Part& device, ScpdType type, MotorType motor, double flc,
+                       const Tables& t);
 
 std::string fmt(double v, int decimals = 1);
 

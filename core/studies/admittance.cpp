@@ -10,7 +10,8 @@ Admittance::Admittance(const NetworkModel& m, bool withMotors) : m_n(m.busCount(
     if (m_n == 0)
         return;
     std::vector<Eigen::Triplet<Complex>> trip;
-    trip.reserve(m.branches.size() * 4 + m.sources.size() + m.motors.size() + static_cast<std::size_t>(m_n));
+    trip.reserve(m.branches.size() * 4 + m.sources.size() + m.motors.size() +
+                 static_cast<std::size_t>(m_n));
     for (const auto& b : m.branches) {
         const Complex y = 1.0 / b.z;
         trip.emplace_back(b.from, b.from, y);
@@ -35,7 +36,9 @@ Admittance::Admittance(const NetworkModel& m, bool withMotors) : m_n(m.busCount(
     m_ok = m_lu->info() == Eigen::Success;
 }
 
-Eigen::VectorXcd Admittance::solve(const Eigen::VectorXcd& b) const { return m_lu->solve(b); }
+Eigen::VectorXcd Admittance::solve(const Eigen::VectorXcd& b) const {
+    return m_lu->solve(b);
+}
 
 Eigen::VectorXcd Admittance::zColumn(int k) const {
     Eigen::VectorXcd e = Eigen::VectorXcd::Zero(m_n);

@@ -5,7 +5,6 @@
 
 #include <Eigen/SparseCore>
 #include <Eigen/SparseLU>
-
 #include <memory>
 
 namespace lineward {

@@ -24,9 +24,13 @@ int find(std::vector<int>& p, int x) {
     return x;
 }
 
-bool hasImpedance(PartKind k) { return k == PartKind::Cable || k == PartKind::Transformer; }
+bool hasImpedance(PartKind k) {
+    return k == PartKind::Cable || k == PartKind::Transformer;
+}
 
-double zBase(double volts) { return volts * volts / (kBaseMva * 1e6); }
+double zBase(double volts) {
+    return volts * volts / (kBaseMva * 1e6);
+}
 
 } // namespace
 
@@ -77,7 +81,8 @@ void mergeBuses(NetworkModel& m, const Network& net) {
     m.busOfNode.assign(static_cast<std::size_t>(n), -1);
     std::vector<int> busOfRoot(static_cast<std::size_t>(n), -1);
     for (int v = 0; v < n; ++v) {
-        if (!g[static_cast<std::size_t>(v)].energized || g[static_cast<std::size_t>(v)].nominalV <= 0)
+        if (!g[static_cast<std::size_t>(v)].energized ||
+            g[static_cast<std::size_t>(v)].nominalV <= 0)
             continue;
         const int r = find(parent, v);
         if (busOfRoot[static_cast<std::size_t>(r)] < 0) {
@@ -99,7 +104,8 @@ void addBranches(NetworkModel& m, const Network& net, const Tables& t) {
             continue;
         Complex z;
         if (p.kind == PartKind::Transformer) {
-            const double zpu = p.number("z_pct").value_or(5) / 100.0 * kBaseMva / (p.number("kva").value_or(1) / 1000.0);
+            const double zpu = p.number("z_pct").value_or(5) / 100.0 * kBaseMva /
+                               (p.number("kva").value_or(1) / 1000.0);
             z = fromMagnitude(zpu, p.number("x_over_r").value_or(6));
         } else if (auto ohms = cableOhms(p, t)) {
             z = *ohms / zBase(m.baseV[static_cast<std::size_t>(a)]);
@@ -123,9 +129,11 @@ void addShunts(NetworkModel& m, const Network& net, const Tables& t, const Setti
             continue;
         const double vb = m.baseV[static_cast<std::size_t>(bus)];
         if (p.kind == PartKind::Source) {
-            const double mva = p.number("fault_mva").value_or(std::sqrt(3.0) * p.number("kv").value_or(0) *
-                                                             p.number("fault_ka").value_or(0));
-            m.sources.push_back({bus, fromMagnitude(kBaseMva / mva, p.number("x_over_r").value_or(15)), p.id});
+            const double mva = p.number("fault_mva")
+                                   .value_or(std::sqrt(3.0) * p.number("kv").value_or(0) *
+                                             p.number("fault_ka").value_or(0));
+            m.sources.push_back(
+                {bus, fromMagnitude(kBaseMva / mva, p.number("x_over_r").value_or(15)), p.id});
         } else if (p.kind == PartKind::Motor) {
             auto flc = motorFlc(p, t, false);
             const double amps = p.number("fla").value_or(flc ? flc->amps : 0);
@@ -135,7 +143,8 @@ void addShunts(NetworkModel& m, const Network& net, const Tables& t, const Setti
             const double sPu = std::sqrt(3.0) * rated * amps / (kBaseMva * 1e6);
             m.loads.push_back({bus, std::polar(sPu, std::acos(kRunningPf)), p.id});
             if (s.motorContributionX > 0) {
-                const double zOhm = rated / std::sqrt(3.0) / (s.motorContributionX * (flc ? flc->amps : amps));
+                const double zOhm =
+                    rated / std::sqrt(3.0) / (s.motorContributionX * (flc ? flc->amps : amps));
                 m.motors.push_back({bus, fromMagnitude(zOhm / zBase(vb), kMotorXr), p.id});
             }
         } else if (p.kind == PartKind::Load) {

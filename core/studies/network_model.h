@@ -20,7 +20,7 @@ inline constexpr double kBaseMva = 100.0;
 /// A series element between two solve buses.
 struct ModelBranch {
     int from = -1, to = -1;
-    Complex z;      ///< per unit on kBaseMva and the buses' nominal voltage
+    Complex z; ///< per unit on kBaseMva and the buses' nominal voltage
     PartId part;
 };
 
@@ -34,18 +34,18 @@ struct ModelShunt {
 /// A load drawing constant power at its bus.
 struct ModelLoad {
     int bus = -1;
-    Complex s;       ///< per unit (P + jQ)
+    Complex s; ///< per unit (P + jQ)
     PartId part;
 };
 
 /// Per-unit model of the energized network.
 struct NetworkModel {
-    std::vector<int> busOfNode;       ///< network node → solve bus (−1 when not energized)
-    std::vector<double> baseV;        ///< by solve bus: nominal line-to-line volts
+    std::vector<int> busOfNode; ///< network node → solve bus (−1 when not energized)
+    std::vector<double> baseV;  ///< by solve bus: nominal line-to-line volts
     std::vector<ModelBranch> branches;
     std::vector<ModelShunt> sources, motors;
-    std::vector<ModelLoad> loads;     ///< motors running and static loads
-    std::vector<Finding> notes;       ///< parts the model could not represent
+    std::vector<ModelLoad> loads; ///< motors running and static loads
+    std::vector<Finding> notes;   ///< parts the model could not represent
     int busCount() const { return static_cast<int>(baseV.size()); }
     /// Base current in amperes at a bus.
     double baseAmps(int bus) const;

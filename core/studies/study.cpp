@@ -2,11 +2,11 @@
 // same factorised Y) and motor starting (superposition on the load-flow state).
 #include "studies/study.h"
 
-#include "studies/admittance.h"
-#include "studies/tree_solver.h"
 #include "rules/rule_catalog.h"
 #include "rules/rule_context.h"
 #include "sizing/motor_sizing.h"
+#include "studies/admittance.h"
+#include "studies/tree_solver.h"
 
 #include <cmath>
 
@@ -24,7 +24,9 @@ int StudyResults::busOf(NodeIndex n) const {
 
 const FaultAtBus* StudyResults::faultAtNode(NodeIndex n) const {
     const int b = busOf(n);
-    return b >= 0 && static_cast<std::size_t>(b) < fault.size() ? &fault[static_cast<std::size_t>(b)] : nullptr;
+    return b >= 0 && static_cast<std::size_t>(b) < fault.size()
+               ? &fault[static_cast<std::size_t>(b)]
+               : nullptr;
 }
 
 namespace {
@@ -66,7 +68,8 @@ struct LoadFlowSolver {
             return lu->solve(b);
         const std::vector<Complex> in(b.data(), b.data() + b.size());
         const auto out = tree->solve(in);
-        return Eigen::Map<const Eigen::VectorXcd>(out.data(), static_cast<Eigen::Index>(out.size()));
+        return Eigen::Map<const Eigen::VectorXcd>(out.data(),
+                                                  static_cast<Eigen::Index>(out.size()));
     }
 };
 
@@ -142,8 +145,9 @@ void partCurrents(StudyResults& r, const Network& net, const Flow& flow) {
     }
 }
 
-void motorStarting(StudyResults& r, const Network& net, const Flow& flow, const std::optional<TreeSolver>& tree,
-                   const Admittance* lu, const Tables& t, const Settings& s) {
+void motorStarting(StudyResults& r, const Network& net, const Flow& flow,
+                   const std::optional<TreeSolver>& tree, const Admittance* lu, const Tables& t,
+                   const Settings& s) {
     const Drawing& d = net.drawing();
     for (const auto& l : r.model.loads) {
         const Part& p = *d.part(l.part);
@@ -213,9 +217,10 @@ StudyResults runStudies(const Network& net, const Flow& flow, const Tables& t, c
     }
     loadFlow(r, LoadFlowSolver{tree, lu.get()});
     if (!r.loadFlowConverged) {
-        auto f = makeFinding("study.loadflow.diverged", {},
-                             "the load flow did not settle: the network cannot carry its loads at a "
-                             "usable voltage (look for long, small feeders); voltage checks are skipped");
+        auto f = makeFinding(
+            "study.loadflow.diverged", {},
+            "the load flow did not settle: the network cannot carry its loads at a "
+            "usable voltage (look for long, small feeders); voltage checks are skipped");
         r.notes.push_back(std::move(f));
     }
     originVoltages(r, net, flow);

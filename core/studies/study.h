@@ -12,26 +12,26 @@ namespace lineward {
 
 /// Three-phase bolted fault at a solve bus.
 struct FaultAtBus {
-    double ikKa = 0;    ///< symmetrical r.m.s.
-    double xOverR = 0;  ///< of the Thevenin impedance at the fault
-    double kappa = 0;   ///< IEC 60909-0: 1.02 + 0.98·e^(−3R/X)
-    double peakKa = 0;  ///< κ·√2·Ik
+    double ikKa = 0;   ///< symmetrical r.m.s.
+    double xOverR = 0; ///< of the Thevenin impedance at the fault
+    double kappa = 0;  ///< IEC 60909-0: 1.02 + 0.98·e^(−3R/X)
+    double peakKa = 0; ///< κ·√2·Ik
 };
 
 /// Steady state and motor starting at a solve bus or motor.
 struct MotorStart {
-    double busDipPct = 0;         ///< at the motor's bus
-    double terminalPctOfRated = 0;///< motor terminal voltage while starting, % of its rating
+    double busDipPct = 0;          ///< at the motor's bus
+    double terminalPctOfRated = 0; ///< motor terminal voltage while starting, % of its rating
     double lockedRotorA = 0;
-    bool lraAssumed = false;      ///< 6 × FLC used (common practice) for want of data
-    int bus = -1;                 ///< solve bus of the motor's feeding bus
+    bool lraAssumed = false; ///< 6 × FLC used (common practice) for want of data
+    int bus = -1;            ///< solve bus of the motor's feeding bus
 };
 
 struct StudyResults {
     NetworkModel model;
-    std::vector<FaultAtBus> fault;        ///< by solve bus
-    std::vector<Complex> voltage;         ///< steady state, per unit, by solve bus
-    std::vector<double> originVoltagePu;  ///< |V| at the bus's supplying transformer or source
+    std::vector<FaultAtBus> fault;       ///< by solve bus
+    std::vector<Complex> voltage;        ///< steady state, per unit, by solve bus
+    std::vector<double> originVoltagePu; ///< |V| at the bus's supplying transformer or source
     bool loadFlowConverged = false;
     std::unordered_map<PartId, MotorStart> starts;
     std::unordered_map<PartId, double> loadAmps; ///< steady-state current of each part
@@ -43,7 +43,8 @@ struct StudyResults {
 };
 
 /// Runs the fault, load-flow and motor-starting studies.
-StudyResults runStudies(const Network& net, const Flow& flow, const Tables& tables, const Settings& s);
+StudyResults runStudies(const Network& net, const Flow& flow, const Tables& tables,
+                        const Settings& s);
 
 /// IEC 60909-0 peak factor κ = 1.02 + 0.98·e^(−3R/X).
 double peakFactor(double xOverR);

@@ -9,7 +9,9 @@
 namespace lineward {
 
 namespace {
-Complex through(Complex z, Complex y) { return y / (1.0 + z * y); }
+Complex through(Complex z, Complex y) {
+    return y / (1.0 + z * y);
+}
 } // namespace
 
 std::optional<TreeSolver> TreeSolver::build(const NetworkModel& m, bool withMotors) {
@@ -49,7 +51,8 @@ std::optional<TreeSolver> TreeSolver::build(const NetworkModel& m, bool withMoto
             queue.pop_front();
             order.push_back(v);
             for (auto [w, z] : adj[static_cast<std::size_t>(v)]) {
-                if (w == t.m_parent[static_cast<std::size_t>(v)] && z == t.m_zParent[static_cast<std::size_t>(v)])
+                if (w == t.m_parent[static_cast<std::size_t>(v)] &&
+                    z == t.m_zParent[static_cast<std::size_t>(v)])
                     continue; // the branch we came by (parallel branches are caught below)
                 if (t.m_parent[static_cast<std::size_t>(w)] != -2)
                     return std::nullopt; // reached twice: a loop
@@ -68,7 +71,8 @@ std::optional<TreeSolver> TreeSolver::build(const NetworkModel& m, bool withMoto
         const int p = t.m_parent[static_cast<std::size_t>(*it)];
         if (p >= 0)
             t.m_down[static_cast<std::size_t>(p)] +=
-                through(t.m_zParent[static_cast<std::size_t>(*it)], t.m_down[static_cast<std::size_t>(*it)]);
+                through(t.m_zParent[static_cast<std::size_t>(*it)],
+                        t.m_down[static_cast<std::size_t>(*it)]);
     }
     t.m_up.assign(static_cast<std::size_t>(n), 0);
     for (int v : order) {
@@ -76,7 +80,8 @@ std::optional<TreeSolver> TreeSolver::build(const NetworkModel& m, bool withMoto
         if (p < 0)
             continue;
         const Complex z = t.m_zParent[static_cast<std::size_t>(v)];
-        const Complex rest = t.m_down[static_cast<std::size_t>(p)] + t.m_up[static_cast<std::size_t>(p)] -
+        const Complex rest = t.m_down[static_cast<std::size_t>(p)] +
+                             t.m_up[static_cast<std::size_t>(p)] -
                              through(z, t.m_down[static_cast<std::size_t>(v)]);
         t.m_up[static_cast<std::size_t>(v)] = through(z, rest);
     }
@@ -92,7 +97,8 @@ std::optional<Complex> TreeSolver::transfer(int from, int to) const {
             return std::nullopt;
         // Voltage divider from v up to p: everything at p except v's branch, against that branch.
         const Complex zv = m_zParent[static_cast<std::size_t>(v)];
-        const Complex rest = m_down[static_cast<std::size_t>(p)] + m_up[static_cast<std::size_t>(p)] -
+        const Complex rest = m_down[static_cast<std::size_t>(p)] +
+                             m_up[static_cast<std::size_t>(p)] -
                              through(zv, m_down[static_cast<std::size_t>(v)]);
         z *= 1.0 / (1.0 + zv * rest);
         v = p;
@@ -122,7 +128,8 @@ std::vector<Complex> TreeSolver::solve(const std::vector<Complex>& inj) const {
         if (p < 0)
             volt[v] = current[v] / m_down[v];
         else // (V_p − V_v)/z + I_v = Y_v·V_v
-            volt[v] = (volt[static_cast<std::size_t>(p)] + m_zParent[v] * current[v]) / (1.0 + m_zParent[v] * m_down[v]);
+            volt[v] = (volt[static_cast<std::size_t>(p)] + m_zParent[v] * current[v]) /
+                      (1.0 + m_zParent[v] * m_down[v]);
     }
     return volt;
 }

@@ -16,7 +16,9 @@ public:
     /// Builds the solver when the branches form a forest; nothing when there is a loop.
     static std::optional<TreeSolver> build(const NetworkModel& m, bool withMotors);
     /// Thevenin (driving-point) impedance at a bus.
-    Complex zth(int bus) const { return 1.0 / (m_down[static_cast<std::size_t>(bus)] + m_up[static_cast<std::size_t>(bus)]); }
+    Complex zth(int bus) const {
+        return 1.0 / (m_down[static_cast<std::size_t>(bus)] + m_up[static_cast<std::size_t>(bus)]);
+    }
     /// Transfer impedance: voltage at `to` per unit current injected at `from`, where `to` is
     /// `from` or one of its ancestors; nothing otherwise.
     std::optional<Complex> transfer(int from, int to) const;
@@ -26,7 +28,7 @@ public:
 private:
     std::vector<int> m_order; ///< breadth-first order, roots first
     std::vector<int> m_parent;
-    std::vector<Complex> m_zParent; ///< impedance of the branch to the parent
+    std::vector<Complex> m_zParent;    ///< impedance of the branch to the parent
     std::vector<Complex> m_down, m_up; ///< admittance looking into the subtree / toward the rest
 };
 

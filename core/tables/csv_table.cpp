@@ -84,9 +84,9 @@ CsvTable parseCsvTable(std::string_view text, const std::string& file) {
             continue;
         }
         if (cells.size() != t.header.size())
-            throw TableError(file, lineNo, "row has " + std::to_string(cells.size()) +
-                                               " cells; the header has " +
-                                               std::to_string(t.header.size()));
+            throw TableError(file, lineNo,
+                             "row has " + std::to_string(cells.size()) + " cells; the header has " +
+                                 std::to_string(t.header.size()));
         t.rows.push_back(std::move(cells));
         t.lines.push_back(lineNo);
     }

@@ -23,7 +23,9 @@ std::optional<double> columnFor(double v, const std::vector<double>& columns) {
     return std::nullopt;
 }
 
-int conductorColumn(int c) { return c <= 60 ? 0 : c <= 75 ? 1 : 2; }
+int conductorColumn(int c) {
+    return c <= 60 ? 0 : c <= 75 ? 1 : 2;
+}
 
 } // namespace
 
@@ -32,8 +34,8 @@ std::optional<double> Tables::flc(double hp, double ratedVolts, int phases, doub
     auto col = columnFor(ratedVolts, t.volts);
     if (!col)
         return std::nullopt;
-    const auto c = static_cast<std::size_t>(
-        std::find(t.volts.begin(), t.volts.end(), *col) - t.volts.begin());
+    const auto c =
+        static_cast<std::size_t>(std::find(t.volts.begin(), t.volts.end(), *col) - t.volts.begin());
     for (std::size_t r = 0; r < t.hp.size(); ++r)
         if (std::abs(t.hp[r] - hp) < 1e-3) {
             if (columnV)

@@ -114,8 +114,8 @@ void buildRest(Tables& tb, const CsvTable& t) {
                 {t.rows[r][0], t.required(r, 1), t.required(r, 2), t.required(r, 3)});
     } else if (n == "conductor_impedance") {
         for (std::size_t r = 0; r < t.rows.size(); ++r)
-            tb.impedance.push_back({t.rows[r][0], t.required(r, 1), t.required(r, 2),
-                                    three(t, r, 3), three(t, r, 6)});
+            tb.impedance.push_back(
+                {t.rows[r][0], t.required(r, 1), t.required(r, 2), three(t, r, 3), three(t, r, 6)});
     } else if (n == "transformer_protection") {
         for (std::size_t r = 0; r < t.rows.size(); ++r)
             tb.transformerProtection.push_back(
@@ -179,10 +179,13 @@ std::shared_ptr<const Tables> loadTables(std::span<const tables::EmbeddedFile> f
           "conductor_properties", "conductor_impedance", "transformer_protection", "nema_sizes",
           "trip_classes"})
         if (!tb->sources.count(needed))
-            throw TableError("resources/tables", 0, std::string("table '") + needed + "' is missing");
+            throw TableError("resources/tables", 0,
+                             std::string("table '") + needed + "' is missing");
     return tb;
 }
 
-std::shared_ptr<const Tables> loadBuiltinTables() { return loadTables(tables::embeddedTableFiles()); }
+std::shared_ptr<const Tables> loadBuiltinTables() {
+    return loadTables(tables::embeddedTableFiles());
+}
 
 } // namespace lineward

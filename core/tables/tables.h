@@ -25,17 +25,17 @@ std::string_view scpdTypeKey(ScpdType t);
 
 /// Full-load current table: rows by hp, columns by rated motor voltage.
 struct FlcTable {
-    std::vector<double> volts;               ///< column voltages
-    std::vector<double> hp;                  ///< row horsepower
+    std::vector<double> volts;                            ///< column voltages
+    std::vector<double> hp;                               ///< row horsepower
     std::vector<std::vector<std::optional<double>>> amps; ///< [row][column]
     std::string source;
 };
 
 struct ScpdRow {
     MotorType motor;
-    std::array<double, 4> pct;     ///< by ScpdType
-    std::array<double, 4> excPct;  ///< Exception No. 2 / 430.52(C)(3) maxima; ITB: FLC ≤ 100 A
-    double excItbAbove100 = 300;   ///< ITB exception above 100 A FLC
+    std::array<double, 4> pct;    ///< by ScpdType
+    std::array<double, 4> excPct; ///< Exception No. 2 / 430.52(C)(3) maxima; ITB: FLC ≤ 100 A
+    double excItbAbove100 = 300;  ///< ITB exception above 100 A FLC
 };
 
 struct AmpacityRow {
@@ -73,12 +73,14 @@ struct Tables {
     std::vector<ScpdRow> scpd;
     std::vector<std::pair<char, std::array<double, 2>>> codeLetters; ///< letter -> kVA/hp min, max
     std::vector<AmpacityRow> ampacity;
-    std::vector<std::pair<double, std::array<std::optional<double>, 3>>> ambient; ///< max °C -> 60/75/90
+    std::vector<std::pair<double, std::array<std::optional<double>, 3>>>
+        ambient;                                       ///< max °C -> 60/75/90
     std::vector<std::pair<double, double>> adjustment; ///< conductors up to -> percent
     std::vector<double> standardRatings;
     std::vector<std::tuple<std::string, Material, double>> smallConductor;
     std::vector<std::tuple<double, std::string, std::string>> egc; ///< device max A, cu, al
-    std::vector<std::tuple<std::string, double, double, double>> conductors; ///< size, cmil, cu, al ohm/kft
+    std::vector<std::tuple<std::string, double, double, double>>
+        conductors; ///< size, cmil, cu, al ohm/kft
     std::vector<ImpedanceRow> impedance;
     std::vector<TransformerProtectionRow> transformerProtection;
     std::vector<NemaRow> nema;
@@ -87,7 +89,8 @@ struct Tables {
 
     // --- lookups ---
     /// Table FLC for hp at a rated voltage (column chosen by the code's voltage ranges).
-    std::optional<double> flc(double hp, double ratedVolts, int phases, double* columnV = nullptr) const;
+    std::optional<double> flc(double hp, double ratedVolts, int phases,
+                              double* columnV = nullptr) const;
     const ScpdRow& scpdRow(MotorType m) const;
     /// kVA/hp (upper bound of the letter's range); nothing for an unknown letter.
     std::optional<double> codeLetterKvaPerHp(char letter) const;

@@ -83,7 +83,7 @@ std::optional<PartId> Flow::protectionAbove(NodeIndex n) const {
         if (kindInfo(d.part(p)->kind).protective)
             return p;
         n = boost::source(*m_parentEdge[n], g) == n ? boost::target(*m_parentEdge[n], g)
-                                                     : boost::source(*m_parentEdge[n], g);
+                                                    : boost::source(*m_parentEdge[n], g);
     }
     return std::nullopt;
 }

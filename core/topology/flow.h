@@ -28,7 +28,7 @@ public:
 private:
     const Network& m_net;
     std::vector<std::optional<BranchDesc>> m_parentEdge; // by node
-    std::vector<std::vector<BranchDesc>> m_children;      // by node
+    std::vector<std::vector<BranchDesc>> m_children;     // by node
 };
 
 } // namespace lineward

@@ -77,7 +77,8 @@ void Network::buildNodes() {
     UnionFind uf(slots);
     m_wiresOfSlot.assign(slots, 0);
     for (const auto& w : m_drawing.wires()) {
-        const auto a = terminalSlot(w.a.part, w.a.terminal), b = terminalSlot(w.b.part, w.b.terminal);
+        const auto a = terminalSlot(w.a.part, w.a.terminal),
+                   b = terminalSlot(w.b.part, w.b.terminal);
         uf.join(a, b);
         ++m_wiresOfSlot[a];
         ++m_wiresOfSlot[b];
@@ -94,9 +95,9 @@ void Network::buildNodes() {
     for (std::size_t i = 0; i < parts.size(); ++i) {
         const Part& p = parts[i];
         if (isTwoTerminal(p.kind)) {
-            auto [e, ok] = boost::add_edge(m_nodeOfSlot[m_slotBase[i]],
-                                           m_nodeOfSlot[m_slotBase[i] + 1],
-                                           BranchProps{p.id, !p.isOpen()}, m_graph);
+            auto [e, ok] =
+                boost::add_edge(m_nodeOfSlot[m_slotBase[i]], m_nodeOfSlot[m_slotBase[i] + 1],
+                                BranchProps{p.id, !p.isOpen()}, m_graph);
             (void)ok;
             m_branchOfPart[i] = e;
         } else {
@@ -204,8 +205,8 @@ void Network::checkRatedVoltages() {
             // NEMA MG 1-12.44: motors run at ±10 % of rated voltage (a 460 V motor on 480 V).
             const double tol = p.kind == PartKind::Motor ? 0.10 : 0.05;
             if (differs(sys, ratedVolts(p), tol))
-                m_conflicts.push_back({pid, sys, ratedVolts(p),
-                                       std::string(kindInfo(p.kind).name) + " rated"});
+                m_conflicts.push_back(
+                    {pid, sys, ratedVolts(p), std::string(kindInfo(p.kind).name) + " rated"});
         }
     }
 }

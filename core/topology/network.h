@@ -5,7 +5,6 @@
 #include "model/drawing.h"
 
 #include <boost/graph/adjacency_list.hpp>
-
 #include <optional>
 #include <vector>
 
@@ -26,8 +25,8 @@ struct BranchProps {
     bool closed = true;
 };
 
-using NetGraph = boost::adjacency_list<boost::vecS, boost::vecS, boost::undirectedS, NodeProps,
-                                       BranchProps>;
+using NetGraph =
+    boost::adjacency_list<boost::vecS, boost::vecS, boost::undirectedS, NodeProps, BranchProps>;
 using NodeIndex = NetGraph::vertex_descriptor;
 using BranchDesc = NetGraph::edge_descriptor;
 
@@ -77,7 +76,7 @@ private:
 
     const Drawing& m_drawing;
     NetGraph m_graph;
-    std::vector<std::size_t> m_slotBase;       // by part index: first terminal slot
+    std::vector<std::size_t> m_slotBase; // by part index: first terminal slot
     std::vector<NodeIndex> m_nodeOfSlot;
     std::vector<int> m_wiresOfSlot;
     std::vector<std::optional<BranchDesc>> m_branchOfPart; // by part index

@@ -1,11 +1,10 @@
 // spdlog sinks for the programs; the core itself only calls spdlog's free functions.
 #include "util/log.h"
 
+#include <cstdlib>
 #include <spdlog/sinks/rotating_file_sink.h>
 #include <spdlog/sinks/stdout_color_sinks.h>
 #include <spdlog/spdlog.h>
-
-#include <cstdlib>
 #include <vector>
 
 namespace lineward {
@@ -27,7 +26,8 @@ std::filesystem::path setupLogging(const std::string& name) {
     std::filesystem::path file = userDataDir() / (name + ".log");
     try {
         std::filesystem::create_directories(file.parent_path());
-        auto rot = std::make_shared<spdlog::sinks::rotating_file_sink_mt>(file.string(), 1u << 20, 3);
+        auto rot =
+            std::make_shared<spdlog::sinks::rotating_file_sink_mt>(file.string(), 1u << 20, 3);
         rot->set_level(spdlog::level::info);
         sinks.push_back(rot);
     } catch (const std::exception&) {
@@ -37,7 +37,8 @@ std::filesystem::path setupLogging(const std::string& name) {
     logger->set_level(spdlog::level::info);
     spdlog::set_default_logger(logger);
     if (file.empty())
-        spdlog::warn("cannot open a log file in {}; logging to stderr only", userDataDir().string());
+        spdlog::warn("cannot open a log file in {}; logging to stderr only",
+                     userDataDir().string());
     return file;
 }
 

@@ -45,7 +45,8 @@ void BM_EditThenCheck(benchmark::State& state) {
 BENCHMARK(BM_EditThenCheck)->Apply(args);
 
 void BM_LoadFile(benchmark::State& state) {
-    const std::string text = io::serializeDrawing(bench::makePlant(static_cast<int>(state.range(0))));
+    const std::string text =
+        io::serializeDrawing(bench::makePlant(static_cast<int>(state.range(0))));
     for (auto _ : state)
         benchmark::DoNotOptimize(io::parseDrawing(text, "bench.lineward"));
     state.counters["bytes"] = static_cast<double>(text.size());
@@ -72,7 +73,8 @@ void BM_BareBfs(benchmark::State& state) {
         Counter vis;
         vis.n = &seen;
         std::vector<boost::default_color_type> color(net.nodeCount(), boost::white_color);
-        auto colors = boost::make_iterator_property_map(color.begin(), boost::get(boost::vertex_index, net.graph()));
+        auto colors = boost::make_iterator_property_map(
+            color.begin(), boost::get(boost::vertex_index, net.graph()));
         boost::queue<NodeIndex> queue;
         for (auto s : net.sources())
             if (color[net.nodeOf(s, 0)] == boost::white_color)

@@ -16,11 +16,11 @@ struct MotorRow {
 };
 // NEC 2023 Table 430.250 at 460 V; breakers at 250 % to the next standard size; 75 °C cable.
 constexpr std::array<MotorRow, 6> kMotors{{{5, 7.6, 20, "0", "12 AWG"},
-                                          {10, 14, 35, "1", "12 AWG"},
-                                          {15, 21, 60, "2", "10 AWG"},
-                                          {25, 34, 90, "2", "8 AWG"},
-                                          {40, 52, 150, "3", "6 AWG"},
-                                          {60, 77, 200, "4", "3 AWG"}}};
+                                           {10, 14, 35, "1", "12 AWG"},
+                                           {15, 21, 60, "2", "10 AWG"},
+                                           {25, 34, 90, "2", "8 AWG"},
+                                           {40, 52, 150, "3", "6 AWG"},
+                                           {60, 77, 200, "4", "3 AWG"}}};
 
 class Builder {
 public:
@@ -35,7 +35,9 @@ public:
         m_d.addPart(p);
         return p.id;
     }
-    void wire(PartId a, int ta, PartId b, int tb) { m_d.addWire(Wire{m_d.nextWireId(), {a, ta}, {b, tb}}); }
+    void wire(PartId a, int ta, PartId b, int tb) {
+        m_d.addWire(Wire{m_d.nextWireId(), {a, ta}, {b, tb}});
+    }
 
 private:
     Drawing& m_d;
@@ -57,17 +59,29 @@ Drawing makePlant(int parts, int bucketsPerLineup) {
         auto tx = b.add(PartKind::Transformer, "TX-" + n, x0, 0,
                         {{"kva", 500.0}, {"pri_v", 13800.0}, {"sec_v", 480.0}, {"z_pct", 5.75}});
         auto main = b.add(PartKind::Breaker, "CB-M" + n, x0, 80,
-                          {{"trip_type", std::string("electronic")}, {"frame_a", 600.0}, {"trip_a", 500.0},
-                           {"interrupting_ka", 65.0}, {"let_through_a2s", 5e6}, {"lt_delay_s", 24.0},
-                           {"st_pickup_x", 10.0}, {"st_delay_s", 0.4}});
-        auto swbd = b.add(PartKind::Bus, "SWBD-" + n, x0, 150, {{"volts", 480.0}, {"amps", 800.0}, {"bracing_ka", 65.0}});
+                          {{"trip_type", std::string("electronic")},
+                           {"frame_a", 600.0},
+                           {"trip_a", 500.0},
+                           {"interrupting_ka", 65.0},
+                           {"let_through_a2s", 5e6},
+                           {"lt_delay_s", 24.0},
+                           {"st_pickup_x", 10.0},
+                           {"st_delay_s", 0.4}});
+        auto swbd = b.add(PartKind::Bus, "SWBD-" + n, x0, 150,
+                          {{"volts", 480.0}, {"amps", 800.0}, {"bracing_ka", 65.0}});
         auto feeder = b.add(PartKind::Breaker, "CB-F" + n, x0, 210,
-                            {{"trip_type", std::string("electronic")}, {"trip_a", 500.0}, {"frame_a", 600.0},
-                             {"interrupting_ka", 65.0}, {"let_through_a2s", 5e6}, {"lt_delay_s", 10.0},
-                             {"st_pickup_x", 8.0}, {"st_delay_s", 0.2}});
+                            {{"trip_type", std::string("electronic")},
+                             {"trip_a", 500.0},
+                             {"frame_a", 600.0},
+                             {"interrupting_ka", 65.0},
+                             {"let_through_a2s", 5e6},
+                             {"lt_delay_s", 10.0},
+                             {"st_pickup_x", 8.0},
+                             {"st_delay_s", 0.2}});
         auto fc = b.add(PartKind::Cable, "C-F" + n, x0, 260,
                         {{"size", std::string("250 kcmil")}, {"sets", 2.0}, {"length_ft", 100.0}});
-        auto mcc = b.add(PartKind::Bus, "MCC-" + n, x0, 320, {{"volts", 480.0}, {"amps", 600.0}, {"bracing_ka", 65.0}});
+        auto mcc = b.add(PartKind::Bus, "MCC-" + n, x0, 320,
+                         {{"volts", 480.0}, {"amps", 600.0}, {"bracing_ka", 65.0}});
         b.wire(src, 0, tx, 0);
         b.wire(tx, 1, main, 0);
         b.wire(main, 1, swbd, 0);
@@ -78,14 +92,21 @@ Drawing makePlant(int parts, int bucketsPerLineup) {
             const auto& m = kMotors[static_cast<std::size_t>(k) % kMotors.size()];
             const std::string t = n + "-" + std::to_string(k + 1);
             const double x = x0 + (k + 1) * 110.0;
-            auto cb = b.add(PartKind::Breaker, "CB-" + t, x, 390,
-                            {{"trip_a", m.breaker}, {"interrupting_ka", 65.0}, {"let_through_a2s", 1e5}});
-            auto kk = b.add(PartKind::Contactor, "K-" + t, x, 480, {{"nema_size", std::string(m.nema)}});
+            auto cb =
+                b.add(PartKind::Breaker, "CB-" + t, x, 390,
+                      {{"trip_a", m.breaker}, {"interrupting_ka", 65.0}, {"let_through_a2s", 1e5}});
+            auto kk =
+                b.add(PartKind::Contactor, "K-" + t, x, 480, {{"nema_size", std::string(m.nema)}});
             auto ol = b.add(PartKind::Overload, "OL-" + t, x, 530, {{"setting_a", m.flc}});
             auto c = b.add(PartKind::Cable, "C-" + t, x, 580,
-                           {{"size", std::string(m.cable)}, {"length_ft", 80.0}, {"egc_size", std::string(m.cable)}});
+                           {{"size", std::string(m.cable)},
+                            {"length_ft", 80.0},
+                            {"egc_size", std::string(m.cable)}});
             auto mo = b.add(PartKind::Motor, "M-" + t, x, 640,
-                            {{"hp", m.hp}, {"volts", 460.0}, {"fla", m.flc}, {"code_letter", std::string("F")}});
+                            {{"hp", m.hp},
+                             {"volts", 460.0},
+                             {"fla", m.flc},
+                             {"code_letter", std::string("F")}});
             b.wire(mcc, 0, cb, 0);
             b.wire(cb, 1, kk, 0);
             b.wire(kk, 1, ol, 0);

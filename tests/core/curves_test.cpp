@@ -3,9 +3,8 @@
 #include "rules/check.h"
 #include "test_support.h"
 
-#include <gtest/gtest.h>
-
 #include <cmath>
+#include <gtest/gtest.h>
 
 using namespace lineward;
 using namespace lineward::test;
@@ -29,7 +28,8 @@ TEST_P(OverloadClass, MeetsIec60947_4_1Limits) {
     // lies in (Tp min, Tp max]; no trip at 1.05 ×; trip within 2 h at 1.2 ×; within the class
     // limit at 1.5 × from hot.
     const auto& r = GetParam();
-    const auto c = *TripCurve::of(device(PartKind::Overload, {{"setting_a", 10.0}, {"trip_class", std::string(r.cls)}}));
+    const auto c = *TripCurve::of(
+        device(PartKind::Overload, {{"setting_a", 10.0}, {"trip_class", std::string(r.cls)}}));
     EXPECT_GE(c.minTime(72), r.tpMin - 1e-9);
     EXPECT_LE(c.maxTime(72), r.tpMax + 1e-9);
     EXPECT_TRUE(std::isinf(c.minTime(10.5)));
@@ -45,7 +45,8 @@ TEST(BreakerCurve, ThermalMagneticWithinUl489Calibration) {
     // UL 489 calibration (from memory): trip within 1 h at 135 % (2 h above 50 A) and within
     // 2 / 4 / 6 min at 200 % up to 30 / 50 / 100 A. The generic band is inside those limits.
     for (double rating : {20.0, 40.0, 90.0}) {
-        const auto c = *TripCurve::of(device(PartKind::Breaker, {{"trip_a", rating}, {"interrupting_ka", 65.0}}));
+        const auto c = *TripCurve::of(
+            device(PartKind::Breaker, {{"trip_a", rating}, {"interrupting_ka", 65.0}}));
         EXPECT_LE(c.maxTime(1.35 * rating), rating <= 50 ? 3600 : 7200) << rating;
         EXPECT_LE(c.maxTime(2 * rating), rating <= 30 ? 120 : rating <= 50 ? 240 : 360) << rating;
         EXPECT_TRUE(std::isinf(c.minTime(1.0 * rating)));
@@ -56,13 +57,15 @@ TEST(BreakerCurve, ThermalMagneticWithinUl489Calibration) {
 TEST(BreakerCurve, InstantaneousToleranceEdges) {
     // Thermal-magnetic instantaneous at 10 × 100 A = 1000 A with ±20 % (common practice): may
     // trip from 800 A, must clear within 1.5 cycles from 1200 A.
-    const auto tm = *TripCurve::of(device(PartKind::Breaker, {{"trip_a", 100.0}, {"interrupting_ka", 65.0}, {"inst_x", 10.0}}));
+    const auto tm = *TripCurve::of(device(
+        PartKind::Breaker, {{"trip_a", 100.0}, {"interrupting_ka", 65.0}, {"inst_x", 10.0}}));
     EXPECT_GT(tm.minTime(799), 0.1); // thermal region only
     EXPECT_DOUBLE_EQ(tm.minTime(801), 0.008);
     EXPECT_GT(tm.maxTime(1199), 0.1);
     EXPECT_DOUBLE_EQ(tm.maxTime(1201), 0.025);
     // Instantaneous-only breaker set at 300 A, same tolerance.
-    const auto mcp = *TripCurve::of(device(PartKind::InstBreaker, {{"amps", 50.0}, {"pickup_a", 300.0}, {"interrupting_ka", 65.0}}));
+    const auto mcp = *TripCurve::of(device(
+        PartKind::InstBreaker, {{"amps", 50.0}, {"pickup_a", 300.0}, {"interrupting_ka", 65.0}}));
     EXPECT_TRUE(std::isinf(mcp.minTime(239)));
     EXPECT_DOUBLE_EQ(mcp.minTime(241), 0.008);
     EXPECT_TRUE(std::isinf(mcp.maxTime(359)));
@@ -70,9 +73,14 @@ TEST(BreakerCurve, InstantaneousToleranceEdges) {
 }
 
 TEST(BreakerCurve, ElectronicLongShortInstantaneous) {
-    const auto c = *TripCurve::of(device(PartKind::Breaker, {{"trip_type", std::string("electronic")}, {"trip_a", 400.0},
-                                                             {"interrupting_ka", 65.0}, {"lt_delay_s", 10.0},
-                                                             {"st_pickup_x", 6.0}, {"st_delay_s", 0.3}, {"inst_x", 12.0}}));
+    const auto c =
+        *TripCurve::of(device(PartKind::Breaker, {{"trip_type", std::string("electronic")},
+                                                  {"trip_a", 400.0},
+                                                  {"interrupting_ka", 65.0},
+                                                  {"lt_delay_s", 10.0},
+                                                  {"st_pickup_x", 6.0},
+                                                  {"st_delay_s", 0.3},
+                                                  {"inst_x", 12.0}}));
     // Long time: I²t through 10 s at 6 × Ir, ±20 % (common practice); at 4 × below the
     // short-time pickup: 0.8 × 10 × 36 / 16 = 18 s.
     EXPECT_NEAR(c.minTime(4 * 400), 18.0, 1e-9);
@@ -87,9 +95,13 @@ TEST(BreakerCurve, ElectronicLongShortInstantaneous) {
 TEST(BreakerCurve, ShortTimeI2tRamp) {
     // With the I²t ramp the short-time delay is the set delay from 10 × Ir and grows as 1/I²
     // below it: at 5 × Ir it is four times the set delay.
-    const auto c = *TripCurve::of(device(PartKind::Breaker, {{"trip_type", std::string("electronic")}, {"trip_a", 100.0},
-                                                             {"interrupting_ka", 65.0}, {"st_pickup_x", 3.0},
-                                                             {"st_delay_s", 0.1}, {"st_i2t", true}}));
+    const auto c =
+        *TripCurve::of(device(PartKind::Breaker, {{"trip_type", std::string("electronic")},
+                                                  {"trip_a", 100.0},
+                                                  {"interrupting_ka", 65.0},
+                                                  {"st_pickup_x", 3.0},
+                                                  {"st_delay_s", 0.1},
+                                                  {"st_i2t", true}}));
     EXPECT_NEAR(c.minTime(1200), 0.1, 1e-12);
     EXPECT_NEAR(c.minTime(500), 0.4, 1e-12);
     EXPECT_NEAR(c.maxTime(500), 0.45, 1e-12);
@@ -98,27 +110,31 @@ TEST(BreakerCurve, ShortTimeI2tRamp) {
 TEST(FuseCurve, TimeDelayHoldsFiveTimesForTenSeconds) {
     // A time-delay fuse holds 500 % for at least 10 s (UL 248 time-delay classes, from memory)
     // and opens within 1 h at 135 % and within 2 min at 200 % (30 A and less).
-    const auto td = *TripCurve::of(device(PartKind::Fuse, {{"amps", 30.0}, {"interrupting_ka", 200.0}}));
+    const auto td =
+        *TripCurve::of(device(PartKind::Fuse, {{"amps", 30.0}, {"interrupting_ka", 200.0}}));
     EXPECT_GE(td.minTime(150), 10.0 - 1e-9);
     EXPECT_LE(td.maxTime(1.35 * 30), 3600 + 1e-6);
     EXPECT_LE(td.maxTime(60), 120 + 1e-6);
     EXPECT_TRUE(std::isinf(td.minTime(30)));
-    const auto fast = *TripCurve::of(device(PartKind::Fuse, {{"fuse_type", std::string("fast")}, {"amps", 30.0},
-                                                             {"interrupting_ka", 200.0}}));
+    const auto fast = *TripCurve::of(
+        device(PartKind::Fuse,
+               {{"fuse_type", std::string("fast")}, {"amps", 30.0}, {"interrupting_ka", 200.0}}));
     EXPECT_LT(fast.minTime(150), 1.0); // a fast fuse does not hold 500 %
 }
 
 TEST(UserCurve, PointsReplaceTheGenericBand) {
-    const auto c = *TripCurve::of(device(PartKind::Breaker, {{"trip_a", 100.0}, {"interrupting_ka", 65.0},
-                                                             {"curve_points", std::string("150:100:300; 1000:0.01:0.02")}}));
+    const auto c = *TripCurve::of(
+        device(PartKind::Breaker, {{"trip_a", 100.0},
+                                   {"interrupting_ka", 65.0},
+                                   {"curve_points", std::string("150:100:300; 1000:0.01:0.02")}}));
     EXPECT_EQ(c.model(), TripCurve::Model::Points);
     EXPECT_TRUE(std::isinf(c.minTime(140)));
     EXPECT_DOUBLE_EQ(c.minTime(150), 100);
     // Log-log interpolation midway: geometric means.
     EXPECT_NEAR(c.maxTime(std::sqrt(150.0 * 1000.0)), std::sqrt(300 * 0.02), 1e-9);
     Part bad = Part::make(PartKind::Breaker, PartId(1), "B");
-    EXPECT_TRUE(bad.set("curve_points", std::string("150:100:300; 100:1:2")));  // falling currents
-    EXPECT_TRUE(bad.set("curve_points", std::string("150:5:1; 300:1:2")));      // min > max
+    EXPECT_TRUE(bad.set("curve_points", std::string("150:100:300; 100:1:2"))); // falling currents
+    EXPECT_TRUE(bad.set("curve_points", std::string("150:5:1; 300:1:2")));     // min > max
     EXPECT_TRUE(bad.set("curve_points", std::string("150;300")));
 }
 
@@ -158,10 +174,14 @@ TEST(Selectivity, SeparatedBandsAreSelective) {
     // Upstream 800 A electronic with a 0.4 s short-time delay and no instantaneous over a
     // 100 A thermal-magnetic breaker: the downstream clears by 0.025 s wherever the upstream
     // could start timing.
-    const Part up = device(PartKind::Breaker, {{"trip_type", std::string("electronic")}, {"trip_a", 800.0},
-                                               {"interrupting_ka", 65.0}, {"lt_delay_s", 20.0},
-                                               {"st_pickup_x", 4.0}, {"st_delay_s", 0.4}});
-    const Part down = device(PartKind::Breaker, {{"trip_a", 100.0}, {"interrupting_ka", 65.0}, {"inst_x", 10.0}});
+    const Part up = device(PartKind::Breaker, {{"trip_type", std::string("electronic")},
+                                               {"trip_a", 800.0},
+                                               {"interrupting_ka", 65.0},
+                                               {"lt_delay_s", 20.0},
+                                               {"st_pickup_x", 4.0},
+                                               {"st_delay_s", 0.4}});
+    const Part down =
+        device(PartKind::Breaker, {{"trip_a", 100.0}, {"interrupting_ka", 65.0}, {"inst_x", 10.0}});
     EXPECT_TRUE(selectivityOf(pair(up, down)).empty());
 }
 
@@ -169,8 +189,10 @@ TEST(Selectivity, OverlappingInstantaneousRegionsGiveTheLimitCurrent) {
     // Two instantaneous-only breakers: downstream set 1000 A, upstream 3000 A, ±20 %. The
     // upstream may trip from 0.8 × 3000 = 2400 A, where the downstream clears only by 0.025 s
     // (< 0.008 s + margin fails): the pair is selective up to just under 2.4 kA (analytic).
-    const Part up = device(PartKind::InstBreaker, {{"amps", 400.0}, {"pickup_a", 3000.0}, {"interrupting_ka", 65.0}});
-    const Part down = device(PartKind::InstBreaker, {{"amps", 150.0}, {"pickup_a", 1000.0}, {"interrupting_ka", 65.0}});
+    const Part up = device(PartKind::InstBreaker,
+                           {{"amps", 400.0}, {"pickup_a", 3000.0}, {"interrupting_ka", 65.0}});
+    const Part down = device(PartKind::InstBreaker,
+                             {{"amps", 150.0}, {"pickup_a", 1000.0}, {"interrupting_ka", 65.0}});
     auto f = selectivityOf(pair(up, down));
     ASSERT_EQ(f.size(), 1u);
     EXPECT_LT(*f[0].computed, 2.4);

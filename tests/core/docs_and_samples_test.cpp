@@ -1,13 +1,12 @@
 // Keeps the documents true: docs/rules.md matches the rule catalogue, and samples/README.md
 // lists exactly the findings the mistake sample produces.
 #include "io/drawing_file.h"
-#include "rules/check.h"
 #include "model/part_kind.h"
+#include "rules/check.h"
 #include "rules/rule_catalog.h"
 #include "test_support.h"
 
 #include <gtest/gtest.h>
-
 #include <map>
 #include <regex>
 #include <set>

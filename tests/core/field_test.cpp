@@ -2,9 +2,8 @@
 #include "model/conductor.h"
 #include "model/part.h"
 
-#include <gtest/gtest.h>
-
 #include <cmath>
+#include <gtest/gtest.h>
 #include <limits>
 
 using namespace lineward;

@@ -3,10 +3,9 @@
 #include "io/drawing_file.h"
 #include "test_support.h"
 
-#include <gtest/gtest.h>
-
 #include <filesystem>
 #include <fstream>
+#include <gtest/gtest.h>
 
 using namespace lineward;
 using namespace lineward::test;
@@ -30,8 +29,8 @@ LoadError mustFail(const std::string& text) {
 } // namespace
 
 TEST(FileFormat, SamplesRoundTripByteForByte) {
-    for (const char* name : {"samples/kestrel-mill-mcc1.lineward",
-                             "samples/kestrel-mill-mcc1-review.lineward"}) {
+    for (const char* name :
+         {"samples/kestrel-mill-mcc1.lineward", "samples/kestrel-mill-mcc1-review.lineward"}) {
         const std::string text = readFile(sourcePath(name));
         ASSERT_FALSE(text.empty()) << name;
         auto r = io::parseDrawing(text, name);
@@ -127,8 +126,9 @@ INSTANTIATE_TEST_SUITE_P(
                 "\"format\": \"lineward\""},
         BadCase{"unknown_version", "{\n  \"format\": \"lineward\",\n  \"version\": 7\n}\n", 3,
                 "version 7 is not supported"},
-        BadCase{"wrong_type", withParts(R"(    {"id":1,"kind":"motor","tag":"M","hp":"ten","volts":460})"),
-                5, "expected a number, found text"},
+        BadCase{"wrong_type",
+                withParts(R"(    {"id":1,"kind":"motor","tag":"M","hp":"ten","volts":460})"), 5,
+                "expected a number, found text"},
         BadCase{"unknown_kind", withParts(R"(    {"id":1,"kind":"flux_capacitor"})"), 5,
                 "unknown part kind 'flux_capacitor'"},
         BadCase{"unknown_rating", withParts(R"(    {"id":1,"kind":"motor","hpp":10,"volts":460})"),
@@ -139,33 +139,40 @@ INSTANTIATE_TEST_SUITE_P(
                 "duplicate key 'hp'"},
         BadCase{"negative", withParts(R"(    {"id":1,"kind":"motor","hp":-5,"volts":460})"), 5,
                 "hp must be greater than 0"},
-        BadCase{"zero_kva",
-                withParts(R"(    {"id":1,"kind":"transformer","kva":0,"pri_v":480,"sec_v":208,"z_pct":4})"),
-                5, "kva must be greater than 0"},
+        BadCase{
+            "zero_kva",
+            withParts(
+                R"(    {"id":1,"kind":"transformer","kva":0,"pri_v":480,"sec_v":208,"z_pct":4})"),
+            5, "kva must be greater than 0"},
         BadCase{"huge", withParts(R"(    {"id":1,"kind":"motor","hp":1e300,"volts":460})"), 5,
                 "above the largest accepted value"},
-        BadCase{"overflow_to_infinity", withParts(R"(    {"id":1,"kind":"motor","hp":1e999,"volts":460})"),
-                5, "number overflow"},
-        BadCase{"nan_as_text", withParts(R"(    {"id":1,"kind":"motor","hp":"NaN","volts":460})"), 5,
-                "expected a number"},
+        BadCase{"overflow_to_infinity",
+                withParts(R"(    {"id":1,"kind":"motor","hp":1e999,"volts":460})"), 5,
+                "number overflow"},
+        BadCase{"nan_as_text", withParts(R"(    {"id":1,"kind":"motor","hp":"NaN","volts":460})"),
+                5, "expected a number"},
         BadCase{"missing_required", withParts(R"(    {"id":1,"kind":"motor","hp":10})"), 5,
                 "volts is required"},
-        BadCase{"both_hp_and_kw", withParts(R"(    {"id":1,"kind":"motor","hp":10,"kw":7.5,"volts":460})"),
-                5, "exactly one of hp and kw"},
+        BadCase{"both_hp_and_kw",
+                withParts(R"(    {"id":1,"kind":"motor","hp":10,"kw":7.5,"volts":460})"), 5,
+                "exactly one of hp and kw"},
         BadCase{"bad_conductor_size",
                 withParts(R"(    {"id":1,"kind":"cable","size":"7 AWG","length_ft":10})"), 5,
                 "not a conductor size"},
-        BadCase{"deep_nesting", std::string(kHeader) + "  \"sheet\": " + std::string(40, '[') +
-                                    std::string(40, ']') + "\n}\n",
+        BadCase{"deep_nesting",
+                std::string(kHeader) + "  \"sheet\": " + std::string(40, '[') +
+                    std::string(40, ']') + "\n}\n",
                 4, "nesting is deeper"}),
     [](const auto& info) { return std::string(info.param.name); });
 
 TEST(FileFormatWires, WireToMissingPartOrTerminal) {
     const std::string base = std::string(kHeader) + "  \"parts\": [\n" + kMotor + "\n  ],\n";
-    auto e = mustFail(base + "  \"wires\": [\n    {\"id\":1,\"from\":\"1.in\",\"to\":\"2.line\"}\n  ]\n}\n");
+    auto e = mustFail(
+        base + "  \"wires\": [\n    {\"id\":1,\"from\":\"1.in\",\"to\":\"2.line\"}\n  ]\n}\n");
     EXPECT_EQ(e.line, 8);
     EXPECT_NE(e.message.find("part 2, which does not exist"), std::string::npos) << e.text();
-    e = mustFail(base + "  \"wires\": [\n    {\"id\":1,\"from\":\"1.out\",\"to\":\"1.in\"}\n  ]\n}\n");
+    e = mustFail(base +
+                 "  \"wires\": [\n    {\"id\":1,\"from\":\"1.out\",\"to\":\"1.in\"}\n  ]\n}\n");
     EXPECT_EQ(e.line, 8);
     EXPECT_NE(e.message.find("has no terminal 'out' (it has: in)"), std::string::npos) << e.text();
     e = mustFail(base + "  \"wires\": [\n    {\"id\":1,\"from\":\"x\",\"to\":\"1.in\"}\n  ]\n}\n");
@@ -199,10 +206,13 @@ TEST(FileFormatLimits, OverSizeLimitsAreRefused) {
 
 TEST(FileFormatBuckets, BucketsAndAcceptedNameExistingParts) {
     const std::string base = std::string(kHeader) + "  \"parts\": [\n" + kMotor + "\n  ],\n";
-    auto e = mustFail(base + "  \"buckets\": [\n    {\"id\":1,\"tag\":\"B\",\"parts\":[1,5]}\n  ]\n}\n");
+    auto e =
+        mustFail(base + "  \"buckets\": [\n    {\"id\":1,\"tag\":\"B\",\"parts\":[1,5]}\n  ]\n}\n");
     EXPECT_NE(e.message.find("part 5 does not exist"), std::string::npos) << e.text();
     EXPECT_EQ(e.line, 8);
-    e = mustFail(base + "  \"buckets\": [\n    {\"id\":1,\"parts\":[1]},\n    {\"id\":2,\"parts\":[1]}\n  ]\n}\n");
+    e = mustFail(
+        base +
+        "  \"buckets\": [\n    {\"id\":1,\"parts\":[1]},\n    {\"id\":2,\"parts\":[1]}\n  ]\n}\n");
     EXPECT_NE(e.message.find("already in another bucket"), std::string::npos) << e.text();
     EXPECT_EQ(e.line, 9);
     e = mustFail(base + "  \"buckets\": [\n    {\"id\":1,\"sccr_ka\":-3}\n  ]\n}\n");

@@ -4,9 +4,8 @@
 #include "sizing/auto_size.h"
 #include "test_support.h"
 
-#include <gtest/gtest.h>
-
 #include <algorithm>
+#include <gtest/gtest.h>
 
 using namespace lineward;
 using namespace lineward::test;
@@ -120,7 +119,7 @@ TEST(BranchRules, ContactorSize) {
 TEST(BranchRules, DisconnectRatingAndHorsepower) {
     Drawing d = smallLineup();
     Part ds = Part::make(PartKind::Disconnect, d.nextPartId(), "DS-1");
-    ASSERT_FALSE(ds.set("amps", 30.0)); // < 1.15 × 34 = 39.1 A (430.110(A))
+    ASSERT_FALSE(ds.set("amps", 30.0));      // < 1.15 × 34 = 39.1 A (430.110(A))
     ASSERT_FALSE(ds.set("hp_rating", 20.0)); // < 25 hp (430.109(A)(1))
     d.addPart(ds);
     // Insert between bus and CB-1: rewire bus → DS → CB-1.
@@ -165,11 +164,13 @@ Drawing instLineup(double pickupA, double hp = 25) {
     DrawingBuilder b;
     auto src = b.add(PartKind::Source, "U", {{"kv", 0.48}, {"fault_ka", 30.0}});
     auto bus = b.add(PartKind::Bus, "B", {{"volts", 480.0}, {"amps", 600.0}});
-    auto mcp = b.add(PartKind::InstBreaker, "MCP", {{"amps", 50.0}, {"pickup_a", pickupA}, {"interrupting_ka", 65.0}});
+    auto mcp = b.add(PartKind::InstBreaker, "MCP",
+                     {{"amps", 50.0}, {"pickup_a", pickupA}, {"interrupting_ka", 65.0}});
     auto k = b.add(PartKind::Contactor, "K", {{"nema_size", std::string("2")}});
     auto ol = b.add(PartKind::Overload, "OL", {{"setting_a", 32.0}});
-    auto m = b.add(PartKind::Motor, "M", {{"hp", hp}, {"volts", 460.0}, {"fla", 32.0},
-                                           {"code_letter", std::string("G")}});
+    auto m =
+        b.add(PartKind::Motor, "M",
+              {{"hp", hp}, {"volts", 460.0}, {"fla", 32.0}, {"code_letter", std::string("G")}});
     b.wire(src, 0, bus, 0);
     b.wire(bus, 0, mcp, 0);
     b.wire(mcp, 1, k, 0);
@@ -205,24 +206,39 @@ Drawing annexD8Feeder(double feederFuseA, const char* feederSize) {
     DrawingBuilder b;
     auto src = b.add(PartKind::Source, "U", {{"kv", 0.48}, {"fault_ka", 30.0}});
     auto swbd = b.add(PartKind::Bus, "SWBD", {{"volts", 480.0}, {"amps", 400.0}});
-    auto ff = b.add(PartKind::Fuse, "FU-F", {{"fuse_type", std::string("fast")}, {"amps", feederFuseA},
-                                             {"interrupting_ka", 200.0}});
-    auto fc = b.add(PartKind::Cable, "C-F", {{"size", std::string(feederSize)}, {"length_ft", 100.0}});
+    auto ff = b.add(
+        PartKind::Fuse, "FU-F",
+        {{"fuse_type", std::string("fast")}, {"amps", feederFuseA}, {"interrupting_ka", 200.0}});
+    auto fc =
+        b.add(PartKind::Cable, "C-F", {{"size", std::string(feederSize)}, {"length_ft", 100.0}});
     auto mcc = b.add(PartKind::Bus, "MCC", {{"volts", 480.0}, {"amps", 400.0}});
     b.wire(src, 0, swbd, 0);
     b.wire(swbd, 0, ff, 0);
     b.wire(ff, 1, fc, 0);
     b.wire(fc, 1, mcc, 0);
-    struct M { const char* tag; double hp, fla, fuse; const char* rotor; const char* nema; };
-    for (const M& m : {M{"M-1", 25, 32, 110, "squirrel_cage", "2"}, M{"M-2", 30, 38, 60, "wound_rotor", "3"},
-                       M{"M-3", 30, 38, 60, "wound_rotor", "3"}}) {
-        auto fu = b.add(PartKind::Fuse, std::string("FU-") + m.tag, {{"fuse_type", std::string("fast")},
-                                                                      {"amps", m.fuse}, {"interrupting_ka", 200.0}});
-        auto k = b.add(PartKind::Contactor, std::string("K-") + m.tag, {{"nema_size", std::string(m.nema)}});
+    struct M {
+        const char* tag;
+        double hp, fla, fuse;
+        const char* rotor;
+        const char* nema;
+    };
+    for (const M& m :
+         {M{"M-1", 25, 32, 110, "squirrel_cage", "2"}, M{"M-2", 30, 38, 60, "wound_rotor", "3"},
+          M{"M-3", 30, 38, 60, "wound_rotor", "3"}}) {
+        auto fu = b.add(
+            PartKind::Fuse, std::string("FU-") + m.tag,
+            {{"fuse_type", std::string("fast")}, {"amps", m.fuse}, {"interrupting_ka", 200.0}});
+        auto k = b.add(PartKind::Contactor, std::string("K-") + m.tag,
+                       {{"nema_size", std::string(m.nema)}});
         auto ol = b.add(PartKind::Overload, std::string("OL-") + m.tag, {{"setting_a", m.fla}});
-        auto c = b.add(PartKind::Cable, std::string("C-") + m.tag, {{"size", std::string("8 AWG")}, {"length_ft", 50.0}});
-        auto mo = b.add(PartKind::Motor, m.tag, {{"hp", m.hp}, {"volts", 460.0}, {"fla", m.fla},
-                                                 {"rotor", std::string(m.rotor)}, {"temp_rise_c", 40.0}});
+        auto c = b.add(PartKind::Cable, std::string("C-") + m.tag,
+                       {{"size", std::string("8 AWG")}, {"length_ft", 50.0}});
+        auto mo = b.add(PartKind::Motor, m.tag,
+                        {{"hp", m.hp},
+                         {"volts", 460.0},
+                         {"fla", m.fla},
+                         {"rotor", std::string(m.rotor)},
+                         {"temp_rise_c", 40.0}});
         b.wire(mcc, 0, fu, 0);
         b.wire(fu, 1, k, 0);
         b.wire(k, 1, ol, 0);
@@ -260,16 +276,21 @@ TEST(FeederRules, MotorFeedersAreGovernedBy430NotBy240_4) {
 
 namespace {
 // A 480 V → 208 V, 45 kVA lighting transformer with primary breaker and secondary feeder.
-Drawing lightingTransformer(double primaryA, double secondaryA, const char* secSize, double loadKva) {
+Drawing lightingTransformer(double primaryA, double secondaryA, const char* secSize,
+                            double loadKva) {
     DrawingBuilder b;
     auto src = b.add(PartKind::Source, "U", {{"kv", 0.48}, {"fault_ka", 30.0}});
     auto bus = b.add(PartKind::Bus, "B", {{"volts", 480.0}, {"amps", 400.0}});
     auto cbp = b.add(PartKind::Breaker, "CB-P", {{"trip_a", primaryA}, {"interrupting_ka", 65.0}});
-    auto tx = b.add(PartKind::Transformer, "TX-L", {{"kva", 45.0}, {"pri_v", 480.0}, {"sec_v", 208.0}, {"z_pct", 3.5}});
-    auto cbs = b.add(PartKind::Breaker, "CB-S", {{"trip_a", secondaryA}, {"interrupting_ka", 22.0}});
+    auto tx = b.add(PartKind::Transformer, "TX-L",
+                    {{"kva", 45.0}, {"pri_v", 480.0}, {"sec_v", 208.0}, {"z_pct", 3.5}});
+    auto cbs =
+        b.add(PartKind::Breaker, "CB-S", {{"trip_a", secondaryA}, {"interrupting_ka", 22.0}});
     auto c = b.add(PartKind::Cable, "C-S", {{"size", std::string(secSize)}, {"length_ft", 20.0}});
-    auto pnl = b.add(PartKind::Bus, "LP", {{"bus_type", std::string("panelboard")}, {"volts", 208.0}, {"amps", 225.0}});
-    auto ld = b.add(PartKind::Load, "LTG", {{"kva", loadKva}, {"volts", 208.0}, {"continuous", false}});
+    auto pnl = b.add(PartKind::Bus, "LP",
+                     {{"bus_type", std::string("panelboard")}, {"volts", 208.0}, {"amps", 225.0}});
+    auto ld =
+        b.add(PartKind::Load, "LTG", {{"kva", loadKva}, {"volts", 208.0}, {"continuous", false}});
     b.wire(src, 0, bus, 0);
     b.wire(bus, 0, cbp, 0);
     b.wire(cbp, 1, tx, 0);
@@ -283,9 +304,11 @@ Drawing lightingTransformer(double primaryA, double secondaryA, const char* secS
 
 TEST(FeederRules, ConductorProtection240_4) {
     // Secondary 125 A breaker on 1/0 AWG (150 A at 75 °C): protected.
-    EXPECT_TRUE(findings(lightingTransformer(70, 125, "1/0 AWG", 30), "conductor.protection").empty());
+    EXPECT_TRUE(
+        findings(lightingTransformer(70, 125, "1/0 AWG", 30), "conductor.protection").empty());
     // 2 AWG (115 A, not a standard rating) on 125 A: 240.4(B) permits the next size up.
-    EXPECT_TRUE(findings(lightingTransformer(70, 125, "2 AWG", 30), "conductor.protection").empty());
+    EXPECT_TRUE(
+        findings(lightingTransformer(70, 125, "2 AWG", 30), "conductor.protection").empty());
     // 3 AWG (100 A, a standard rating) on 125 A: not protected.
     auto f = findings(lightingTransformer(70, 125, "3 AWG", 30), "conductor.protection");
     ASSERT_EQ(f.size(), 1u);
@@ -295,7 +318,8 @@ TEST(FeederRules, ConductorProtection240_4) {
 TEST(FeederRules, TransformerProtection450_3B) {
     // 45 kVA: primary 54.1 A at 480 V, secondary 124.9 A at 208 V.
     // Secondary 125 A ≤ 125 % (156 A → 175 A) so the primary may be 250 % = 135.3 A.
-    EXPECT_TRUE(findings(lightingTransformer(125, 125, "1/0 AWG", 30), "transformer.protection").empty());
+    EXPECT_TRUE(
+        findings(lightingTransformer(125, 125, "1/0 AWG", 30), "transformer.protection").empty());
     auto f = findings(lightingTransformer(150, 125, "1/0 AWG", 30), "transformer.protection");
     ASSERT_EQ(f.size(), 1u);
     EXPECT_NEAR(*f[0].limit, 135.3, 0.1);
@@ -303,12 +327,14 @@ TEST(FeederRules, TransformerProtection450_3B) {
     auto g = findings(lightingTransformer(80, 200, "3/0 AWG", 30), "transformer.protection");
     ASSERT_EQ(g.size(), 1u);
     EXPECT_DOUBLE_EQ(*g[0].limit, 70);
-    EXPECT_TRUE(findings(lightingTransformer(70, 200, "3/0 AWG", 30), "transformer.protection").empty());
+    EXPECT_TRUE(
+        findings(lightingTransformer(70, 200, "3/0 AWG", 30), "transformer.protection").empty());
 }
 
 TEST(FeederRules, TransformerLoad) {
     EXPECT_TRUE(findings(lightingTransformer(70, 125, "1/0 AWG", 40), "transformer.load").empty());
-    auto f = findings(lightingTransformer(70, 150, "2/0 AWG", 50), "transformer.load"); // 138.8 A > 124.9 A
+    auto f = findings(lightingTransformer(70, 150, "2/0 AWG", 50),
+                      "transformer.load"); // 138.8 A > 124.9 A
     ASSERT_EQ(f.size(), 1u);
     EXPECT_EQ(f[0].severity, Severity::Caution);
 }
@@ -345,20 +371,28 @@ TEST_P(ProposalChecksClean, NoBranchFindings) {
     PartId dev;
     switch (pc.device) {
     case ScpdType::InverseTimeBreaker:
-        dev = b.add(PartKind::Breaker, "D", {{"trip_a", p->deviceRatingA}, {"interrupting_ka", 65.0}});
+        dev = b.add(PartKind::Breaker, "D",
+                    {{"trip_a", p->deviceRatingA}, {"interrupting_ka", 65.0}});
         break;
     case ScpdType::InstantaneousBreaker:
-        dev = b.add(PartKind::InstBreaker, "D", {{"amps", 400.0}, {"pickup_a", p->deviceRatingA}, {"interrupting_ka", 65.0}});
+        dev = b.add(PartKind::InstBreaker, "D",
+                    {{"amps", 400.0}, {"pickup_a", p->deviceRatingA}, {"interrupting_ka", 65.0}});
         break;
     default:
-        dev = b.add(PartKind::Fuse, "D", {{"fuse_type", std::string(pc.device == ScpdType::TimeDelayFuse ? "time_delay" : "fast")},
-                                          {"amps", p->deviceRatingA}, {"interrupting_ka", 200.0}});
+        dev = b.add(PartKind::Fuse, "D",
+                    {{"fuse_type",
+                      std::string(pc.device == ScpdType::TimeDelayFuse ? "time_delay" : "fast")},
+                     {"amps", p->deviceRatingA},
+                     {"interrupting_ka", 200.0}});
     }
     auto k = b.add(PartKind::Contactor, "K", {{"nema_size", p->nemaSize}});
-    auto ol = b.add(PartKind::Overload, "OL", {{"setting_a", p->overloadSettingA}, {"trip_class", p->tripClass}});
-    auto c = b.add(PartKind::Cable, "C", {{"size", p->conductorSize}, {"length_ft", 100.0},
-                                          {"termination_c", static_cast<double>(p->terminationC)},
-                                          {"egc_size", p->egcSize}});
+    auto ol = b.add(PartKind::Overload, "OL",
+                    {{"setting_a", p->overloadSettingA}, {"trip_class", p->tripClass}});
+    auto c = b.add(PartKind::Cable, "C",
+                   {{"size", p->conductorSize},
+                    {"length_ft", 100.0},
+                    {"termination_c", static_cast<double>(p->terminationC)},
+                    {"egc_size", p->egcSize}});
     m.id = b.drawing().nextPartId();
     b.drawing().addPart(m);
     b.wire(src, 0, bus, 0);
@@ -373,9 +407,11 @@ TEST_P(ProposalChecksClean, NoBranchFindings) {
         if (f.ruleId != "duty.withstand.assumed" && f.ruleId.rfind("curve.", 0) != 0)
             ADD_FAILURE() << f.ruleId << ": " << f.message;
 }
-INSTANTIATE_TEST_SUITE_P(
-    SeveralMotors, ProposalChecksClean,
-    ::testing::Values(ProposalCase{3, 460, ScpdType::TimeDelayFuse}, ProposalCase{25, 460, ScpdType::InverseTimeBreaker},
-                      ProposalCase{25, 460, ScpdType::InstantaneousBreaker}, ProposalCase{10, 208, ScpdType::NonTimeDelayFuse},
-                      ProposalCase{75, 460, ScpdType::InverseTimeBreaker}, ProposalCase{150, 460, ScpdType::TimeDelayFuse},
-                      ProposalCase{40, 575, ScpdType::InstantaneousBreaker}));
+INSTANTIATE_TEST_SUITE_P(SeveralMotors, ProposalChecksClean,
+                         ::testing::Values(ProposalCase{3, 460, ScpdType::TimeDelayFuse},
+                                           ProposalCase{25, 460, ScpdType::InverseTimeBreaker},
+                                           ProposalCase{25, 460, ScpdType::InstantaneousBreaker},
+                                           ProposalCase{10, 208, ScpdType::NonTimeDelayFuse},
+                                           ProposalCase{75, 460, ScpdType::InverseTimeBreaker},
+                                           ProposalCase{150, 460, ScpdType::TimeDelayFuse},
+                                           ProposalCase{40, 575, ScpdType::InstantaneousBreaker}));

@@ -10,7 +10,8 @@ using namespace lineward::test;
 
 namespace {
 
-Part motor(double hp, double volts, std::initializer_list<std::pair<const char*, FieldValue>> more = {}) {
+Part motor(double hp, double volts,
+           std::initializer_list<std::pair<const char*, FieldValue>> more = {}) {
     Part m = Part::make(PartKind::Motor, PartId(1), "M");
     EXPECT_FALSE(m.set("hp", hp));
     EXPECT_FALSE(m.set("volts", volts));
@@ -36,16 +37,16 @@ BucketProposal propose(const Part& m, ScpdType device, std::optional<int> termin
 TEST(WorkedExample, AnnexD8TwentyFiveHorsepower) {
     const Part m = motor(25, 460, {{"fla", 32.0}, {"sf", 1.15}});
     const auto p = propose(m, ScpdType::NonTimeDelayFuse);
-    EXPECT_DOUBLE_EQ(p.flc.amps, 34);                     // Table 430.250
-    EXPECT_DOUBLE_EQ(p.conductorMinA, 42.5);              // 430.22: 1.25 × 34
-    EXPECT_EQ(p.conductorSize, "8 AWG");                  // Table 310.16, 75 °C: 50 A
-    EXPECT_DOUBLE_EQ(*p.overloadMaxA, 40);                // 430.32(A)(1): 1.25 × 32
-    EXPECT_DOUBLE_EQ(p.scpdMaxA.at(ScpdType::NonTimeDelayFuse), 110);   // 300 % = 102 → 110
-    EXPECT_DOUBLE_EQ(p.scpdMaxA.at(ScpdType::InverseTimeBreaker), 90);  // 250 % = 85 → 90
-    EXPECT_DOUBLE_EQ(p.scpdMaxA.at(ScpdType::TimeDelayFuse), 60);       // 175 % = 59.5 → 60
+    EXPECT_DOUBLE_EQ(p.flc.amps, 34);                                  // Table 430.250
+    EXPECT_DOUBLE_EQ(p.conductorMinA, 42.5);                           // 430.22: 1.25 × 34
+    EXPECT_EQ(p.conductorSize, "8 AWG");                               // Table 310.16, 75 °C: 50 A
+    EXPECT_DOUBLE_EQ(*p.overloadMaxA, 40);                             // 430.32(A)(1): 1.25 × 32
+    EXPECT_DOUBLE_EQ(p.scpdMaxA.at(ScpdType::NonTimeDelayFuse), 110);  // 300 % = 102 → 110
+    EXPECT_DOUBLE_EQ(p.scpdMaxA.at(ScpdType::InverseTimeBreaker), 90); // 250 % = 85 → 90
+    EXPECT_DOUBLE_EQ(p.scpdMaxA.at(ScpdType::TimeDelayFuse), 60);      // 175 % = 59.5 → 60
     EXPECT_DOUBLE_EQ(p.scpdMaxA.at(ScpdType::InstantaneousBreaker), 272); // 800 % setting
-    EXPECT_DOUBLE_EQ(p.disconnectMinA, 39.1);             // 430.110(A): 1.15 × 34
-    EXPECT_EQ(p.nemaSize, "2");                           // NEMA ICS 2: size 2 = 25 hp at 460 V
+    EXPECT_DOUBLE_EQ(p.disconnectMinA, 39.1);                             // 430.110(A): 1.15 × 34
+    EXPECT_EQ(p.nemaSize, "2"); // NEMA ICS 2: size 2 = 25 hp at 460 V
     // Table 250.122 gives 6 AWG for a 110 A device, but 250.122(A) never asks for more than
     // the 8 AWG circuit conductors.
     EXPECT_EQ(p.egcSize, "8 AWG");
@@ -53,13 +54,14 @@ TEST(WorkedExample, AnnexD8TwentyFiveHorsepower) {
 
 // Same example, the two 30 hp wound-rotor motors: FLC 40 A, nameplate 38 A, 40 °C rise.
 TEST(WorkedExample, AnnexD8WoundRotor) {
-    const Part m = motor(30, 460, {{"fla", 38.0}, {"sf", 1.0}, {"temp_rise_c", 40.0},
-                                   {"rotor", std::string("wound_rotor")}});
+    const Part m = motor(
+        30, 460,
+        {{"fla", 38.0}, {"sf", 1.0}, {"temp_rise_c", 40.0}, {"rotor", std::string("wound_rotor")}});
     const auto p = propose(m, ScpdType::NonTimeDelayFuse);
     EXPECT_DOUBLE_EQ(p.flc.amps, 40);
     EXPECT_DOUBLE_EQ(p.conductorMinA, 50);
     EXPECT_EQ(p.conductorSize, "8 AWG");
-    EXPECT_DOUBLE_EQ(*p.overloadMaxA, 47.5);              // 125 %: marked rise ≤ 40 °C
+    EXPECT_DOUBLE_EQ(*p.overloadMaxA, 47.5); // 125 %: marked rise ≤ 40 °C
     EXPECT_DOUBLE_EQ(p.scpdMaxA.at(ScpdType::NonTimeDelayFuse), 60); // wound rotor 150 % = 60
 }
 
@@ -71,11 +73,11 @@ TEST(WorkedExample, TenHorsepower208V) {
     EXPECT_DOUBLE_EQ(p.flc.amps, 30.8);
     EXPECT_DOUBLE_EQ(p.conductorMinA, 38.5);
     EXPECT_EQ(p.terminationC, 60);
-    EXPECT_EQ(p.conductorSize, "8 AWG");                  // 60 °C: 10 AWG 30 A, 8 AWG 40 A
-    EXPECT_DOUBLE_EQ(p.deviceRatingA, 80);                // 250 % = 77 → 80
+    EXPECT_EQ(p.conductorSize, "8 AWG");                          // 60 °C: 10 AWG 30 A, 8 AWG 40 A
+    EXPECT_DOUBLE_EQ(p.deviceRatingA, 80);                        // 250 % = 77 → 80
     EXPECT_DOUBLE_EQ(p.scpdMaxA.at(ScpdType::TimeDelayFuse), 60); // 175 % = 53.9 → 60
-    EXPECT_EQ(p.nemaSize, "2");                           // size 1 = 7.5 hp at 200 V
-    EXPECT_EQ(p.egcSize, "8 AWG");                        // 80 A → 8 AWG
+    EXPECT_EQ(p.nemaSize, "2");                                   // size 1 = 7.5 hp at 200 V
+    EXPECT_EQ(p.egcSize, "8 AWG");                                // 80 A → 8 AWG
 }
 
 // 100 hp at 460 V above 100 A: 75 °C terminations by default (110.14(C)(1)(b)).
@@ -85,12 +87,12 @@ TEST(WorkedExample, HundredHorsepower460V) {
     EXPECT_DOUBLE_EQ(p.flc.amps, 124);
     EXPECT_DOUBLE_EQ(p.conductorMinA, 155);
     EXPECT_EQ(p.terminationC, 75);
-    EXPECT_EQ(p.conductorSize, "2/0 AWG");                // 1/0 = 150 A < 155; 2/0 = 175 A
-    EXPECT_DOUBLE_EQ(p.deviceRatingA, 350);               // 250 % = 310 → 350
+    EXPECT_EQ(p.conductorSize, "2/0 AWG");  // 1/0 = 150 A < 155; 2/0 = 175 A
+    EXPECT_DOUBLE_EQ(p.deviceRatingA, 350); // 250 % = 310 → 350
     EXPECT_DOUBLE_EQ(p.scpdMaxA.at(ScpdType::NonTimeDelayFuse), 400); // 300 % = 372 → 400
     EXPECT_DOUBLE_EQ(*p.overloadMaxA, 150);
     EXPECT_EQ(p.nemaSize, "4");
-    EXPECT_EQ(p.egcSize, "3 AWG");                        // 350 A → 3 AWG
+    EXPECT_EQ(p.egcSize, "3 AWG"); // 350 A → 3 AWG
 }
 
 // 2 hp single-phase 230 V: Table 430.248 gives 12 A.
@@ -98,9 +100,9 @@ TEST(WorkedExample, TwoHorsepowerSinglePhase) {
     const Part m = motor(2, 230, {{"phases", 1.0}});
     const auto p = propose(m, ScpdType::TimeDelayFuse, std::nullopt);
     EXPECT_DOUBLE_EQ(p.flc.amps, 12);
-    EXPECT_EQ(p.conductorSize, "14 AWG");                 // 15 A needed, 60 °C 14 AWG = 15 A
-    EXPECT_DOUBLE_EQ(p.deviceRatingA, 25);                // 175 % = 21 → 25
-    EXPECT_EQ(p.nemaSize, "0");                           // size 00 = 1 hp at 230 V single-phase
+    EXPECT_EQ(p.conductorSize, "14 AWG");  // 15 A needed, 60 °C 14 AWG = 15 A
+    EXPECT_DOUBLE_EQ(p.deviceRatingA, 25); // 175 % = 21 → 25
+    EXPECT_EQ(p.nemaSize, "0");            // size 00 = 1 hp at 230 V single-phase
 }
 
 TEST(Sizing, KilowattMotorUsesNextHorsepowerRow) {

@@ -7,10 +7,9 @@
 #include "studies/tree_solver.h"
 #include "test_support.h"
 
-#include <gtest/gtest.h>
-
 #include <cmath>
 #include <complex>
+#include <gtest/gtest.h>
 #include <random>
 
 using namespace lineward;
@@ -40,15 +39,20 @@ struct Studied {
 Drawing transformerLineup(double sourceMva, double kva, double zPct, double xr,
                           const char* cableSize = nullptr, double lengthFt = 0, double sets = 1) {
     DrawingBuilder b;
-    auto src = b.add(PartKind::Source, "U", {{"kv", 13.8}, {"fault_mva", sourceMva}, {"x_over_r", 15.0}});
-    auto tx = b.add(PartKind::Transformer, "TX", {{"kva", kva}, {"pri_v", 13800.0}, {"sec_v", 480.0},
-                                                  {"z_pct", zPct}, {"x_over_r", xr}});
+    auto src =
+        b.add(PartKind::Source, "U", {{"kv", 13.8}, {"fault_mva", sourceMva}, {"x_over_r", 15.0}});
+    auto tx = b.add(
+        PartKind::Transformer, "TX",
+        {{"kva", kva}, {"pri_v", 13800.0}, {"sec_v", 480.0}, {"z_pct", zPct}, {"x_over_r", xr}});
     auto bus = b.add(PartKind::Bus, "SWBD", {{"volts", 480.0}, {"amps", 3000.0}});
     b.wire(src, 0, tx, 0);
     b.wire(tx, 1, bus, 0);
     if (cableSize) {
-        auto c = b.add(PartKind::Cable, "C", {{"size", std::string(cableSize)}, {"length_ft", lengthFt},
-                                              {"sets", sets}, {"raceway", std::string("steel")}});
+        auto c = b.add(PartKind::Cable, "C",
+                       {{"size", std::string(cableSize)},
+                        {"length_ft", lengthFt},
+                        {"sets", sets},
+                        {"raceway", std::string("steel")}});
         auto bus2 = b.add(PartKind::Bus, "MCC", {{"volts", 480.0}, {"amps", 800.0}});
         b.wire(bus, 0, c, 0);
         b.wire(c, 1, bus2, 0);
@@ -96,15 +100,18 @@ Drawing doubleEnded(bool tieOpen) {
     DrawingBuilder b;
     std::vector<PartId> buses;
     for (const char* side : {"A", "B"}) {
-        auto src = b.add(PartKind::Source, std::string("U-") + side, {{"kv", 13.8}, {"fault_mva", 250.0}});
+        auto src =
+            b.add(PartKind::Source, std::string("U-") + side, {{"kv", 13.8}, {"fault_mva", 250.0}});
         auto tx = b.add(PartKind::Transformer, std::string("TX-") + side,
                         {{"kva", 1500.0}, {"pri_v", 13800.0}, {"sec_v", 480.0}, {"z_pct", 5.75}});
-        auto bus = b.add(PartKind::Bus, std::string("BUS-") + side, {{"volts", 480.0}, {"amps", 2000.0}});
+        auto bus =
+            b.add(PartKind::Bus, std::string("BUS-") + side, {{"volts", 480.0}, {"amps", 2000.0}});
         b.wire(src, 0, tx, 0);
         b.wire(tx, 1, bus, 0);
         buses.push_back(bus);
     }
-    auto tie = b.add(PartKind::Breaker, "TIE", {{"trip_a", 2000.0}, {"interrupting_ka", 65.0}, {"open", tieOpen}});
+    auto tie = b.add(PartKind::Breaker, "TIE",
+                     {{"trip_a", 2000.0}, {"interrupting_ka", 65.0}, {"open", tieOpen}});
     b.wire(buses[0], 0, tie, 0);
     b.wire(tie, 1, buses[1], 0);
     b.drawing().settings.motorContributionX = 0;
@@ -135,7 +142,11 @@ TEST(FaultStudy, PeakFactorByIec60909) {
 
 TEST(FaultStudy, MotorsContribute) {
     Drawing d = smallLineup();
-    const double without = [&] { Drawing x = d; x.settings.motorContributionX = 0; return Studied(x).faultAt(PartId(4)).ikKa; }();
+    const double without = [&] {
+        Drawing x = d;
+        x.settings.motorContributionX = 0;
+        return Studied(x).faultAt(PartId(4)).ikKa;
+    }();
     Studied with(d);
     EXPECT_GT(with.faultAt(PartId(4)).ikKa, without);
     // 4 × 34 A at the 460 V rating is 4 × 34 × 480/460 = 141.9 A on the 480 V bus, less the
@@ -172,10 +183,12 @@ TEST(VoltageStudy, MotorStartingDipMatchesSourceRatio) {
     // motor, LRA 750 A (given), starting pf 0.3, bolted to the secondary bus.
     DrawingBuilder b;
     auto src = b.add(PartKind::Source, "U", {{"kv", 13.8}, {"fault_mva", 1e5}});
-    auto tx = b.add(PartKind::Transformer, "TX", {{"kva", 500.0}, {"pri_v", 13800.0}, {"sec_v", 480.0},
-                                                  {"z_pct", 5.0}, {"x_over_r", 5.0}});
+    auto tx = b.add(
+        PartKind::Transformer, "TX",
+        {{"kva", 500.0}, {"pri_v", 13800.0}, {"sec_v", 480.0}, {"z_pct", 5.0}, {"x_over_r", 5.0}});
     auto bus = b.add(PartKind::Bus, "B", {{"volts", 480.0}, {"amps", 800.0}});
-    auto m = b.add(PartKind::Motor, "M", {{"hp", 100.0}, {"volts", 480.0}, {"lra", 750.0}, {"fla", 120.0}});
+    auto m = b.add(PartKind::Motor, "M",
+                   {{"hp", 100.0}, {"volts", 480.0}, {"lra", 750.0}, {"fla", 120.0}});
     b.wire(src, 0, tx, 0);
     b.wire(tx, 1, bus, 0);
     b.wire(bus, 0, m, 0);
@@ -201,14 +214,16 @@ TEST(DutyRules, IceaWithstandLimit) {
     ASSERT_FALSE(cb.set("interrupting_ka", 65.0));
     ASSERT_FALSE(cb.set("clear_s", 0.5));
     d.addPart(cb);
-    const auto w = std::find_if(d.wires().begin(), d.wires().end(), [](const Wire& x) { return x.b.part == PartId(4); });
+    const auto w = std::find_if(d.wires().begin(), d.wires().end(),
+                                [](const Wire& x) { return x.b.part == PartId(4); });
     ASSERT_NE(w, d.wires().end());
     const auto bus = w->a;
     d.removeWire(w->id);
     d.addWire(Wire{d.nextWireId(), bus, {cb.id, 0}});
     d.addWire(Wire{d.nextWireId(), {cb.id, 1}, {PartId(4), 0}});
     const auto r = checkDrawing(d, testTables());
-    auto it = std::find_if(r.findings.begin(), r.findings.end(), [](const Finding& f) { return f.ruleId == "duty.withstand"; });
+    auto it = std::find_if(r.findings.begin(), r.findings.end(),
+                           [](const Finding& f) { return f.ruleId == "duty.withstand"; });
     ASSERT_NE(it, r.findings.end());
     EXPECT_NEAR(*it->limit, 105600.0 * 105600 * 0.0297 * std::log10(484.0 / 324.0), 1.0);
     // With a stated let-through below the limit the cable passes.
@@ -252,18 +267,21 @@ TEST_P(RadialProperty, FaultFallsAndDropGrowsDownstream) {
     const char* sizes[] = {"4/0 AWG", "2/0 AWG", "1 AWG", "250 kcmil", "500 kcmil", "350 kcmil"};
     DrawingBuilder b;
     auto src = b.add(PartKind::Source, "U", {{"kv", 13.8}, {"fault_mva", 300.0}});
-    auto tx = b.add(PartKind::Transformer, "TX", {{"kva", 1500.0}, {"pri_v", 13800.0}, {"sec_v", 480.0}, {"z_pct", 5.75}});
+    auto tx = b.add(PartKind::Transformer, "TX",
+                    {{"kva", 1500.0}, {"pri_v", 13800.0}, {"sec_v", 480.0}, {"z_pct", 5.75}});
     auto root = b.add(PartKind::Bus, "B0", {{"volts", 480.0}, {"amps", 3000.0}});
     b.wire(src, 0, tx, 0);
     b.wire(tx, 1, root, 0);
     std::vector<PartId> buses{root};
     std::vector<std::pair<PartId, PartId>> links; // (upstream bus, downstream bus)
     for (int i = 1; i < 25; ++i) {
-        const PartId up = buses[std::uniform_int_distribution<std::size_t>(0, buses.size() - 1)(rng)];
+        const PartId up =
+            buses[std::uniform_int_distribution<std::size_t>(0, buses.size() - 1)(rng)];
         auto c = b.add(PartKind::Cable, "C" + std::to_string(i),
                        {{"size", std::string(sizes[rng() % 6])},
                         {"length_ft", static_cast<double>(20 + rng() % 300)}});
-        auto bus = b.add(PartKind::Bus, "B" + std::to_string(i), {{"volts", 480.0}, {"amps", 400.0}});
+        auto bus =
+            b.add(PartKind::Bus, "B" + std::to_string(i), {{"volts", 480.0}, {"amps", 400.0}});
         auto ld = b.add(PartKind::Load, "L" + std::to_string(i),
                         {{"kva", static_cast<double>(2 + rng() % 10)}, {"volts", 480.0}});
         b.wire(up, 0, c, 0);
@@ -290,8 +308,9 @@ TEST(VoltageStudy, CollapsingNetworkIsReported) {
     d.addPart(load);
     d.addWire(Wire{d.nextWireId(), {PartId(5), 0}, {load.id, 0}});
     const auto r = checkDrawing(d, testTables());
-    EXPECT_TRUE(std::any_of(r.findings.begin(), r.findings.end(),
-                            [](const Finding& f) { return f.ruleId == "study.loadflow.diverged"; }));
+    EXPECT_TRUE(std::any_of(r.findings.begin(), r.findings.end(), [](const Finding& f) {
+        return f.ruleId == "study.loadflow.diverged";
+    }));
 }
 
 TEST(FaultStudy, TreeRecursionEqualsSparseLu) {

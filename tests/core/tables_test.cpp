@@ -38,7 +38,8 @@ INSTANTIATE_TEST_SUITE_P(
                       FlcRow{10, 230, 1, 50, "NEC 2023 Table 430.248, 10 hp 230 V"}));
 
 TEST(FlcTable, NoRowMeansNoValue) {
-    EXPECT_FALSE(testTables().flc(3, 115, 3)); // NEC 2023 Table 430.250 has no 115 V value above 2 hp
+    EXPECT_FALSE(
+        testTables().flc(3, 115, 3)); // NEC 2023 Table 430.250 has no 115 V value above 2 hp
     EXPECT_FALSE(testTables().flc(250, 230, 3));
     EXPECT_FALSE(testTables().flc(12, 460, 3)); // no 12 hp row
     EXPECT_FALSE(testTables().flc(25, 400, 3)); // 400 V is no column and in no range
@@ -55,14 +56,18 @@ TEST_P(AmpacityTable, MatchesNec2023Table310_16) {
     const auto& r = GetParam();
     EXPECT_EQ(testTables().ampacityAt(r.size, r.m, r.column), r.amps) << r.size;
 }
-INSTANTIATE_TEST_SUITE_P(
-    Nec2023Table310_16, AmpacityTable,
-    ::testing::Values(AmpRow{"14 AWG", Material::Cu, 60, 15}, AmpRow{"14 AWG", Material::Cu, 90, 25},
-                      AmpRow{"8 AWG", Material::Cu, 75, 50}, AmpRow{"10 AWG", Material::Cu, 75, 35},
-                      AmpRow{"2/0 AWG", Material::Cu, 75, 175}, AmpRow{"250 kcmil", Material::Cu, 75, 255},
-                      AmpRow{"500 kcmil", Material::Cu, 90, 430}, AmpRow{"2000 kcmil", Material::Cu, 90, 750},
-                      AmpRow{"12 AWG", Material::Al, 75, 20}, AmpRow{"4/0 AWG", Material::Al, 75, 180},
-                      AmpRow{"2000 kcmil", Material::Al, 60, 470}));
+INSTANTIATE_TEST_SUITE_P(Nec2023Table310_16, AmpacityTable,
+                         ::testing::Values(AmpRow{"14 AWG", Material::Cu, 60, 15},
+                                           AmpRow{"14 AWG", Material::Cu, 90, 25},
+                                           AmpRow{"8 AWG", Material::Cu, 75, 50},
+                                           AmpRow{"10 AWG", Material::Cu, 75, 35},
+                                           AmpRow{"2/0 AWG", Material::Cu, 75, 175},
+                                           AmpRow{"250 kcmil", Material::Cu, 75, 255},
+                                           AmpRow{"500 kcmil", Material::Cu, 90, 430},
+                                           AmpRow{"2000 kcmil", Material::Cu, 90, 750},
+                                           AmpRow{"12 AWG", Material::Al, 75, 20},
+                                           AmpRow{"4/0 AWG", Material::Al, 75, 180},
+                                           AmpRow{"2000 kcmil", Material::Al, 60, 470}));
 
 TEST(Tables, AmbientAndAdjustmentFactors) {
     const auto& t = testTables();
@@ -112,12 +117,17 @@ TEST(Tables, Table430_52AndCodeLetters) {
     EXPECT_EQ(cage.pct[static_cast<int>(ScpdType::TimeDelayFuse)], 175);
     EXPECT_EQ(cage.pct[static_cast<int>(ScpdType::InstantaneousBreaker)], 800);
     EXPECT_EQ(cage.pct[static_cast<int>(ScpdType::InverseTimeBreaker)], 250);
-    EXPECT_EQ(t.scpdRow(MotorType::DesignBPremium).pct[static_cast<int>(ScpdType::InstantaneousBreaker)], 1100);
-    EXPECT_EQ(t.scpdRow(MotorType::WoundRotor).pct[static_cast<int>(ScpdType::InverseTimeBreaker)], 150);
+    EXPECT_EQ(
+        t.scpdRow(MotorType::DesignBPremium).pct[static_cast<int>(ScpdType::InstantaneousBreaker)],
+        1100);
+    EXPECT_EQ(t.scpdRow(MotorType::WoundRotor).pct[static_cast<int>(ScpdType::InverseTimeBreaker)],
+              150);
     // 430.52(C)(1) Exception No. 2 and 430.52(C)(3)
     EXPECT_EQ(cage.excPct[static_cast<int>(ScpdType::TimeDelayFuse)], 225);
     EXPECT_EQ(cage.excPct[static_cast<int>(ScpdType::InstantaneousBreaker)], 1300);
-    EXPECT_EQ(t.scpdRow(MotorType::DesignBPremium).excPct[static_cast<int>(ScpdType::InstantaneousBreaker)], 1700);
+    EXPECT_EQ(t.scpdRow(MotorType::DesignBPremium)
+                  .excPct[static_cast<int>(ScpdType::InstantaneousBreaker)],
+              1700);
     // NEC 2023 Table 430.7(B)
     EXPECT_DOUBLE_EQ(*t.codeLetterKvaPerHp('A'), 3.14);
     EXPECT_DOUBLE_EQ(*t.codeLetterKvaPerHp('G'), 6.29);
@@ -176,9 +186,11 @@ TEST(Tables, MalformedTablesStopWithFileAndLine) {
         }
     };
     fails("# table: standard_ratings\namps\n15\n", "no '# source:'");
-    fails("# table: standard_ratings\n# source: x\namps\n15\nabc\n", "bad.csv:5: column 'amps': 'abc' is not a number");
+    fails("# table: standard_ratings\n# source: x\namps\n15\nabc\n",
+          "bad.csv:5: column 'amps': 'abc' is not a number");
     fails("# table: standard_ratings\n# source: x\namps\n20\n15\n", "must increase");
-    fails("# table: ampacity\n# source: x\nsize,cu_60\n14 AWG,15,20\n", "bad.csv:4: row has 3 cells");
+    fails("# table: ampacity\n# source: x\nsize,cu_60\n14 AWG,15,20\n",
+          "bad.csv:4: row has 3 cells");
     fails("# table: standard_ratings\n# source: x\namps\n15\n", "table 'flc_3ph' is missing");
     fails("# table: nonsense\n# source: x\na\n1\n", "unknown table 'nonsense'");
 }

@@ -58,11 +58,16 @@ Drawing smallLineup() {
     // 430.62(A): one 25 hp motor (FLC 34 A) behind an 80 A branch breaker allows an 80 A main.
     // The main is electronic (long-time 20 s, short-time 9 × after 0.3 s) and the branch
     // breaker's instantaneous is 6 ×, so the two are selective.
-    auto main = b.add(PartKind::Breaker, "CB-M", {{"trip_type", std::string("electronic")}, {"trip_a", 80.0},
-                                                  {"interrupting_ka", 65.0}, {"lt_delay_s", 20.0},
-                                                  {"st_pickup_x", 9.0}, {"st_delay_s", 0.3}});
+    auto main = b.add(PartKind::Breaker, "CB-M",
+                      {{"trip_type", std::string("electronic")},
+                       {"trip_a", 80.0},
+                       {"interrupting_ka", 65.0},
+                       {"lt_delay_s", 20.0},
+                       {"st_pickup_x", 9.0},
+                       {"st_delay_s", 0.3}});
     auto bus = b.add(PartKind::Bus, "MCC", {{"volts", 480.0}, {"amps", 1200.0}});
-    auto cb = b.add(PartKind::Breaker, "CB-1", {{"trip_a", 80.0}, {"interrupting_ka", 65.0}, {"inst_x", 6.0}});
+    auto cb = b.add(PartKind::Breaker, "CB-1",
+                    {{"trip_a", 80.0}, {"interrupting_ka", 65.0}, {"inst_x", 6.0}});
     auto k = b.add(PartKind::Contactor, "K-1", {{"nema_size", std::string("2")}});
     auto ol = b.add(PartKind::Overload, "OL-1", {{"setting_a", 32.0}});
     auto c = b.add(PartKind::Cable, "C-1", {{"size", std::string("8 AWG")}, {"length_ft", 100.0}});

@@ -3,9 +3,8 @@
 #include "test_support.h"
 #include "topology/network.h"
 
-#include <gtest/gtest.h>
-
 #include <algorithm>
+#include <gtest/gtest.h>
 
 using namespace lineward;
 using namespace lineward::test;
@@ -32,7 +31,7 @@ TEST(Network, BusIsOneNodeAndBranchesJoinNodes) {
     Network net(d);
     // Nodes: source/pri, sec/main line, bus, cb/k, k/ol, ol/cable, cable/motor = 7.
     EXPECT_EQ(net.nodeCount(), 7u);
-    EXPECT_EQ(boost::num_edges(net.graph()), 6u); // tx, main, cb, k, ol, cable
+    EXPECT_EQ(boost::num_edges(net.graph()), 6u);                  // tx, main, cb, k, ol, cable
     EXPECT_EQ(net.nodeOf(PartId(3), 1), net.nodeOf(PartId(4), 0)); // main load = bus
     EXPECT_EQ(net.nodeOf(PartId(4), 0), net.nodeOf(PartId(5), 0)); // bus = CB-1 line
     EXPECT_TRUE(net.partEnergized(PartId(9)));
@@ -159,7 +158,8 @@ TEST(Topology, InstantaneousBreakerNeedsOverloadInItsBucket) {
     DrawingBuilder b;
     auto src = b.add(PartKind::Source, "U", {{"kv", 0.48}, {"fault_ka", 30.0}});
     auto bus = b.add(PartKind::Bus, "B", {{"volts", 480.0}, {"amps", 600.0}});
-    auto mcp = b.add(PartKind::InstBreaker, "MCP", {{"amps", 50.0}, {"pickup_a", 300.0}, {"interrupting_ka", 65.0}});
+    auto mcp = b.add(PartKind::InstBreaker, "MCP",
+                     {{"amps", 50.0}, {"pickup_a", 300.0}, {"interrupting_ka", 65.0}});
     auto k = b.add(PartKind::Contactor, "K", {{"nema_size", std::string("1")}});
     auto ol = b.add(PartKind::Overload, "OL", {{"setting_a", 14.0}});
     auto m = b.add(PartKind::Motor, "M", {{"hp", 10.0}, {"volts", 460.0}});
@@ -184,7 +184,10 @@ TEST(Check, AcceptedDeviationIsMarkedAndNotCounted) {
     auto r = checkDrawing(d, testTables());
     ASSERT_EQ(countRule(d, "topology.voltage.mismatch"), 1);
     const int before = r.openCounts[2];
-    d.accepted().push_back({"topology.voltage.mismatch", {PartId(9)}, "R. Quill", "2026-12-01",
+    d.accepted().push_back({"topology.voltage.mismatch",
+                            {PartId(9)},
+                            "R. Quill",
+                            "2026-12-01",
                             "motor rewound for 480 V; nameplate to be replaced"});
     r = checkDrawing(d, testTables());
     EXPECT_EQ(r.openCounts[2], before - 1);
@@ -202,9 +205,8 @@ TEST(DrawingRules, DuplicateTagsAreACaution) {
     d.part(PartId(8))->tag = "M-1"; // cable given the motor's tag
     const auto r = checkDrawing(d, testTables());
     ASSERT_EQ(countRule(d, "drawing.tag.duplicate"), 1);
-    auto it = std::find_if(r.findings.begin(), r.findings.end(), [](const Finding& f) {
-        return f.ruleId == "drawing.tag.duplicate";
-    });
+    auto it = std::find_if(r.findings.begin(), r.findings.end(),
+                           [](const Finding& f) { return f.ruleId == "drawing.tag.duplicate"; });
     EXPECT_EQ(it->severity, Severity::Caution);
     EXPECT_EQ(it->parts.size(), 2u);
 }

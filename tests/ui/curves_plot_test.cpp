@@ -24,7 +24,8 @@ TEST(CurvesPlot, RendersBandsAndLegendForAMotorPath) {
     for (const auto& s : set.series)
         labels.push_back(s.label);
     auto has = [&](const char* tag) {
-        return std::any_of(labels.begin(), labels.end(), [&](const std::string& l) { return l.find(tag) != std::string::npos; });
+        return std::any_of(labels.begin(), labels.end(),
+                           [&](const std::string& l) { return l.find(tag) != std::string::npos; });
     };
     for (const char* tag : {"OL-102", "MCP-102", "CB-F1", "CB-MAIN", "P-102 start", "C-102 damage"})
         EXPECT_TRUE(has(tag)) << tag;
@@ -46,7 +47,8 @@ TEST(CurvesPlot, RendersBandsAndLegendForAMotorPath) {
     const QString out = test::tempDir("curves") + "/p102.png";
     EXPECT_TRUE(saveCurves(set, out).isEmpty());
     EXPECT_TRUE(QImage(out).width() == 1100);
-    EXPECT_FALSE(saveCurves(set, test::tempDir("curves") + "/x.bmp").isEmpty()); // unknown type refused
+    EXPECT_FALSE(
+        saveCurves(set, test::tempDir("curves") + "/x.bmp").isEmpty()); // unknown type refused
 }
 
 TEST(CurvesPlot, PanelFollowsTheSelection) {

@@ -17,9 +17,8 @@
 #include <QFile>
 #include <QTest>
 #include <QTreeWidget>
-#include <gtest/gtest.h>
-
 #include <chrono>
+#include <gtest/gtest.h>
 #include <random>
 
 using namespace lineward;
@@ -28,7 +27,9 @@ using test::sharedTables;
 
 namespace {
 
-std::string bytes(MainWindow& w) { return io::serializeDrawing(w.document().drawing()); }
+std::string bytes(MainWindow& w) {
+    return io::serializeDrawing(w.document().drawing());
+}
 
 const Finding* findingOf(MainWindow& w, const std::string& rule) {
     for (const auto& f : w.document().report().findings)
@@ -40,8 +41,9 @@ const Finding* findingOf(MainWindow& w, const std::string& rule) {
 // Draws the scenario lineup: source, transformer, bus, breaker, contactor, overload, cable and
 // motor, each wired to the next. Returns their ids in that order.
 std::vector<PartId> drawLineup(MainWindow& w) {
-    const PartKind kinds[] = {PartKind::Source, PartKind::Transformer, PartKind::Bus, PartKind::Breaker,
-                              PartKind::Contactor, PartKind::Overload, PartKind::Cable, PartKind::Motor};
+    const PartKind kinds[] = {PartKind::Source,  PartKind::Transformer, PartKind::Bus,
+                              PartKind::Breaker, PartKind::Contactor,   PartKind::Overload,
+                              PartKind::Cable,   PartKind::Motor};
     std::vector<PartId> ids;
     double y = 0;
     for (auto k : kinds) {
@@ -53,7 +55,8 @@ std::vector<PartId> drawLineup(MainWindow& w) {
     w.connectTerminals({ids[1], 1}, {ids[2], 0});
     w.connectTerminals({ids[2], 0}, {ids[3], 0});
     for (int i = 3; i < 7; ++i)
-        w.connectTerminals({ids[static_cast<std::size_t>(i)], 1}, {ids[static_cast<std::size_t>(i + 1)], 0});
+        w.connectTerminals({ids[static_cast<std::size_t>(i)], 1},
+                           {ids[static_cast<std::size_t>(i + 1)], 0});
     QApplication::processEvents();
     return ids;
 }
@@ -85,7 +88,8 @@ TEST(Editor, DrawCheckFixUndoSaveReopen) {
     EXPECT_EQ(*cable->badge(), Severity::Violation);
     bool listed = false;
     for (int i = 0; i < w.findings()->list()->topLevelItemCount(); ++i)
-        listed = listed || w.findings()->list()->topLevelItem(i)->text(1) == "branch.conductor.ampacity";
+        listed =
+            listed || w.findings()->list()->topLevelItem(i)->text(1) == "branch.conductor.ampacity";
     EXPECT_TRUE(listed);
 
     // Apply fix: one undoable edit; the violation goes.
@@ -169,7 +173,9 @@ TEST(Editor, EveryCommandUndoesToTheSameBytes) {
         select(w, d.partByTag("OL-101")->id);
         w.inspector()->commit("setting_a", "30");
     });
-    check("connect", [&] { w.connectTerminals({d.partByTag("CB-H1")->id, 1}, {d.partByTag("LP-1")->id, 0}); });
+    check("connect", [&] {
+        w.connectTerminals({d.partByTag("CB-H1")->id, 1}, {d.partByTag("LP-1")->id, 0});
+    });
     check("group bucket", [&] {
         stack.push(new GroupBucketCommand(w.document(), {d.partByTag("CB-H1")->id}, "B-H1", 65));
     });
@@ -186,7 +192,8 @@ TEST(Editor, MoveDragPushesOneMergedCommand) {
     auto& stack = w.document().undoStack();
     const int count = stack.count();
     for (int i = 1; i <= 3; ++i)
-        stack.push(new MovePartsCommand(w.document(), {id}, {QPointF(0, (i - 1) * 10.0)}, {QPointF(0, i * 10.0)}));
+        stack.push(new MovePartsCommand(w.document(), {id}, {QPointF(0, (i - 1) * 10.0)},
+                                        {QPointF(0, i * 10.0)}));
     EXPECT_EQ(stack.count(), count + 1); // repeated moves of the same part merge
     EXPECT_EQ(w.document().drawing().part(id)->y, 30);
     stack.undo();
@@ -227,7 +234,8 @@ TEST(Editor, RandomEditsUndoneGiveBackTheOriginalBytes) {
         const int before = w.document().undoStack().index();
         switch (rng() % 7) {
         case 0:
-            w.placePart(static_cast<PartKind>(rng() % kPartKindCount), QPointF(rng() % 2000, rng() % 800));
+            w.placePart(static_cast<PartKind>(rng() % kPartKindCount),
+                        QPointF(rng() % 2000, rng() % 800));
             break;
         case 1:
             select(w, randomPart());
@@ -278,7 +286,8 @@ TEST(Editor, LargePlantIsCheckedOffTheGuiThread) {
     const auto t0 = std::chrono::steady_clock::now();
     ASSERT_TRUE(w.inspector()->commit("size", "14 AWG").isEmpty());
     QApplication::processEvents(); // the check starts on a worker; the window keeps going
-    const double ms = std::chrono::duration<double, std::milli>(std::chrono::steady_clock::now() - t0).count();
+    const double ms =
+        std::chrono::duration<double, std::milli>(std::chrono::steady_clock::now() - t0).count();
     std::printf("edit on a 2,000-part plant returned to the event loop in %.1f ms\n", ms);
     w.document().waitForCheck();
     EXPECT_NE(findingOf(w, "branch.conductor.ampacity"), nullptr);

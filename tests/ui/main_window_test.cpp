@@ -17,7 +17,9 @@ using namespace lineward::ui;
 
 using test::sharedTables;
 namespace {
-QString sample(const char* name) { return test::samplePath(name); }
+QString sample(const char* name) {
+    return test::samplePath(name);
+}
 } // namespace
 
 TEST(MainWindow, OpensSampleShowsBadgesAndFindings) {
@@ -67,4 +69,3 @@ TEST(MainWindow, BrokenFileGivesLocatedMessageAndKeepsDrawing) {
     EXPECT_TRUE(why.contains("README.md:1:")) << why.toStdString();
     EXPECT_EQ(w.document().drawing().parts().size(), parts);
 }
-

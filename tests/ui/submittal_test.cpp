@@ -7,8 +7,8 @@
 #include "rules/check.h"
 #include "rules/report_format.h"
 #include "studies/study.h"
-#include "topology/flow.h"
 #include "submittal.h"
+#include "topology/flow.h"
 #include "ui_support.h"
 
 #include <QFile>
@@ -16,7 +16,6 @@
 #include <QProcess>
 #include <QXmlStreamReader>
 #include <gtest/gtest.h>
-
 #include <regex>
 
 using namespace lineward;
@@ -24,7 +23,9 @@ using namespace lineward::ui;
 
 namespace {
 
-Drawing sample(const char* name) { return *io::loadDrawing(test::samplePath(name).toStdString()).drawing; }
+Drawing sample(const char* name) {
+    return *io::loadDrawing(test::samplePath(name).toStdString()).drawing;
+}
 
 // pdftotext output with runs of white space folded to one space.
 QString pdfText(const QString& pdf) {
@@ -70,15 +71,19 @@ TEST(Submittal, PaperSizesAndOrientation) {
     const struct {
         const char* name;
         const char* size;
-    } papers[] = {{"letter", "792 x 612"}, {"legal", "1008 x 612"}, {"tabloid", "1224 x 792"},
-                  {"a4", "842 x 595"}, {"a3", "1191 x 842"}};
+    } papers[] = {{"letter", "792 x 612"},
+                  {"legal", "1008 x 612"},
+                  {"tabloid", "1224 x 792"},
+                  {"a4", "842 x 595"},
+                  {"a3", "1191 x 842"}};
     for (const auto& paper : papers) {
         SubmittalOptions o;
         o.paper = *paperByName(paper.name);
         o.curveParts = std::vector<PartId>{}; // keep it short
         const QString pdf = test::tempDir("papers") + "/" + paper.name + ".pdf";
         ASSERT_TRUE(writeSubmittalPdf(pdf, d, test::sharedTables(), o).error.isEmpty());
-        EXPECT_TRUE(pdfInfo(pdf).contains(paper.size)) << paper.name << "\n" << pdfInfo(pdf).toStdString();
+        EXPECT_TRUE(pdfInfo(pdf).contains(paper.size)) << paper.name << "\n"
+                                                       << pdfInfo(pdf).toStdString();
     }
     EXPECT_FALSE(paperByName("b5").has_value());
 }
@@ -140,7 +145,8 @@ TEST(Submittal, LargeOneLineTilesWithMatchLines) {
     EXPECT_TRUE(pdfText(pdf).contains("MATCH LINE — SEE SHEET 2"));
     // The sample fits one tabloid sheet: no match lines.
     const QString one = test::tempDir("tiles") + "/sample.pdf";
-    auto s = writeSubmittalPdf(one, sample("kestrel-mill-mcc1.lineward"), test::sharedTables(), SubmittalOptions{});
+    auto s = writeSubmittalPdf(one, sample("kestrel-mill-mcc1.lineward"), test::sharedTables(),
+                               SubmittalOptions{});
     EXPECT_EQ(s.oneLineSheets, 1);
     EXPECT_FALSE(pdfText(one).contains("MATCH LINE"));
 }

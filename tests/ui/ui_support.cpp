@@ -15,7 +15,9 @@ std::shared_ptr<const Tables> sharedTables() {
     return t;
 }
 
-QString samplePath(const char* name) { return QString(LINEWARD_SOURCE_DIR) + "/samples/" + name; }
+QString samplePath(const char* name) {
+    return QString(LINEWARD_SOURCE_DIR) + "/samples/" + name;
+}
 
 std::string fileBytes(const QString& path) {
     std::ifstream in(path.toStdString(), std::ios::binary);

@@ -5,7 +5,8 @@ namespace lineward::ui {
 
 AddPartsCommand::AddPartsCommand(Document& doc, std::vector<Part> parts, std::vector<Wire> wires,
                                  std::vector<Bucket> buckets, const QString& text)
-    : m_doc(doc), m_parts(std::move(parts)), m_wires(std::move(wires)), m_buckets(std::move(buckets)) {
+    : m_doc(doc), m_parts(std::move(parts)), m_wires(std::move(wires)),
+      m_buckets(std::move(buckets)) {
     setText(text);
 }
 

@@ -5,13 +5,15 @@
 
 namespace lineward::ui {
 
-GroupBucketCommand::GroupBucketCommand(Document& doc, std::vector<PartId> parts, std::string tag, double sccrKa)
+GroupBucketCommand::GroupBucketCommand(Document& doc, std::vector<PartId> parts, std::string tag,
+                                       double sccrKa)
     : m_doc(doc) {
     std::sort(parts.begin(), parts.end());
     m_bucket = Bucket{doc.drawing().nextBucketId(), std::move(tag), sccrKa, parts};
     for (const auto& b : doc.drawing().buckets())
-        if (std::any_of(b.parts.begin(), b.parts.end(),
-                        [&](PartId p) { return std::find(parts.begin(), parts.end(), p) != parts.end(); }))
+        if (std::any_of(b.parts.begin(), b.parts.end(), [&](PartId p) {
+                return std::find(parts.begin(), parts.end(), p) != parts.end();
+            }))
             m_before.push_back(b);
     setText(QObject::tr("Group bucket %1").arg(QString::fromStdString(m_bucket.tag)));
 }
@@ -19,7 +21,8 @@ GroupBucketCommand::GroupBucketCommand(Document& doc, std::vector<PartId> parts,
 void GroupBucketCommand::redo() {
     for (Bucket b : m_before) {
         std::erase_if(b.parts, [&](PartId p) {
-            return std::find(m_bucket.parts.begin(), m_bucket.parts.end(), p) != m_bucket.parts.end();
+            return std::find(m_bucket.parts.begin(), m_bucket.parts.end(), p) !=
+                   m_bucket.parts.end();
         });
         m_doc.replaceBucket(b);
     }

@@ -19,16 +19,21 @@ DeleteCommand::DeleteCommand(Document& doc, std::vector<PartId> parts, std::vect
     for (auto id : wires)
         wireSet.insert(id.value);
     for (const auto& w : d.wires())
-        if (wireSet.count(w.id.value) || partSet.count(w.a.part.value) || partSet.count(w.b.part.value))
+        if (wireSet.count(w.id.value) || partSet.count(w.a.part.value) ||
+            partSet.count(w.b.part.value))
             m_wires.push_back(w);
     for (const auto& b : d.buckets())
-        if (std::any_of(b.parts.begin(), b.parts.end(), [&](PartId p) { return partSet.count(p.value) > 0; }))
+        if (std::any_of(b.parts.begin(), b.parts.end(),
+                        [&](PartId p) { return partSet.count(p.value) > 0; }))
             m_bucketsBefore.push_back(b);
-    std::sort(m_parts.begin(), m_parts.end(), [](const Part& a, const Part& b) { return a.id < b.id; });
-    setText(m_parts.size() + m_wires.size() == 1
-                ? QObject::tr("Delete %1").arg(m_parts.empty() ? QObject::tr("wire")
-                                                                : QString::fromStdString(m_parts.front().tag))
-                : QObject::tr("Delete %1 parts and %2 wires").arg(m_parts.size()).arg(m_wires.size()));
+    std::sort(m_parts.begin(), m_parts.end(),
+              [](const Part& a, const Part& b) { return a.id < b.id; });
+    setText(
+        m_parts.size() + m_wires.size() == 1
+            ? QObject::tr("Delete %1")
+                  .arg(m_parts.empty() ? QObject::tr("wire")
+                                       : QString::fromStdString(m_parts.front().tag))
+            : QObject::tr("Delete %1 parts and %2 wires").arg(m_parts.size()).arg(m_wires.size()));
 }
 
 void DeleteCommand::redo() {

@@ -5,10 +5,11 @@
 
 namespace lineward::ui {
 
-MovePartsCommand::MovePartsCommand(Document& doc, std::vector<PartId> parts, std::vector<QPointF> from,
-                                   std::vector<QPointF> to)
+MovePartsCommand::MovePartsCommand(Document& doc, std::vector<PartId> parts,
+                                   std::vector<QPointF> from, std::vector<QPointF> to)
     : m_doc(doc), m_parts(std::move(parts)), m_from(std::move(from)), m_to(std::move(to)) {
-    setText(m_parts.size() == 1 ? QObject::tr("Move %1").arg(QString::fromStdString(doc.drawing().part(m_parts[0])->tag))
+    setText(m_parts.size() == 1 ? QObject::tr("Move %1").arg(
+                                      QString::fromStdString(doc.drawing().part(m_parts[0])->tag))
                                 : QObject::tr("Move %1 parts").arg(m_parts.size()));
 }
 
@@ -21,9 +22,15 @@ void MovePartsCommand::apply(const std::vector<QPointF>& pos) {
     }
 }
 
-void MovePartsCommand::redo() { apply(m_to); }
-void MovePartsCommand::undo() { apply(m_from); }
-int MovePartsCommand::id() const { return kMovePartsId; }
+void MovePartsCommand::redo() {
+    apply(m_to);
+}
+void MovePartsCommand::undo() {
+    apply(m_from);
+}
+int MovePartsCommand::id() const {
+    return kMovePartsId;
+}
 
 bool MovePartsCommand::mergeWith(const QUndoCommand* other) {
     const auto* o = static_cast<const MovePartsCommand*>(other);
