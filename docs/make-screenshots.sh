@@ -3,7 +3,7 @@
 # guide. Run after a build: bash docs/make-screenshots.sh
 set -euo pipefail
 cd "$(dirname "$0")/.."
-bin=build/release/app/lineward
+bin=.build/release/app/lineward
 export QT_QPA_PLATFORM=offscreen
 export XDG_DATA_HOME="$(mktemp -d)"   # a clean settings/recovery folder for the shots
 "$bin" samples/kestrel-mill-mcc1.lineward --screenshot docs/images/editor-clean-sample.png

@@ -93,7 +93,6 @@ void loadFlow(StudyResults& r, const LoadFlowSolver& y) {
 }
 
 void originVoltages(StudyResults& r, const Network& net, const Flow& flow) {
-    const auto& g = net.graph();
     const Drawing& d = net.drawing();
     r.originVoltagePu.assign(static_cast<std::size_t>(r.model.busCount()), 1.0);
     for (std::size_t node = 0; node < net.nodeCount(); ++node) {
@@ -111,7 +110,6 @@ void originVoltages(StudyResults& r, const Network& net, const Flow& flow) {
         const int ob = r.model.busOfNode[v];
         r.originVoltagePu[static_cast<std::size_t>(bus)] =
             ob >= 0 ? std::abs(r.voltage[static_cast<std::size_t>(ob)]) : 1.0;
-        (void)g;
     }
 }
 
