@@ -15,11 +15,6 @@
 
 namespace lineward::ui {
 
-/// Everything one check produced, shared read-only with the panels.
-struct CheckState {
-    CheckReport report;
-    std::shared_ptr<const Drawing> drawing; ///< the drawing the report is about
-};
 
 /// Owns the Drawing of one window; re-checks it through the core after every change.
 class Document : public QObject {
