@@ -2,6 +2,7 @@
 #include "curves_panel.h"
 
 #include "curves_plot.h"
+#include "guard.h"
 
 #include <QPainter>
 
@@ -10,7 +11,8 @@ namespace lineward::ui {
 CurvesPanel::CurvesPanel(Document& doc, QWidget* parent) : QWidget(parent), m_doc(doc) {
     setObjectName("curves");
     setMinimumSize(420, 260);
-    connect(&doc, &Document::reportChanged, this, &CurvesPanel::refresh);
+    connect(&doc, &Document::reportChanged, this,
+            guarded(this, tr("Drawing the curves"), [this] { refresh(); }));
     connect(&doc, &Document::drawingReset, this, [this] { showPart(std::nullopt); });
 }
 

@@ -3,6 +3,7 @@
 #include "document.h"
 
 #include "io/drawing_file.h"
+#include "rules/rule_catalog.h"
 
 #include <QCoreApplication>
 #include <QEventLoop>
@@ -13,8 +14,26 @@
 
 namespace lineward::ui {
 
+namespace {
+// The check never ends the program, on the GUI thread or a worker: an exception that escapes
+// the core (which already turns a failing rule family into a finding) becomes a finding too.
+CheckReport checkSafely(const Drawing& d, const Tables& tables) {
+    try {
+        return checkDrawing(d, tables);
+    } catch (const std::exception& e) {
+        spdlog::error("check failed: {}", e.what());
+        CheckReport r;
+        r.findings.push_back(
+            makeFinding("check.incomplete", {}, std::string("the check stopped: ") + e.what()));
+        r.openCounts[static_cast<std::size_t>(Severity::Violation)] = 1;
+        return r;
+    }
+}
+} // namespace
+
 Document::Document(std::shared_ptr<const Tables> tables, QObject* parent)
     : QObject(parent), m_tables(std::move(tables)) {
+    connect(&m_undo, &QUndoStack::cleanChanged, this, &Document::modifiedChanged);
     startCheck();
 }
 
@@ -36,7 +55,9 @@ QString Document::saveAs(const QString& path) {
     if (auto why = io::saveDrawing(m_drawing, path.toStdString()))
         return QString::fromStdString(*why);
     m_path = path;
+    m_recovered = false;
     m_undo.setClean();
+    emit modifiedChanged();
     spdlog::info("saved {}", path.toStdString());
     return {};
 }
@@ -44,9 +65,17 @@ QString Document::saveAs(const QString& path) {
 void Document::reset(Drawing drawing, const QString& path) {
     m_drawing = std::move(drawing);
     m_path = path;
+    m_recovered = false;
     m_undo.clear();
     emit drawingReset();
+    emit modifiedChanged();
     startCheck();
+}
+
+void Document::resetRecovered(Drawing drawing, const QString& originalPath) {
+    reset(std::move(drawing), originalPath);
+    m_recovered = true;
+    emit modifiedChanged();
 }
 
 void Document::addPart(const Part& part) {
@@ -131,14 +160,14 @@ void Document::changed() {
 void Document::startCheck() {
     const quint64 gen = ++m_generation;
     if (m_drawing.parts().size() < kBackgroundParts) {
-        finishCheck(gen, checkDrawing(m_drawing, *m_tables));
+        finishCheck(gen, checkSafely(m_drawing, *m_tables));
         return;
     }
     auto copy = std::make_shared<const Drawing>(m_drawing);
     auto tables = m_tables;
     ++m_running;
     std::thread([this, copy, tables, gen] {
-        CheckReport r = checkDrawing(*copy, *tables);
+        CheckReport r = checkSafely(*copy, *tables);
         QMetaObject::invokeMethod(
             this, [this, gen, r = std::move(r)]() mutable { finishCheck(gen, std::move(r)); },
             Qt::QueuedConnection);

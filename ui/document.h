@@ -29,7 +29,10 @@ public:
     std::shared_ptr<const Tables> sharedTables() const { return m_tables; }
     const QString& filePath() const { return m_path; }
     QUndoStack& undoStack() { return m_undo; }
-    bool isModified() const { return !m_undo.isClean(); }
+    /// Unsaved changes: edits since the last save, or a drawing recovered after a crash.
+    bool isModified() const { return m_recovered || !m_undo.isClean(); }
+    /// True for a drawing brought back from the recovery folder and not yet saved.
+    bool isRecovered() const { return m_recovered; }
 
     /// Loads a file; on failure returns the message (file:line:column: what) and keeps the
     /// current drawing.
@@ -38,6 +41,9 @@ public:
     QString saveAs(const QString& path);
     /// Replaces the drawing (New, recovery); clears the undo stack.
     void reset(Drawing drawing, const QString& path = {});
+    /// Replaces the drawing by one recovered after a crash: it keeps the name of its own file
+    /// (if it had one) and stays modified until saved.
+    void resetRecovered(Drawing drawing, const QString& originalPath);
 
     // --- edits, called by commands only ---
     void addPart(const Part& part);
@@ -67,6 +73,8 @@ signals:
     void sheetChanged();
     /// A new check report is available.
     void reportChanged();
+    /// The modified state changed (an edit, undo to the saved state, a save).
+    void modifiedChanged();
 
 private:
     void changed();
@@ -77,6 +85,7 @@ private:
     Drawing m_drawing;
     CheckReport m_report;
     QString m_path;
+    bool m_recovered = false;
     QUndoStack m_undo;
     quint64 m_generation = 0;
     std::atomic<int> m_running{0};

@@ -46,6 +46,8 @@ FindingsPanel::FindingsPanel(Document& doc, QWidget* parent)
     m_list->setObjectName("findingsList");
     m_detail->setObjectName("findingDetail");
     m_apply->setObjectName("applyFix");
+    m_rule->setObjectName("findingsFilter");
+    m_severity->setObjectName("findingsSeverity");
     m_severity->addItems({tr("All severities"), tr("Violations"), tr("Violations and cautions")});
     m_rule->setPlaceholderText(tr("Filter by rule or text"));
     m_rule->setClearButtonEnabled(true);

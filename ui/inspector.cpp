@@ -1,6 +1,9 @@
-// Inspector: rebuilt for the selected part; each editor checks its text with the core's own
-// field validation before anything is applied.
+// Inspector: built once for the selected part, then updated in place. Each editor checks its
+// text with the core's own field validation (messages name the rating by label and unit)
+// before anything is applied.
 #include "inspector.h"
+
+#include "guard.h"
 
 #include <QCheckBox>
 #include <QComboBox>
@@ -9,16 +12,54 @@
 #include <QLineEdit>
 #include <QScrollArea>
 #include <QVBoxLayout>
+#include <cmath>
 
 namespace lineward::ui {
+
+namespace {
+
+QString qs(std::string_view s) {
+    return QString::fromUtf8(s.data(), static_cast<int>(s.size()));
+}
+
+QString peopleName(const FieldSpec& spec) {
+    return QString::fromStdString(fieldName(spec, FieldNaming::People));
+}
+
+// The number as people edit it: in the shown unit, without binary noise (13.8 kV → 13800).
+QString shownNumber(const FieldSpec& spec, double v) {
+    double shown = v * spec.shownScale;
+    if (spec.shownScale != 1.0)
+        shown = std::round(shown * 1e6) / 1e6;
+    return QString::fromStdString(formatNumber(shown));
+}
+
+QString shownText(const FieldSpec& spec, const FieldValue& v) {
+    if (auto d = std::get_if<double>(&v))
+        return shownNumber(spec, *d);
+    if (auto s = std::get_if<std::string>(&v))
+        return QString::fromStdString(*s);
+    return {};
+}
+
+constexpr const char* kRefusedStyle = "color: #b23a1e;";
+
+} // namespace
 
 Inspector::Inspector(Document& doc, QWidget* parent)
     : QWidget(parent), m_doc(doc), m_form(new QFormLayout), m_title(new QLabel),
       m_message(new QLabel) {
     setObjectName("inspector");
+    m_title->setObjectName("inspectorTitle");
+    m_title->setTextFormat(Qt::PlainText); // the tag comes from the file
+    QFont bold = m_title->font();
+    bold.setBold(true);
+    m_title->setFont(bold);
     m_message->setObjectName("inspectorMessage");
+    m_message->setTextFormat(Qt::PlainText);
     m_message->setWordWrap(true);
-    m_message->setStyleSheet("color: #b23a1e;");
+    m_message->setStyleSheet(kRefusedStyle);
+    m_form->setFieldGrowthPolicy(QFormLayout::AllNonFixedFieldsGrow);
     auto* inner = new QWidget;
     inner->setLayout(m_form);
     auto* scroll = new QScrollArea;
@@ -28,147 +69,318 @@ Inspector::Inspector(Document& doc, QWidget* parent)
     lay->addWidget(m_title);
     lay->addWidget(scroll, 1);
     lay->addWidget(m_message);
+    setMinimumWidth(360);
     connect(&doc, &Document::partChanged, this, [this](PartId id) {
         if (m_part && *m_part == id)
-            rebuild();
+            if (const Part* p = current())
+                refreshValues(*p);
     });
     connect(&doc, &Document::partRemoved, this, [this](PartId id) {
         if (m_part && *m_part == id)
             showPart(std::nullopt);
     });
     connect(&doc, &Document::drawingReset, this, [this] { showPart(std::nullopt); });
-    rebuild();
+    showPart(std::nullopt);
 }
 
-QString Inspector::message() const {
-    return m_message->text();
+QSize Inspector::sizeHint() const {
+    return {400, 600};
+}
+
+const Part* Inspector::current() const {
+    return m_part ? m_doc.drawing().part(*m_part) : nullptr;
 }
 
 void Inspector::showPart(std::optional<PartId> id) {
-    m_part = id;
+    const Part* p = id ? m_doc.drawing().part(*id) : nullptr;
+    if (p && m_part == id && m_formKind == p->kind) {
+        refreshValues(*p);
+        return;
+    }
+    clearForm(); // before the part changes: nothing of the old form may reach the new part
+    m_part = p ? id : std::nullopt;
     m_message->clear();
-    rebuild();
+    if (!p) {
+        m_title->setText(tr("Select a part to see its ratings."));
+        return;
+    }
+    buildForm(*p);
 }
 
-QString Inspector::validate(const std::string& key, const QString& text, Part& trial) const {
-    if (key == "tag") {
-        if (text.trimmed().isEmpty())
-            return tr("tag must not be empty");
-        if (text.size() > 200)
-            return tr("tag is longer than 200 characters");
-        trial.tag = text.trimmed().toStdString();
-        return {};
+void Inspector::clearForm() {
+    // deleteLater, never delete: this may run inside a signal of one of these editors.
+    while (m_form->rowCount() > 0) {
+        const auto row = m_form->takeRow(0);
+        for (QLayoutItem* item : {row.labelItem, row.fieldItem}) {
+            if (!item)
+                continue;
+            if (QWidget* w = item->widget()) {
+                w->disconnect(this); // hiding a focused editor emits editingFinished
+                w->hide();
+                w->deleteLater();
+            }
+            delete item;
+        }
     }
-    const FieldSpec* spec = findField(trial.kind, key);
-    if (!spec)
-        return tr("no rating %1").arg(QString::fromStdString(key));
-    FieldValue v;
+    m_rows.clear();
+    m_formKind.reset();
+}
+
+void Inspector::buildForm(const Part& p) {
+    m_formKind = p.kind;
+    const auto& info = kindInfo(p.kind);
+    auto* tag = new QLineEdit;
+    tag->setObjectName("field_tag");
+    m_rows.push_back(Row{});
+    m_rows.back().edit = tag;
+    connect(tag, &QLineEdit::editingFinished, this, guarded(this, tr("Renaming the part"), [this, tag] {
+                if (!tag->isModified())
+                    return;
+                tag->setModified(false);
+                commitTag(tag->text());
+            }));
+    m_form->addRow(tr("Tag"), tag);
+    for (const auto& spec : info.fields) {
+        const FieldAlternative* pair = nullptr;
+        for (const auto& alt : info.alternatives)
+            if (alt.first == spec.key || alt.second == spec.key)
+                pair = &alt;
+        if (pair && pair->second == spec.key)
+            continue; // edited together with the first of the pair
+        Row row;
+        row.spec = &spec;
+        row.pair = pair;
+        m_rows.push_back(row);
+        const std::size_t index = m_rows.size() - 1;
+        if (pair) {
+            QWidget* edit = makePairRow(index);
+            m_form->addRow(m_rows[index].pairBox, edit);
+            continue;
+        }
+        QWidget* editor = spec.type == FieldType::Choice ? makeChoiceRow(index)
+                          : spec.type == FieldType::Flag ? makeFlagRow(index)
+                                                         : makeTextRow(index);
+        auto* label = new QLabel(peopleName(spec));
+        label->setTextFormat(Qt::PlainText);
+        label->setToolTip(qs(spec.help));
+        m_form->addRow(label, editor);
+    }
+    refreshValues(p);
+}
+
+QWidget* Inspector::makeTextRow(std::size_t index) {
+    Row& row = m_rows[index];
+    auto* edit = new QLineEdit;
+    edit->setObjectName("field_" + qs(row.spec->key));
+    edit->setToolTip(qs(row.spec->help));
+    row.edit = edit;
+    connect(edit, &QLineEdit::textEdited, this, [this, index] { onTextEdited(index); });
+    connect(edit, &QLineEdit::editingFinished, this,
+            guarded(this, tr("Changing a rating"), [this, index] { onTextCommitted(index); }));
+    return edit;
+}
+
+QWidget* Inspector::makeChoiceRow(std::size_t index) {
+    Row& row = m_rows[index];
+    auto* box = new QComboBox;
+    box->setObjectName("field_" + qs(row.spec->key));
+    if (!row.spec->required)
+        box->addItem(tr("(none)"), QString());
+    for (auto c : row.spec->choices)
+        box->addItem(qs(choiceLabel(c)), qs(c));
+    row.combo = box;
+    const std::string_view key = row.spec->key;
+    connect(box, &QComboBox::activated, this,
+            guarded(this, tr("Changing a rating"), [this, key, box](int i) {
+                const QString word = box->itemData(i).toString();
+                FieldValue v = word.isEmpty() ? FieldValue{} : FieldValue{word.toStdString()};
+                commit({{key, v}}, peopleName(*findField(*m_formKind, key)));
+            }));
+    return box;
+}
+
+QWidget* Inspector::makeFlagRow(std::size_t index) {
+    Row& row = m_rows[index];
+    auto* check = new QCheckBox;
+    check->setObjectName("field_" + qs(row.spec->key));
+    row.check = check;
+    const std::string_view key = row.spec->key;
+    // clicked, not toggled: refreshing the box from the model must not commit.
+    connect(check, &QCheckBox::clicked, this,
+            guarded(this, tr("Changing a rating"), [this, key](bool on) {
+                commit({{key, FieldValue{on}}}, peopleName(*findField(*m_formKind, key)));
+            }));
+    return check;
+}
+
+QWidget* Inspector::makePairRow(std::size_t index) {
+    Row& row = m_rows[index];
+    const QString name = qs(row.pair->first) + "_or_" + qs(row.pair->second);
+    auto* box = new QComboBox;
+    box->setObjectName("pair_" + name);
+    for (auto key : {row.pair->first, row.pair->second})
+        box->addItem(peopleName(*findField(*m_formKind, key)));
+    box->setToolTip(tr("Give one of the two; choosing the other clears this one"));
+    row.pairBox = box;
+    auto* edit = new QLineEdit;
+    edit->setObjectName("field_" + name);
+    row.edit = edit;
+    connect(box, &QComboBox::activated, this, [this, index](int i) {
+        Row& r = m_rows[index];
+        if (r.pairChoice == i)
+            return;
+        // Switching the quantity asks for its value; the model changes when it is entered,
+        // in one edit that also clears the other.
+        r.pairChoice = i;
+        r.edit->clear();
+        r.edit->setModified(true);
+        r.edit->setPlaceholderText(tr("type the %1").arg(r.pairBox->itemText(i)));
+        r.edit->setFocus(Qt::OtherFocusReason);
+    });
+    connect(edit, &QLineEdit::textEdited, this, [this, index] { onTextEdited(index); });
+    connect(edit, &QLineEdit::editingFinished, this,
+            guarded(this, tr("Changing a rating"), [this, index] { onTextCommitted(index); }));
+    return edit;
+}
+
+std::string_view Inspector::rowKey(const Row& row) const {
+    if (row.pair)
+        return row.pairChoice == 0 ? row.pair->first : row.pair->second;
+    return row.spec->key;
+}
+
+QString Inspector::parseRow(const Row& row, const QString& text,
+                            std::vector<std::pair<std::string_view, FieldValue>>& changes) const {
+    const std::string_view key = rowKey(row);
+    const FieldSpec& spec = *findField(*m_formKind, key);
     const QString t = text.trimmed();
-    if (t.isEmpty()) {
-        v = FieldValue{};
-    } else if (spec->type == FieldType::Number || spec->type == FieldType::Integer) {
+    FieldValue v;
+    if (!t.isEmpty() && (spec.type == FieldType::Number || spec.type == FieldType::Integer)) {
         bool ok = false;
         const double d = QLocale::c().toDouble(t, &ok);
         if (!ok)
-            return tr("%1: '%2' is not a number")
-                .arg(QString::fromUtf8(spec->key.data(), static_cast<int>(spec->key.size())), t);
-        v = d;
-    } else if (spec->type == FieldType::Flag) {
-        v = (t == "true" || t == "yes" || t == "1");
-    } else {
+            return tr("%1: '%2' is not a number").arg(peopleName(spec), t);
+        v = d / spec.shownScale;
+    } else if (!t.isEmpty()) {
         v = t.toStdString();
     }
-    if (auto why = trial.set(key, v))
-        return QString::fromStdString(*why);
+    changes.emplace_back(key, v);
+    if (row.pair)
+        changes.emplace_back(row.pairChoice == 0 ? row.pair->second : row.pair->first,
+                             FieldValue{});
     return {};
 }
 
-QString Inspector::commit(const std::string& key, const QString& text) {
-    if (!m_part || !m_doc.drawing().part(*m_part))
+void Inspector::onTextEdited(std::size_t index) {
+    const Part* p = current();
+    if (!p || index >= m_rows.size() || !m_rows[index].spec)
+        return;
+    Row& row = m_rows[index];
+    std::vector<std::pair<std::string_view, FieldValue>> changes;
+    QString why = parseRow(row, row.edit->text(), changes);
+    if (why.isEmpty()) {
+        Part trial = *p;
+        if (auto refused = trial.set(changes, FieldNaming::People))
+            why = QString::fromStdString(*refused);
+    }
+    row.edit->setStyleSheet(why.isEmpty() ? QString() : kRefusedStyle);
+    m_message->setText(why);
+}
+
+void Inspector::onTextCommitted(std::size_t index) {
+    if (index >= m_rows.size())
+        return;
+    Row& row = m_rows[index];
+    QLineEdit* edit = row.edit;
+    if (!edit->isModified())
+        return; // Enter then focus-out: committed once
+    edit->setModified(false);
+    std::vector<std::pair<std::string_view, FieldValue>> changes;
+    const QString why = parseRow(row, edit->text(), changes);
+    if (!why.isEmpty()) {
+        m_message->setText(tr("Refused: %1").arg(why));
+        return;
+    }
+    commit(changes, peopleName(*findField(*m_formKind, rowKey(row))));
+}
+
+QString Inspector::commit(const std::vector<std::pair<std::string_view, FieldValue>>& changes,
+                          const QString& what) {
+    const Part* p = current();
+    if (!p)
         return tr("no part selected");
-    Part trial = *m_doc.drawing().part(*m_part);
-    const QString why = validate(key, text, trial);
+    Part trial = *p;
+    if (auto why = trial.set(changes, FieldNaming::People)) {
+        m_message->setText(tr("Refused: %1").arg(QString::fromStdString(*why)));
+        return QString::fromStdString(*why);
+    }
+    m_message->clear();
+    if (!(trial == *p))
+        emit editRequested(trial, tr("Set %1 of %2").arg(what, QString::fromStdString(trial.tag)));
+    // The edit may have been refused further up, or changed nothing: show the model's values.
+    if (const Part* now = current())
+        refreshValues(*now);
+    return {};
+}
+
+QString Inspector::commitTag(const QString& text) {
+    const Part* p = current();
+    if (!p)
+        return tr("no part selected");
+    QString why;
+    const QString t = text.trimmed();
+    if (t.isEmpty())
+        why = tr("the tag must not be empty");
+    else if (t.size() > 200)
+        why = tr("the tag is longer than 200 characters");
     if (!why.isEmpty()) {
         m_message->setText(tr("Refused: %1").arg(why));
         return why;
     }
     m_message->clear();
-    if (!(trial == *m_doc.drawing().part(*m_part)))
-        emit editRequested(
-            trial,
-            tr("Set %1 of %2").arg(QString::fromStdString(key), QString::fromStdString(trial.tag)));
+    Part trial = *p;
+    trial.tag = t.toStdString();
+    if (!(trial == *p))
+        emit editRequested(trial, tr("Rename %1 to %2")
+                                      .arg(QString::fromStdString(p->tag), t));
+    if (const Part* now = current())
+        refreshValues(*now);
     return {};
 }
 
-QWidget* Inspector::editorFor(const FieldSpec& spec, const Part& p) {
-    const std::string key(spec.key);
-    const FieldValue& v = p.value(spec.key);
-    if (spec.type == FieldType::Choice) {
-        auto* box = new QComboBox;
-        if (!spec.required)
-            box->addItem(QString());
-        for (auto c : spec.choices)
-            box->addItem(QString::fromUtf8(c.data(), static_cast<int>(c.size())));
-        if (auto s = std::get_if<std::string>(&v))
-            box->setCurrentText(QString::fromStdString(*s));
-        connect(box, &QComboBox::activated, this,
-                [this, key, box] { commit(key, box->currentText()); });
-        return box;
-    }
-    if (spec.type == FieldType::Flag) {
-        auto* check = new QCheckBox;
-        check->setChecked(std::holds_alternative<bool>(v) && std::get<bool>(v));
-        connect(check, &QCheckBox::toggled, this,
-                [this, key](bool on) { commit(key, on ? "true" : "false"); });
-        return check;
-    }
-    auto* edit = new QLineEdit;
-    if (auto d = std::get_if<double>(&v))
-        edit->setText(QString::fromStdString(formatNumber(*d)));
-    else if (auto s = std::get_if<std::string>(&v))
-        edit->setText(QString::fromStdString(*s));
-    edit->setObjectName(QString::fromStdString("field_" + key));
-    edit->setToolTip(QString::fromUtf8(spec.help.data(), static_cast<int>(spec.help.size())));
-    // Validation as typed: the text turns red with the reason while it would be refused.
-    connect(edit, &QLineEdit::textEdited, this, [this, key, edit](const QString& text) {
-        Part trial = *m_doc.drawing().part(*m_part);
-        const QString why = validate(key, text, trial);
-        edit->setStyleSheet(why.isEmpty() ? QString() : "color: #b23a1e;");
-        m_message->setText(why.isEmpty() ? QString() : why);
-    });
-    connect(edit, &QLineEdit::editingFinished, this, [this, key, edit] {
-        if (edit->isModified())
-            commit(key, edit->text());
-        edit->setModified(false);
-    });
-    return edit;
+void Inspector::refreshValues(const Part& p) {
+    m_title->setText(QString::fromStdString(p.tag) + " — " + qs(kindInfo(p.kind).name));
+    for (Row& row : m_rows)
+        refreshRow(row, p);
 }
 
-void Inspector::rebuild() {
-    while (m_form->rowCount() > 0)
-        m_form->removeRow(0);
-    const Part* p = m_part ? m_doc.drawing().part(*m_part) : nullptr;
-    if (!p) {
-        m_title->setText(tr("Select a part to see its ratings."));
+void Inspector::refreshRow(Row& row, const Part& p) {
+    if (!row.spec) { // the tag
+        if (!row.edit->isModified() && row.edit->text() != QString::fromStdString(p.tag))
+            row.edit->setText(QString::fromStdString(p.tag));
         return;
     }
-    m_title->setText("<b>" + QString::fromStdString(p->tag).toHtmlEscaped() + "</b> — " +
-                     QString::fromUtf8(kindInfo(p->kind).name.data(),
-                                       static_cast<int>(kindInfo(p->kind).name.size())));
-    auto* tag = new QLineEdit(QString::fromStdString(p->tag));
-    tag->setObjectName("field_tag");
-    connect(tag, &QLineEdit::editingFinished, this, [this, tag] {
-        if (tag->isModified())
-            commit("tag", tag->text());
-        tag->setModified(false);
-    });
-    m_form->addRow(tr("Tag"), tag);
-    for (const auto& spec : kindInfo(p->kind).fields) {
-        QString label = QString::fromUtf8(spec.label.data(), static_cast<int>(spec.label.size()));
-        if (!spec.unit.empty())
-            label += " (" +
-                     QString::fromUtf8(spec.unit.data(), static_cast<int>(spec.unit.size())) + ")";
-        m_form->addRow(label, editorFor(spec, *p));
+    if (row.pair && !row.edit->isModified()) {
+        if (p.number(row.pair->second) && !p.number(row.pair->first))
+            row.pairChoice = 1;
+        else if (p.number(row.pair->first))
+            row.pairChoice = 0;
+        row.pairBox->setCurrentIndex(row.pairChoice);
+        row.edit->setPlaceholderText({});
+    }
+    const FieldSpec& spec = *findField(p.kind, rowKey(row));
+    const FieldValue& v = p.value(spec.key);
+    if (row.edit && !row.edit->isModified()) {
+        const QString text = shownText(spec, v);
+        if (row.edit->text() != text)
+            row.edit->setText(text);
+        row.edit->setStyleSheet({});
+    } else if (row.combo) {
+        const auto* s = std::get_if<std::string>(&v);
+        const int i = row.combo->findData(s ? QString::fromStdString(*s) : QString());
+        row.combo->setCurrentIndex(i);
+    } else if (row.check) {
+        row.check->setChecked(std::holds_alternative<bool>(v) && std::get<bool>(v));
     }
 }
 

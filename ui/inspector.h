@@ -1,37 +1,71 @@
-// Inspector: the selected part's tag and ratings, each with its unit, validated as typed. A
-// refused value shows why and is not applied.
+// Inspector: the selected part's tag and ratings, each with its label and unit, validated as
+// typed. A refused value shows why and is not applied.
 #pragma once
 
 #include "document.h"
 
 #include <QWidget>
 
+class QCheckBox;
+class QComboBox;
 class QFormLayout;
 class QLabel;
+class QLineEdit;
 
 namespace lineward::ui {
 
+/// Edits one part. The form is built once per selected part and updated in place after each
+/// edit, so an editor is never deleted while its own signal runs (a commit re-checks the
+/// drawing and emits partChanged from inside the editor's editingFinished).
 class Inspector : public QWidget {
     Q_OBJECT
 public:
     explicit Inspector(Document& doc, QWidget* parent = nullptr);
     /// Shows this part (or nothing).
     void showPart(std::optional<PartId> id);
-    /// The last refusal message (empty when the last edit was accepted).
-    QString message() const;
-    /// Offers `text` for `key` as if typed and committed; returns the refusal, if any.
-    QString commit(const std::string& key, const QString& text);
+    QSize sizeHint() const override;
 
 signals:
     /// An accepted edit: the part as it should become.
     void editRequested(lineward::Part after, QString description);
 
 private:
-    void rebuild();
-    QWidget* editorFor(const FieldSpec& spec, const Part& p);
-    QString validate(const std::string& key, const QString& text, Part& trial) const;
+    /// One row of the form: the editor for a rating, a choice, a flag or an either-or pair.
+    struct Row {
+        const FieldSpec* spec = nullptr; ///< nothing for the tag row
+        const FieldAlternative* pair = nullptr;
+        int pairChoice = 0; ///< 0: pair->first, 1: pair->second
+        QLineEdit* edit = nullptr;
+        QComboBox* combo = nullptr;
+        QCheckBox* check = nullptr;
+        QComboBox* pairBox = nullptr;
+    };
+
+    void buildForm(const Part& p);
+    void clearForm();
+    void refreshValues(const Part& p);
+    void refreshRow(Row& row, const Part& p);
+    QWidget* makeTextRow(std::size_t index);
+    QWidget* makeChoiceRow(std::size_t index);
+    QWidget* makeFlagRow(std::size_t index);
+    QWidget* makePairRow(std::size_t index);
+    void onTextCommitted(std::size_t index);
+    void onTextEdited(std::size_t index);
+    /// The key a row's text edits (for a pair, the chosen one of the two).
+    std::string_view rowKey(const Row& row) const;
+    /// The changes that typing `text` into the row asks for, or the reason it is refused.
+    QString parseRow(const Row& row, const QString& text,
+                     std::vector<std::pair<std::string_view, FieldValue>>& changes) const;
+    /// Applies the changes to a copy of the part and asks for the edit; returns the refusal.
+    QString commit(const std::vector<std::pair<std::string_view, FieldValue>>& changes,
+                   const QString& what);
+    QString commitTag(const QString& text);
+    const Part* current() const;
+
     Document& m_doc;
     std::optional<PartId> m_part;
+    std::optional<PartKind> m_formKind;
+    std::vector<Row> m_rows;
     QFormLayout* m_form;
     QLabel* m_title;
     QLabel* m_message;

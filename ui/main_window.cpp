@@ -8,6 +8,7 @@
 #include "commands/move_parts_command.h"
 #include "commands/set_fields_command.h"
 #include "curves_panel.h"
+#include "guard.h"
 #include "findings_panel.h"
 #include "inspector.h"
 #include "io/drawing_file.h"
@@ -35,7 +36,7 @@
 #include <QSettings>
 #include <QStatusBar>
 #include <QTimer>
-#include <QUuid>
+#include <QScrollBar>
 
 namespace lineward::ui {
 
@@ -57,7 +58,7 @@ MainWindow::MainWindow(std::shared_ptr<const Tables> tables, QWidget* parent)
         return d;
     };
     dock(m_palette, tr("Parts"), "partsDock", Qt::LeftDockWidgetArea);
-    dock(m_inspector, tr("Inspector"), "inspectorDock", Qt::RightDockWidgetArea);
+    auto* inspectorDock = dock(m_inspector, tr("Inspector"), "inspectorDock", Qt::RightDockWidgetArea);
     auto* f = dock(m_findings, tr("Findings"), "findingsDock", Qt::BottomDockWidgetArea);
     auto* s = dock(m_schedules, tr("Schedules"), "schedulesDock", Qt::BottomDockWidgetArea);
     auto* c = dock(m_curves, tr("Curves"), "curvesDock", Qt::BottomDockWidgetArea);
@@ -65,39 +66,48 @@ MainWindow::MainWindow(std::shared_ptr<const Tables> tables, QWidget* parent)
     tabifyDockWidget(s, c);
     f->raise();
     resizeDocks({f}, {240}, Qt::Vertical);
+    resizeDocks({inspectorDock}, {400}, Qt::Horizontal); // wide enough to read every value
     m_counts->setObjectName("severityCounts");
     statusBar()->addPermanentWidget(m_counts);
 
     connect(&m_doc, &Document::reportChanged, this, &MainWindow::refreshStatus);
-    connect(&m_doc.undoStack(), &QUndoStack::cleanChanged, this, &MainWindow::refreshTitle);
     connect(m_findings, &FindingsPanel::locatePart, this, &MainWindow::locate);
-    connect(m_findings, &FindingsPanel::applyFixRequested, this, [this](const Finding& fnd) {
-        if (auto why = applyFix(fnd); !why.isEmpty())
-            QMessageBox::warning(this, tr("Cannot apply fix"), why);
-    });
+    connect(m_findings, &FindingsPanel::applyFixRequested, this,
+            guarded(this, tr("Apply fix"), [this](const Finding& fnd) {
+                if (auto why = applyFix(fnd); !why.isEmpty())
+                    plainMessage(this, QMessageBox::Warning, tr("Cannot apply fix"), why);
+            }));
     connect(m_palette, &PartsPalette::kindChosen, m_view,
             [this](PartKind k) { m_view->setPlaceKind(k); });
     connect(m_view, &SheetView::placeRequested, this,
-            [this](PartKind k, QPointF at) { placePart(k, at); });
-    connect(m_view, &SheetView::connectRequested, this, &MainWindow::connectTerminals);
+            guarded(this, tr("Placing a part"), [this](PartKind k, QPointF at) { placePart(k, at); }));
+    connect(m_view, &SheetView::connectRequested, this,
+            guarded(this, tr("Connecting"), [this](WireEnd a, WireEnd b) { connectTerminals(a, b); }));
     connect(m_view, &SheetView::moveFinished, this,
-            [this](std::vector<PartId> ids, std::vector<QPointF> from, std::vector<QPointF> to) {
-                m_doc.undoStack().push(new MovePartsCommand(m_doc, ids, from, to));
-            });
-    connect(m_view, &SheetView::filesDropped, this, [this](QStringList files) {
-        if (maybeSave())
-            openFile(files.first());
-    });
-    connect(m_inspector, &Inspector::editRequested, this, [this](Part after, QString text) {
-        m_doc.undoStack().push(new SetFieldsCommand(m_doc, {after}, text));
-    });
-    connect(m_scene, &QGraphicsScene::selectionChanged, this, &MainWindow::selectionChanged);
+            guarded(this, tr("Moving parts"),
+                    [this](std::vector<PartId> ids, std::vector<QPointF> from,
+                           std::vector<QPointF> to) {
+                        m_doc.undoStack().push(new MovePartsCommand(m_doc, ids, from, to));
+                    }));
+    connect(m_view, &SheetView::filesDropped, this,
+            guarded(this, tr("Opening a dropped file"), [this](QStringList files) {
+                if (maybeSave())
+                    openFile(files.first());
+            }));
+    connect(m_inspector, &Inspector::editRequested, this,
+            guarded(this, tr("Changing a rating"), [this](Part after, QString text) {
+                m_doc.undoStack().push(new SetFieldsCommand(m_doc, {after}, text));
+            }));
+    connect(&m_doc, &Document::modifiedChanged, this, &MainWindow::refreshTitle);
+    connect(m_scene, &QGraphicsScene::selectionChanged, this,
+            guarded(this, tr("Showing the selection"), [this] { selectionChanged(); }));
 
     buildActions();
-    m_recoveryPath = QString::fromStdString((userDataDir() / "recovery").string()) + "/" +
-                     QUuid::createUuid().toString(QUuid::WithoutBraces) + ".lineward";
-    connect(m_autosave, &QTimer::timeout, this, &MainWindow::autosave);
-    m_autosave->start(60 * 1000);
+    m_recovery = std::make_unique<RecoverySlot>();
+    connect(m_autosave, &QTimer::timeout, this, guarded(this, tr("Autosave"), [this] { autosave(); }));
+    bool ok = false;
+    const int seconds = qEnvironmentVariableIntValue("LINEWARD_AUTOSAVE_SECONDS", &ok);
+    m_autosave->start((ok && seconds > 0 ? seconds : 60) * 1000);
     QSettings settings;
     restoreGeometry(settings.value("window/geometry").toByteArray());
     restoreState(settings.value("window/state").toByteArray());
@@ -115,30 +125,35 @@ MainWindow::~MainWindow() {
         child->disconnect(this);
     m_doc.disconnect(this);
     m_doc.undoStack().disconnect(this);
-    QFile::remove(m_recoveryPath);
+    // A window that ends normally leaves nothing to recover (its drawing was saved or the user
+    // discarded it in closeEvent); a crash skips this and leaves the slot for the next start.
+    m_recovery->remove();
 }
 
 QString MainWindow::recoveryPath() const {
-    return m_recoveryPath;
+    return m_recovery->drawingPath();
 }
 
 void MainWindow::autosave() {
     if (!m_doc.isModified())
         return;
-    QDir().mkpath(QFileInfo(m_recoveryPath).path());
-    if (auto why = saveTo(m_recoveryPath); !why.isEmpty())
+    // The recovery copy does not change the document's own path or modified state.
+    if (auto why = m_recovery->write(m_doc.drawing(), m_doc.filePath()); !why.isEmpty())
         statusBar()->showMessage(tr("Autosave failed: %1").arg(why), 10000);
 }
 
+void MainWindow::adoptRecovered(Drawing drawing, const QString& slotPath,
+                                const QString& originalPath) {
+    m_doc.resetRecovered(std::move(drawing), originalPath);
+    m_recovery->adopt(slotPath);
+    refreshTitle();
+    m_view->fitInView(m_scene->itemsBoundingRect().adjusted(-20, -20, 20, 20), Qt::KeepAspectRatio);
+}
+
 QString MainWindow::saveTo(const QString& path) {
-    // The recovery copy must not change the document's own path or clean state.
-    if (path == m_recoveryPath) {
-        if (auto why = io::saveDrawing(m_doc.drawing(), path.toStdString()))
-            return QString::fromStdString(*why);
-        return {};
-    }
     const QString why = m_doc.saveAs(path);
     if (why.isEmpty()) {
+        m_recovery->remove(); // saved: no stale offer at the next start
         addRecent(path);
         refreshTitle();
     }
@@ -149,9 +164,10 @@ QString MainWindow::openFile(const QString& path, bool quiet) {
     const QString why = m_doc.open(path);
     if (!why.isEmpty()) {
         if (!quiet)
-            QMessageBox::warning(this, tr("Cannot open drawing"), why);
+            plainMessage(this, QMessageBox::Warning, tr("Cannot open drawing"), why);
         return why;
     }
+    m_recovery->remove();
     addRecent(path);
     refreshTitle();
     m_view->fitInView(m_scene->itemsBoundingRect().adjusted(-20, -20, 20, 20), Qt::KeepAspectRatio);
@@ -213,8 +229,18 @@ QString MainWindow::applyFix(const Finding& f) {
     std::vector<Part> after;
     for (auto& [id, p] : edited)
         after.push_back(p);
+    // The reviewer stays where they were: same selection, same part of the Sheet.
+    const auto selected = m_scene->selectedParts();
+    const QPoint scroll(m_view->horizontalScrollBar()->value(),
+                        m_view->verticalScrollBar()->value());
     m_doc.undoStack().push(new SetFieldsCommand(
         m_doc, after, tr("Apply fix: %1").arg(QString::fromStdString(f.fix->description))));
+    m_scene->clearSelection();
+    for (auto id : selected.empty() ? std::vector<PartId>{after.front().id} : selected)
+        if (auto* item = m_scene->itemFor(id))
+            item->setSelected(true);
+    m_view->horizontalScrollBar()->setValue(scroll.x());
+    m_view->verticalScrollBar()->setValue(scroll.y());
     return {};
 }
 
@@ -231,8 +257,10 @@ void MainWindow::refreshStatus() {
 }
 
 void MainWindow::refreshTitle() {
-    const QString name =
+    QString name =
         m_doc.filePath().isEmpty() ? tr("Untitled") : QFileInfo(m_doc.filePath()).fileName();
+    if (m_doc.isRecovered())
+        name += " " + tr("(recovered)");
     setWindowTitle(name + (m_doc.isModified() ? " *" : "") + " — " + tr("Lineward"));
 }
 
@@ -259,9 +287,14 @@ void MainWindow::editTitleBlock() {
 bool MainWindow::maybeSave() {
     if (!m_doc.isModified())
         return true;
-    const auto answer = QMessageBox::question(
-        this, tr("Unsaved changes"), tr("The drawing has unsaved changes. Save them?"),
-        QMessageBox::Save | QMessageBox::Discard | QMessageBox::Cancel);
+    const QString name =
+        m_doc.filePath().isEmpty() ? tr("Untitled") : QFileInfo(m_doc.filePath()).fileName();
+    QMessageBox box(QMessageBox::Question, tr("Unsaved changes"),
+                    tr("%1 has unsaved changes. Save them?").arg(name),
+                    QMessageBox::Save | QMessageBox::Discard | QMessageBox::Cancel, this);
+    box.setObjectName("unsavedChanges");
+    box.setTextFormat(Qt::PlainText);
+    const auto answer = static_cast<QMessageBox::StandardButton>(box.exec());
     if (answer == QMessageBox::Cancel)
         return false;
     if (answer == QMessageBox::Discard)
@@ -274,7 +307,7 @@ bool MainWindow::maybeSave() {
         return false;
     const QString why = saveTo(path);
     if (!why.isEmpty())
-        QMessageBox::warning(this, tr("Save failed"), why);
+        plainMessage(this, QMessageBox::Warning, tr("Save failed"), why);
     return why.isEmpty();
 }
 
@@ -286,6 +319,7 @@ void MainWindow::closeEvent(QCloseEvent* e) {
     QSettings settings;
     settings.setValue("window/geometry", saveGeometry());
     settings.setValue("window/state", saveState());
+    m_recovery->remove(); // saved, discarded or clean: nothing to recover
     e->accept();
 }
 
@@ -319,10 +353,10 @@ void MainWindow::rebuildRecentMenu() {
     m_recentMenu->clear();
     for (const QString& path : QSettings().value("recentFiles").toStringList()) {
         auto* a = m_recentMenu->addAction(path);
-        connect(a, &QAction::triggered, this, [this, path] {
-            if (maybeSave())
-                openFile(path);
-        });
+        connect(a, &QAction::triggered, this, guarded(this, tr("Open"), [this, path] {
+                    if (maybeSave())
+                        openFile(path);
+                }));
     }
     m_recentMenu->setEnabled(!m_recentMenu->isEmpty());
 }

@@ -3,6 +3,7 @@
 #pragma once
 
 #include "document.h"
+#include "recovery.h"
 
 #include <QMainWindow>
 
@@ -32,6 +33,9 @@ public:
     Inspector* inspector() const { return m_inspector; }
     CurvesPanel* curves() const { return m_curves; }
 
+    /// Takes a drawing left in the recovery folder by a window that did not close: it opens
+    /// modified, under its own file's name, and autosaves on into the same slot.
+    void adoptRecovered(Drawing drawing, const QString& slotPath, const QString& originalPath);
     /// Opens a file; shows a message box on failure unless `quiet`. Returns the error text.
     QString openFile(const QString& path, bool quiet = false);
     /// Saves to `path` (atomic); returns the error text.
@@ -47,7 +51,8 @@ public:
     void groupSelectionAsBucket();
     void printPreview();
     void printSubmittal();
-    /// Applies a finding's proposed fix as one edit; returns the refusal text, if any.
+    /// Applies a finding's proposed fix as one edit, keeping the selection and the view;
+    /// returns the refusal text, if any.
     QString applyFix(const Finding& f);
     /// Where autosave writes this window's recovery copy.
     QString recoveryPath() const;
@@ -85,8 +90,13 @@ private:
     QLabel* m_counts;
     QMenu* m_recentMenu = nullptr;
     QTimer* m_autosave;
-    QString m_recoveryPath;
+    std::unique_ptr<RecoverySlot> m_recovery;
 };
+
+/// At start-up: offers each drawing that windows which did not close left in the recovery
+/// folder (the first in `first`, others in new windows); an unreadable one is reported with
+/// its located reason and set aside, never deleted.
+void offerRecovery(MainWindow& first);
 
 /// Mime type of Lineward parts on the clipboard (our JSON file format).
 inline constexpr const char* kClipboardMime = "application/x-lineward";

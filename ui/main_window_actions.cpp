@@ -3,6 +3,7 @@
 #include "commands/add_parts_command.h"
 #include "commands/bucket_command.h"
 #include "findings_panel.h"
+#include "guard.h"
 #include "io/drawing_file.h"
 #include "main_window.h"
 #include "model/part_defaults.h"
@@ -32,11 +33,15 @@
 namespace lineward::ui {
 
 namespace {
-QAction* menuAction(QMenu* menu, const QString& text, QKeySequence key, QObject* ctx,
+// Every menu action runs guarded: an exception in it is reported and the program goes on.
+QAction* menuAction(QMenu* menu, const QString& text, QKeySequence key, QWidget* ctx,
                     std::function<void()> fn) {
     auto* a = menu->addAction(text);
     a->setShortcut(key);
-    QObject::connect(a, &QAction::triggered, ctx, std::move(fn));
+    QString what = text;
+    what.remove('&');
+    what.remove(QChar(0x2026));
+    QObject::connect(a, &QAction::triggered, ctx, guarded(ctx, what, [fn] { fn(); }));
     return a;
 }
 } // namespace
@@ -79,13 +84,13 @@ void MainWindow::buildFileMenu() {
         if (!path.isEmpty())
             if (auto why = saveTo(path.endsWith(".lineward") ? path : path + ".lineward");
                 !why.isEmpty())
-                QMessageBox::warning(this, tr("Save failed"), why);
+                plainMessage(this, QMessageBox::Warning, tr("Save failed"), why);
     };
     menuAction(file, tr("&Save"), QKeySequence::Save, this, [this, saveAs] {
         if (m_doc.filePath().isEmpty())
             return saveAs();
         if (auto why = saveTo(m_doc.filePath()); !why.isEmpty())
-            QMessageBox::warning(this, tr("Save failed"), why);
+            plainMessage(this, QMessageBox::Warning, tr("Save failed"), why);
     });
     menuAction(file, tr("Save &As…"), QKeySequence::SaveAs, this, saveAs);
     file->addSeparator();
@@ -100,7 +105,7 @@ void MainWindow::buildFileMenu() {
             return;
         auto r = writeSubmittalPdf(path, m_doc.drawing(), m_doc.sharedTables(), SubmittalOptions{});
         if (!r.error.isEmpty())
-            QMessageBox::warning(this, tr("Export failed"), r.error);
+            plainMessage(this, QMessageBox::Warning, tr("Export failed"), r.error);
         else
             statusBar()->showMessage(tr("Wrote %1 (%2 pages)").arg(path).arg(r.pages), 8000);
     });
@@ -110,16 +115,24 @@ void MainWindow::buildFileMenu() {
         if (!path.isEmpty())
             if (auto why = writeOneLineSvg(path, m_doc.drawing(), m_doc.sharedTables());
                 !why.isEmpty())
-                QMessageBox::warning(this, tr("Export failed"), why);
+                plainMessage(this, QMessageBox::Warning, tr("Export failed"), why);
     });
     menuAction(file, tr("Export Schedules &CSV…"), QKeySequence(), this, [this] {
         const auto dir = QFileDialog::getExistingDirectory(this, tr("Folder for the schedules"));
         if (!dir.isEmpty())
             if (auto why = writeScheduleCsvs(dir, m_doc.drawing(), m_doc.tables()); !why.isEmpty())
-                QMessageBox::warning(this, tr("Export failed"), why);
+                plainMessage(this, QMessageBox::Warning, tr("Export failed"), why);
     });
     file->addSeparator();
-    menuAction(file, tr("&Quit"), QKeySequence::Quit, this, [this] { close(); });
+    menuAction(file, tr("&Close"), QKeySequence::Close, this, [this] { close(); });
+    // Quit asks each window about its unsaved drawing; one Cancel keeps the program running.
+    menuAction(file, tr("&Quit"), QKeySequence::Quit, this, [] {
+        QApplication::closeAllWindows();
+        for (QWidget* w : QApplication::topLevelWidgets())
+            if (qobject_cast<MainWindow*>(w) && w->isVisible())
+                return;
+        QApplication::quit();
+    });
 }
 
 void MainWindow::buildEditMenu() {
@@ -169,12 +182,13 @@ void MainWindow::printPreview() {
     printer.setPageSize(QPageSize(QPageSize::Tabloid));
     printer.setPageOrientation(QPageLayout::Landscape);
     QPrintPreviewDialog preview(&printer, this);
-    connect(&preview, &QPrintPreviewDialog::paintRequested, this, [this](QPrinter* p) {
+    connect(&preview, &QPrintPreviewDialog::paintRequested, this,
+            guarded(this, tr("Print preview"), [this](QPrinter* p) {
         SubmittalOptions o;
         o.paper = p->pageLayout().pageSize();
         o.orientation = p->pageLayout().orientation();
         paintSubmittal(*p, m_doc.drawing(), m_doc.sharedTables(), o);
-    });
+    }));
     preview.exec();
 }
 
@@ -190,7 +204,7 @@ void MainWindow::printSubmittal() {
     o.orientation = printer.pageLayout().orientation();
     auto r = paintSubmittal(printer, m_doc.drawing(), m_doc.sharedTables(), o);
     if (!r.error.isEmpty())
-        QMessageBox::warning(this, tr("Print failed"), r.error);
+        plainMessage(this, QMessageBox::Warning, tr("Print failed"), r.error);
 }
 
 void MainWindow::copySelection() {

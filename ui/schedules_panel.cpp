@@ -1,6 +1,7 @@
 // SchedulesPanel: rebuilt from the core's schedules after each check.
 #include "schedules_panel.h"
 
+#include "guard.h"
 #include "report/schedules.h"
 
 #include <QHeaderView>
@@ -10,7 +11,8 @@ namespace lineward::ui {
 
 SchedulesPanel::SchedulesPanel(Document& doc, QWidget* parent) : QTabWidget(parent), m_doc(doc) {
     setObjectName("schedules");
-    connect(&doc, &Document::reportChanged, this, &SchedulesPanel::refresh);
+    connect(&doc, &Document::reportChanged, this,
+            guarded(this, tr("Building the schedules"), [this] { refresh(); }));
     refresh();
 }
 

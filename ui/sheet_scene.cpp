@@ -51,6 +51,7 @@ std::vector<WireId> SheetScene::selectedWires() const {
 }
 
 void SheetScene::rebuild() {
+    emit aboutToRebuild();
     clear();
     m_parts.clear();
     m_wires.clear();

@@ -28,6 +28,11 @@ public:
     /// Printing: a plain white background without the grid.
     void setPrinting(bool on) { m_printing = on; }
 
+signals:
+    /// Every item is about to be deleted (a drawing opened or recovered): views drop their
+    /// pointers to items, such as a wire being dragged.
+    void aboutToRebuild();
+
 protected:
     void drawBackground(QPainter* painter, const QRectF& rect) override;
 

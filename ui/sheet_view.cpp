@@ -20,6 +20,12 @@ SheetView::SheetView(SheetScene* scene, QWidget* parent)
     setDragMode(QGraphicsView::RubberBandDrag);
     setAcceptDrops(true);
     setTransformationAnchor(QGraphicsView::AnchorUnderMouse);
+    // A drag in progress when the drawing is replaced holds items that are about to go.
+    connect(scene, &SheetScene::aboutToRebuild, this, [this] {
+        m_rubberWire = nullptr;
+        m_wireFrom.reset();
+        m_pressPositions.clear();
+    });
 }
 
 void SheetView::setPlaceKind(std::optional<PartKind> kind) {

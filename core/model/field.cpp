@@ -13,17 +13,55 @@ std::string formatNumber(double v) {
     return std::string(buf, res.ptr);
 }
 
+std::string fieldName(const FieldSpec& spec, FieldNaming naming) {
+    if (naming == FieldNaming::Key)
+        return std::string(spec.key);
+    std::string name(spec.label);
+    if (const auto unit = peopleUnit(spec); !unit.empty())
+        name += " (" + std::string(unit) + ")";
+    return name;
+}
+
+std::string_view peopleUnit(const FieldSpec& spec) {
+    return spec.shownUnit.empty() ? spec.unit : spec.shownUnit;
+}
+
+std::string_view choiceLabel(std::string_view choice) {
+    // Only the words whose file spelling is not plain English; letters, sizes and classes read
+    // as they are.
+    static constexpr std::pair<std::string_view, std::string_view> kWords[] = {
+        {"thermal_magnetic", "thermal-magnetic"},
+        {"time_delay", "time-delay"},
+        {"fast", "fast-acting"},
+        {"cu", "copper"},
+        {"al", "aluminum"},
+        {"steel", "steel conduit"},
+        {"pvc", "PVC conduit"},
+        {"aluminum", "aluminum conduit"},
+        {"squirrel_cage", "squirrel cage"},
+        {"wound_rotor", "wound rotor"},
+        {"mcc", "MCC"},
+    };
+    for (const auto& [key, words] : kWords)
+        if (key == choice)
+            return words;
+    return choice;
+}
+
 namespace {
 
-std::string withUnit(const FieldSpec& spec, double v) {
-    std::string s = formatNumber(v);
-    if (!spec.unit.empty())
-        s += " " + std::string(spec.unit);
+std::string withUnit(const FieldSpec& spec, double v, FieldNaming naming = FieldNaming::Key) {
+    const bool shown = naming == FieldNaming::People && !spec.shownUnit.empty();
+    std::string s = formatNumber(shown ? v * spec.shownScale : v);
+    const auto unit = shown ? spec.shownUnit : spec.unit;
+    if (!unit.empty())
+        s += " " + std::string(unit);
     return s;
 }
 
-std::optional<std::string> checkNumber(const FieldSpec& spec, double v) {
-    const std::string key(spec.key);
+std::optional<std::string> checkNumber(const FieldSpec& spec, double v, FieldNaming naming) {
+    const std::string key = fieldName(spec, naming);
+    auto unit = [&](double x) { return withUnit(spec, x, naming); };
     if (std::isnan(v))
         return key + " is not a number (NaN)";
     if (std::isinf(v))
@@ -32,20 +70,21 @@ std::optional<std::string> checkNumber(const FieldSpec& spec, double v) {
         return key + " must be a whole number (got " + formatNumber(v) + ")";
     if (v < spec.minValue || (spec.minExclusive && v == spec.minValue)) {
         if (spec.minExclusive && spec.minValue == 0.0)
-            return key + " must be greater than 0 (got " + withUnit(spec, v) + ")";
-        return key + " " + withUnit(spec, v) + " is below the smallest accepted value " +
-               withUnit(spec, spec.minValue);
+            return key + " must be greater than 0 (got " + unit(v) + ")";
+        return key + " " + unit(v) + " is below the smallest accepted value " +
+               unit(spec.minValue);
     }
     if (v > spec.maxValue)
-        return key + " " + withUnit(spec, v) + " is above the largest accepted value " +
-               withUnit(spec, spec.maxValue);
+        return key + " " + unit(v) + " is above the largest accepted value " +
+               unit(spec.maxValue);
     return std::nullopt;
 }
 
 } // namespace
 
-std::optional<std::string> validateField(const FieldSpec& spec, const FieldValue& value) {
-    const std::string key(spec.key);
+std::optional<std::string> validateField(const FieldSpec& spec, const FieldValue& value,
+                                         FieldNaming naming) {
+    const std::string key = fieldName(spec, naming);
     if (std::holds_alternative<std::monostate>(value)) {
         if (spec.required)
             return key + " is required";
@@ -56,7 +95,7 @@ std::optional<std::string> validateField(const FieldSpec& spec, const FieldValue
     case FieldType::Integer:
         if (!std::holds_alternative<double>(value))
             return key + " must be a number";
-        return checkNumber(spec, std::get<double>(value));
+        return checkNumber(spec, std::get<double>(value), naming);
     case FieldType::Flag:
         if (!std::holds_alternative<bool>(value))
             return key + " must be true or false";
@@ -68,7 +107,8 @@ std::optional<std::string> validateField(const FieldSpec& spec, const FieldValue
         if (std::find(spec.choices.begin(), spec.choices.end(), s) == spec.choices.end()) {
             std::string list;
             for (auto c : spec.choices)
-                list += (list.empty() ? "" : ", ") + std::string(c);
+                list += (list.empty() ? "" : ", ") +
+                        std::string(naming == FieldNaming::Key ? c : choiceLabel(c));
             return key + " '" + s + "' is not one of: " + list;
         }
         return std::nullopt;

@@ -27,10 +27,27 @@ struct FieldSpec {
     FieldValue defaultValue = {};
     std::vector<std::string_view> choices = {}; ///< accepted words (Choice)
     std::string_view help = {};
+    /// Unit and scale people edit the value in, where it differs from the file's (the file keeps
+    /// a source's voltage in kV; the Inspector shows every voltage in V).
+    std::string_view shownUnit = {};
+    double shownScale = 1.0;
 };
 
+/// How a message names a rating: by its file key (loader, command line) or by its label and
+/// unit (the editor: "Rated output (hp)").
+enum class FieldNaming { Key, People };
+
+/// The rating's name as `naming` asks: "hp", or "Rated output (hp)".
+std::string fieldName(const FieldSpec& spec, FieldNaming naming);
+/// The unit people see for the rating (shownUnit, else unit).
+std::string_view peopleUnit(const FieldSpec& spec);
+/// Words people read for a choice value ("squirrel_cage" → "squirrel cage"); other values as
+/// they are.
+std::string_view choiceLabel(std::string_view choice);
+
 /// Checks one value against its spec. Returns the reason it is refused, or nothing when accepted.
-std::optional<std::string> validateField(const FieldSpec& spec, const FieldValue& value);
+std::optional<std::string> validateField(const FieldSpec& spec, const FieldValue& value,
+                                         FieldNaming naming = FieldNaming::Key);
 
 /// Shortest text that reads back to the same number (used in messages and the file).
 std::string formatNumber(double v);

@@ -48,18 +48,25 @@ bool Part::flag(std::string_view key) const {
     return b && *b;
 }
 
-std::optional<std::string> Part::set(std::string_view key, FieldValue v) {
-    auto i = fieldIndex(kind, key);
-    if (!i)
-        return std::string(kindInfo(kind).name) + " has no rating '" + std::string(key) + "'";
-    if (auto why = validateField(kindInfo(kind).fields[*i], v))
-        return why;
+std::optional<std::string> Part::set(std::string_view key, FieldValue v, FieldNaming naming) {
+    return set({{key, std::move(v)}}, naming);
+}
+
+std::optional<std::string> Part::set(const std::vector<std::pair<std::string_view, FieldValue>>& changes,
+                                     FieldNaming naming) {
     Part trial = *this;
     trial.values.resize(kindInfo(kind).fields.size());
-    trial.values[*i] = std::move(v);
+    for (const auto& [key, v] : changes) {
+        auto i = fieldIndex(kind, key);
+        if (!i)
+            return std::string(kindInfo(kind).name) + " has no rating '" + std::string(key) + "'";
+        if (auto why = validateField(kindInfo(kind).fields[*i], v, naming))
+            return why;
+        trial.values[*i] = v;
+    }
     // Refuse only what this change breaks: a part still being filled in may lack other values.
-    const auto before = validatePart(*this);
-    for (auto& problem : validatePart(trial))
+    const auto before = validatePart(*this, naming);
+    for (auto& problem : validatePart(trial, naming))
         if (std::find(before.begin(), before.end(), problem) == before.end())
             return problem;
     *this = std::move(trial);
@@ -68,72 +75,74 @@ std::optional<std::string> Part::set(std::string_view key, FieldValue v) {
 
 namespace {
 
-void oneOf(const Part& p, std::string_view a, std::string_view b, std::vector<std::string>& out) {
-    const bool hasA = p.number(a).has_value(), hasB = p.number(b).has_value();
-    if (hasA == hasB)
-        out.push_back("give exactly one of " + std::string(a) + " and " + std::string(b));
+std::string nameOf(const Part& p, std::string_view key, FieldNaming naming) {
+    const FieldSpec* spec = findField(p.kind, key);
+    return spec ? fieldName(*spec, naming) : std::string(key);
 }
 
-void notAbove(const Part& p, std::string_view lo, std::string_view hi,
+void oneOf(const Part& p, const FieldAlternative& alt, FieldNaming naming,
+           std::vector<std::string>& out) {
+    const bool hasA = p.number(alt.first).has_value(), hasB = p.number(alt.second).has_value();
+    if (hasA == hasB)
+        out.push_back("give exactly one of " + nameOf(p, alt.first, naming) + " and " +
+                      nameOf(p, alt.second, naming));
+}
+
+void notAbove(const Part& p, std::string_view lo, std::string_view hi, FieldNaming naming,
               std::vector<std::string>& out) {
     auto l = p.number(lo), h = p.number(hi);
     if (l && h && *l > *h)
-        out.push_back(std::string(lo) + " " + formatNumber(*l) + " is above " + std::string(hi) +
-                      " " + formatNumber(*h));
+        out.push_back(nameOf(p, lo, naming) + " " + formatNumber(*l) + " is above " +
+                      nameOf(p, hi, naming) + " " + formatNumber(*h));
 }
 
-void temperatureColumn(const Part& p, std::string_view key, std::vector<std::string>& out) {
+void temperatureColumn(const Part& p, std::string_view key, FieldNaming naming,
+                       std::vector<std::string>& out) {
     auto t = p.number(key);
     if (t && *t != 60 && *t != 75 && *t != 90)
-        out.push_back(std::string(key) + " must be 60, 75 or 90 °C (got " + formatNumber(*t) + ")");
+        out.push_back(nameOf(p, key, naming) + " must be 60, 75 or 90 °C (got " +
+                      formatNumber(*t) + ")");
 }
 
 } // namespace
 
-std::vector<std::string> validatePart(const Part& p) {
+std::vector<std::string> validatePart(const Part& p, FieldNaming naming) {
     std::vector<std::string> out;
     const auto& fields = kindInfo(p.kind).fields;
     if (p.values.size() != fields.size())
         out.push_back("internal: wrong number of ratings");
     for (std::size_t i = 0; i < fields.size() && i < p.values.size(); ++i)
-        if (auto why = validateField(fields[i], p.values[i]))
+        if (auto why = validateField(fields[i], p.values[i], naming))
             out.push_back(*why);
     if (p.values.size() != fields.size())
         return out;
+    for (const auto& alt : kindInfo(p.kind).alternatives)
+        oneOf(p, alt, naming, out);
     switch (p.kind) {
-    case PartKind::Source:
-        oneOf(p, "fault_ka", "fault_mva", out);
-        break;
     case PartKind::Breaker:
-        notAbove(p, "trip_a", "frame_a", out);
+        notAbove(p, "trip_a", "frame_a", naming, out);
         break;
     case PartKind::InstBreaker:
-        notAbove(p, "pickup_min_a", "pickup_a", out);
-        notAbove(p, "pickup_a", "pickup_max_a", out);
+        notAbove(p, "pickup_min_a", "pickup_a", naming, out);
+        notAbove(p, "pickup_a", "pickup_max_a", naming, out);
         break;
     case PartKind::Overload:
-        notAbove(p, "range_min_a", "setting_a", out);
-        notAbove(p, "setting_a", "range_max_a", out);
+        notAbove(p, "range_min_a", "setting_a", naming, out);
+        notAbove(p, "setting_a", "range_max_a", naming, out);
         break;
     case PartKind::Contactor:
         if (!p.word("nema_size") && !p.number("ac3_a"))
             out.push_back("give nema_size or ac3_a");
         break;
     case PartKind::Cable:
-        temperatureColumn(p, "insulation_c", out);
-        temperatureColumn(p, "termination_c", out);
+        temperatureColumn(p, "insulation_c", naming, out);
+        temperatureColumn(p, "termination_c", naming, out);
         if (auto egc = p.word("egc_size"); egc && !egc->empty() && !isKnownConductorSize(*egc))
             out.push_back("egc_size '" + *egc + "' is not a conductor size");
         if (auto size = p.word("size"); size && !isKnownConductorSize(*size))
             out.push_back("size '" + *size +
                           "' is not a conductor size (write e.g. \"8 AWG\", \"250 kcmil\" or "
                           "\"16 mm2\")");
-        break;
-    case PartKind::Motor:
-        oneOf(p, "hp", "kw", out);
-        break;
-    case PartKind::Load:
-        oneOf(p, "kva", "kw", out);
         break;
     default:
         break;

@@ -6,6 +6,7 @@
 
 #include <optional>
 #include <string>
+#include <utility>
 #include <vector>
 
 namespace lineward {
@@ -28,7 +29,12 @@ struct Part {
     std::optional<std::string> word(std::string_view key) const;
     bool flag(std::string_view key) const;
     /// Sets a field after validating it; returns the reason when refused (the part is unchanged).
-    std::optional<std::string> set(std::string_view key, FieldValue v);
+    std::optional<std::string> set(std::string_view key, FieldValue v,
+                                   FieldNaming naming = FieldNaming::Key);
+    /// Sets several fields as one change (an either-or pair switched in one edit); all or none.
+    std::optional<std::string>
+    set(const std::vector<std::pair<std::string_view, FieldValue>>& changes,
+        FieldNaming naming = FieldNaming::Key);
 
     bool isOpen() const { return kindInfo(kind).switching && flag("open"); }
     bool operator==(const Part&) const = default;
@@ -36,6 +42,6 @@ struct Part {
 
 /// Checks the relations between a part's fields (one of hp/kW given, setting within its range,
 /// ...). Returns each reason a part is refused.
-std::vector<std::string> validatePart(const Part& part);
+std::vector<std::string> validatePart(const Part& part, FieldNaming naming = FieldNaming::Key);
 
 } // namespace lineward

@@ -16,6 +16,10 @@ constexpr std::array<std::string_view, 1> kBar{"bar"};
 constexpr std::array<std::string_view, 2> kLineLoad{"line", "load"};
 constexpr std::array<std::string_view, 2> kPriSec{"pri", "sec"};
 
+constexpr std::array<FieldAlternative, 1> kSourceAlt{{{"fault_ka", "fault_mva"}}};
+constexpr std::array<FieldAlternative, 1> kMotorAlt{{{"hp", "kw"}}};
+constexpr std::array<FieldAlternative, 1> kLoadAlt{{{"kva", "kw"}}};
+
 const FieldSpec kLetThrough{"let_through_a2s",
                             "Let-through I²t at the available fault",
                             "A²s",
@@ -56,7 +60,7 @@ const FieldSpec kOpen{"open",
                       "true where the device is open (an open tie, a spare)"};
 
 const std::array<FieldSpec, 4> kSourceFields{{
-    {"kv", "Nominal voltage", "kV", FT::Number, 0, 765, true, true},
+    {"kv", "Nominal voltage", "kV", FT::Number, 0, 765, true, true, {}, {}, {}, "V", 1000.0},
     {"fault_ka",
      "Available fault current",
      "kA",
@@ -374,7 +378,8 @@ const std::array<FieldSpec, 6> kLoadFields{{
 }};
 
 const std::array<KindInfo, kPartKindCount> kKinds{{
-    {PartKind::Source, "source", "Utility source", "UTIL-", kOut, kSourceFields},
+    {PartKind::Source, "source", "Utility source", "UTIL-", kOut, kSourceFields, false, false,
+     kSourceAlt},
     {PartKind::Transformer, "transformer", "Transformer", "TX-", kPriSec, kTransformerFields},
     {PartKind::Bus, "bus", "Bus", "BUS-", kBar, kBusFields},
     {PartKind::Breaker, "breaker", "Breaker", "CB-", kLineLoad, kBreakerFields, true, true},
@@ -386,8 +391,8 @@ const std::array<KindInfo, kPartKindCount> kKinds{{
     {PartKind::Contactor, "contactor", "Contactor", "K-", kLineLoad, kContactorFields, true, false},
     {PartKind::Overload, "overload", "Overload relay", "OL-", kLineLoad, kOverloadFields},
     {PartKind::Cable, "cable", "Cable", "C-", kLineLoad, kCableFields},
-    {PartKind::Motor, "motor", "Motor", "M-", kIn, kMotorFields},
-    {PartKind::Load, "load", "Static load", "LD-", kIn, kLoadFields},
+    {PartKind::Motor, "motor", "Motor", "M-", kIn, kMotorFields, false, false, kMotorAlt},
+    {PartKind::Load, "load", "Static load", "LD-", kIn, kLoadFields, false, false, kLoadAlt},
 }};
 
 } // namespace

@@ -28,6 +28,11 @@ enum class PartKind {
 
 inline constexpr int kPartKindCount = 12;
 
+/// Two ratings of which a part gives exactly one (a source's kA or MVA; a motor's hp or kW).
+struct FieldAlternative {
+    std::string_view first, second;
+};
+
 /// What the engine needs to know about a kind besides its fields.
 struct KindInfo {
     PartKind kind;
@@ -38,6 +43,8 @@ struct KindInfo {
     std::span<const FieldSpec> fields;
     bool switching = false;  ///< has an open/closed state
     bool protective = false; ///< interrupts fault current
+    /// Pairs of ratings given one or the other; the Inspector edits each pair as one choice.
+    std::span<const FieldAlternative> alternatives = {};
 };
 
 const KindInfo& kindInfo(PartKind kind);

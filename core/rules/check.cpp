@@ -7,7 +7,10 @@
 #include "topology/flow.h"
 #include "topology/network.h"
 
+#include "rules/rule_catalog.h"
+
 #include <algorithm>
+#include <optional>
 
 namespace lineward {
 
@@ -36,22 +39,53 @@ void markAccepted(const Drawing& d, std::vector<Finding>& findings) {
     }
 }
 
+// Runs one family; an internal error in it becomes a finding instead of ending the check (the
+// editor calls this from a worker thread and a Qt slot, where an exception would end the
+// program and lose the user's work).
+template <typename Fn>
+void runFamily(const char* family, std::vector<Finding>& out, Fn&& fn) {
+    try {
+        fn();
+    } catch (const std::exception& e) {
+        out.push_back(makeFinding("check.incomplete", {},
+                                  std::string("the ") + family +
+                                      " checks stopped on an internal error and their findings "
+                                      "are missing: " +
+                                      e.what()));
+    }
+}
+
+void runRuleFamilies(const Drawing& drawing, const Tables& tables, std::vector<Finding>& out) {
+    runFamily("drawing", out, [&] { checkDrawingRules(drawing, out); });
+    std::optional<Network> net;
+    runFamily("topology", out, [&] {
+        net.emplace(drawing);
+        checkTopology(*net, out);
+    });
+    if (!net)
+        return;
+    std::optional<Flow> flow;
+    std::optional<StudyResults> study;
+    runFamily("study", out, [&] {
+        flow.emplace(*net);
+        study = runStudies(*net, *flow, tables, drawing.settings);
+    });
+    if (!study)
+        return;
+    const RuleContext ctx{drawing, *net, *flow, tables, *study};
+    runFamily("motor branch", out, [&] { checkMotorBranches(ctx, out); });
+    runFamily("feeder", out, [&] { checkFeeders(ctx, out); });
+    runFamily("short-circuit duty", out, [&] { checkDuty(ctx, out); });
+    runFamily("voltage", out, [&] { checkVoltage(ctx, out); });
+    runFamily("time-current curve", out, [&] { checkCurves(ctx, out); });
+    out.insert(out.end(), study->notes.begin(), study->notes.end());
+}
+
 } // namespace
 
 CheckReport checkDrawing(const Drawing& drawing, const Tables& tables) {
     CheckReport report;
-    Network net(drawing);
-    Flow flow(net);
-    const StudyResults study = runStudies(net, flow, tables, drawing.settings);
-    const RuleContext ctx{drawing, net, flow, tables, study};
-    checkDrawingRules(drawing, report.findings);
-    checkTopology(net, report.findings);
-    checkMotorBranches(ctx, report.findings);
-    checkFeeders(ctx, report.findings);
-    checkDuty(ctx, report.findings);
-    checkVoltage(ctx, report.findings);
-    checkCurves(ctx, report.findings);
-    report.findings.insert(report.findings.end(), study.notes.begin(), study.notes.end());
+    runRuleFamilies(drawing, tables, report.findings);
     markAccepted(drawing, report.findings);
     std::stable_sort(report.findings.begin(), report.findings.end(),
                      [](const Finding& a, const Finding& b) {

@@ -112,6 +112,10 @@ constexpr std::array kRules{
     RuleInfo{"transformer.protection", "transformer protection too large",
              "NEC 2023 Table 450.3(B)", Severity::Violation,
              "primary ≤ 125 % (next size) alone, or ≤ 250 % with secondary ≤ 125 % (next size)"},
+    RuleInfo{"check.incomplete", "a family of checks could not run", "common practice",
+             Severity::Violation,
+             "every rule family ran to the end; one that stops on an internal error reports "
+             "this instead of its findings, which are missing"},
     RuleInfo{"study.cable.no_data", "cable without impedance data", "common practice",
              Severity::Caution,
              "the cable's size has a row in NEC Chapter 9 Table 9 (or is a mm² size)"},

@@ -5,6 +5,7 @@
 #include "part_item.h"
 #include "sheet_scene.h"
 #include "ui_support.h"
+#include "user.h"
 
 #include <QApplication>
 #include <QGraphicsView>
@@ -24,8 +25,8 @@ QString sample(const char* name) {
 
 TEST(MainWindow, OpensSampleShowsBadgesAndFindings) {
     MainWindow w(sharedTables());
-    w.show();
     ASSERT_TRUE(w.openFile(sample("kestrel-mill-mcc1-review.lineward"), true).isEmpty());
+    test::User user(w);
     const auto& report = w.document().report();
     ASSERT_FALSE(report.findings.empty());
     EXPECT_EQ(w.findings()->list()->topLevelItemCount(), static_cast<int>(report.findings.size()));
@@ -40,25 +41,23 @@ TEST(MainWindow, OpensSampleShowsBadgesAndFindings) {
     ASSERT_NE(counts, nullptr);
     EXPECT_TRUE(counts->text().startsWith(QString::number(report.openCounts[2]) + " violations"));
 
-    // Selecting the finding selects its part on the Sheet.
-    for (int i = 0; i < w.findings()->list()->topLevelItemCount(); ++i) {
-        auto* row = w.findings()->list()->topLevelItem(i);
-        if (row->text(2).startsWith("P-105")) {
-            w.findings()->list()->setCurrentItem(row);
-            break;
-        }
-    }
+    // Clicking the finding selects its part on the Sheet.
+    ASSERT_TRUE(user.clickFinding("topology.voltage.mismatch"));
     EXPECT_TRUE(item->isSelected());
 }
 
 TEST(MainWindow, CleanSampleHasNoBadges) {
     MainWindow w(sharedTables());
     ASSERT_TRUE(w.openFile(sample("kestrel-mill-mcc1.lineward"), true).isEmpty());
+    std::size_t parts = 0;
     for (const auto* gi : w.scene()->items()) {
         if (auto* pi = qgraphicsitem_cast<const PartItem*>(gi)) {
+            ++parts;
             EXPECT_FALSE(pi->badge().has_value()) << pi->part().tag;
         }
     }
+    EXPECT_EQ(parts, w.document().drawing().parts().size()); // every part is on the Sheet
+    EXPECT_GT(parts, 50u);
 }
 
 TEST(MainWindow, BrokenFileGivesLocatedMessageAndKeepsDrawing) {

@@ -1,6 +1,8 @@
 // ui test helpers; main() runs the tests under an offscreen QApplication.
 #include "ui_support.h"
 
+#include "guard.h"
+
 #include <QApplication>
 #include <QDir>
 #include <QStandardPaths>
@@ -41,7 +43,7 @@ int main(int argc, char** argv) {
     if (qEnvironmentVariableIsEmpty("QT_QPA_PLATFORM"))
         qputenv("QT_QPA_PLATFORM", "offscreen");
     qputenv("XDG_DATA_HOME", QByteArray((QDir::tempPath() + "/lineward-ui-data").toUtf8()));
-    QApplication app(argc, argv);
+    lineward::ui::Application app(argc, argv); // the program's own exception boundary
     QApplication::setOrganizationName("LinewardTests");
     QApplication::setApplicationName("LinewardTests");
     QStandardPaths::setTestModeEnabled(true);

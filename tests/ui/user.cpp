@@ -1,0 +1,263 @@
+// The test user's hands: every action is a QTest mouse or key event (or, for a drag from the
+// Parts palette, the drag-and-drop events a drop delivers) sent to the real widget.
+#include "user.h"
+
+#include "findings_panel.h"
+#include "inspector.h"
+#include "part_item.h"
+#include "parts_palette.h"
+#include "sheet_scene.h"
+#include "sheet_view.h"
+
+#include <QAbstractButton>
+#include <QAbstractItemView>
+#include <QApplication>
+#include <QComboBox>
+#include <QFileDialog>
+#include <QLabel>
+#include <QLineEdit>
+#include <QMimeData>
+#include <QPushButton>
+#include <QTest>
+#include <QTimer>
+#include <QTreeWidget>
+#include <gtest/gtest.h>
+
+namespace lineward::ui::test {
+
+User::User(MainWindow& w) : m_w(w) {
+    m_w.resize(1400, 900);
+    m_w.show();
+    QApplication::setActiveWindow(&m_w);
+    EXPECT_TRUE(QTest::qWaitForWindowActive(&m_w));
+    settle();
+}
+
+void User::settle() {
+    QApplication::processEvents();
+    m_w.document().waitForCheck();
+    QApplication::processEvents();
+}
+
+QPoint User::viewPoint(QPointF scenePos) const {
+    SheetView* view = m_w.view();
+    const QPoint p = view->mapFromScene(scenePos);
+    if (!view->viewport()->rect().contains(p)) {
+        view->centerOn(scenePos); // scroll as a user would, then point
+        return view->mapFromScene(scenePos);
+    }
+    return p;
+}
+
+PartId User::newestPart() const {
+    const auto& parts = m_w.document().drawing().parts();
+    PartId best;
+    for (const auto& p : parts)
+        if (best < p.id)
+            best = p.id;
+    return best;
+}
+
+PartId User::dragFromPalette(PartKind kind, QPointF scenePos) {
+    auto* palette = m_w.findChild<PartsPalette*>("partsPalette");
+    EXPECT_NE(palette, nullptr);
+    QListWidgetItem* item = palette->item(static_cast<int>(kind));
+    // The palette's own drag data, delivered as a drop delivers it: enter, move, drop.
+    std::unique_ptr<QMimeData> data(
+        palette->model()->mimeData({palette->indexFromItem(item)}));
+    QWidget* target = m_w.view()->viewport();
+    const QPoint at = viewPoint(scenePos);
+    QDragEnterEvent enter(at, Qt::CopyAction, data.get(), Qt::LeftButton, Qt::NoModifier);
+    QApplication::sendEvent(target, &enter);
+    QDragMoveEvent move(at, Qt::CopyAction, data.get(), Qt::LeftButton, Qt::NoModifier);
+    QApplication::sendEvent(target, &move);
+    QDropEvent drop(at, Qt::CopyAction, data.get(), Qt::LeftButton, Qt::NoModifier);
+    QApplication::sendEvent(target, &drop);
+    settle();
+    return newestPart();
+}
+
+PartId User::clickToPlace(PartKind kind, QPointF scenePos) {
+    auto* palette = m_w.findChild<PartsPalette*>("partsPalette");
+    QListWidgetItem* item = palette->item(static_cast<int>(kind));
+    palette->scrollToItem(item);
+    QTest::mouseClick(palette->viewport(), Qt::LeftButton, {},
+                      palette->visualItemRect(item).center());
+    QTest::mouseClick(m_w.view()->viewport(), Qt::LeftButton, {}, viewPoint(scenePos));
+    settle();
+    return newestPart();
+}
+
+void User::dragWire(WireEnd from, WireEnd to) {
+    PartItem* a = m_w.scene()->itemFor(from.part);
+    PartItem* b = m_w.scene()->itemFor(to.part);
+    ASSERT_TRUE(a && b);
+    const QPointF sa = a->terminalScenePos(from.terminal, b->scenePos());
+    const QPointF sb = b->terminalScenePos(to.terminal, sa);
+    m_w.view()->centerOn((sa + sb) / 2);
+    const QPoint pa = m_w.view()->mapFromScene(sa), pb = m_w.view()->mapFromScene(sb);
+    QWidget* vp = m_w.view()->viewport();
+    QTest::mousePress(vp, Qt::LeftButton, {}, pa);
+    QTest::mouseMove(vp, (pa + pb) / 2);
+    QTest::mouseMove(vp, pb);
+    QTest::mouseRelease(vp, Qt::LeftButton, {}, pb);
+    settle();
+}
+
+void User::clickPart(PartId id) {
+    PartItem* item = m_w.scene()->itemFor(id);
+    ASSERT_NE(item, nullptr);
+    // The middle of what can be clicked (a bus bar spans its feeders, not its origin).
+    const QPointF at = item->mapToScene(item->shape().boundingRect().center());
+    QTest::mouseClick(m_w.view()->viewport(), Qt::LeftButton, {}, viewPoint(at));
+    settle();
+}
+
+void User::clickEmptySheet() {
+    const QRectF used = m_w.scene()->itemsBoundingRect();
+    QTest::mouseClick(m_w.view()->viewport(), Qt::LeftButton, {},
+                      viewPoint(used.bottomRight() + QPointF(150, 150)));
+    settle();
+}
+
+void User::dragPart(PartId id, QPointF by) {
+    PartItem* item = m_w.scene()->itemFor(id);
+    ASSERT_NE(item, nullptr);
+    const QPointF at = item->mapToScene(item->shape().boundingRect().center());
+    const QPoint from = viewPoint(at);
+    const QPoint to = m_w.view()->mapFromScene(at + by);
+    QWidget* vp = m_w.view()->viewport();
+    QTest::mousePress(vp, Qt::LeftButton, {}, from);
+    QTest::mouseMove(vp, (from + to) / 2);
+    QTest::mouseMove(vp, to);
+    QTest::mouseRelease(vp, Qt::LeftButton, {}, to);
+    settle();
+}
+
+QLineEdit* User::field(const QString& key) const {
+    auto* edit = m_w.inspector()->findChild<QLineEdit*>("field_" + key);
+    EXPECT_NE(edit, nullptr) << "no Inspector field " << key.toStdString();
+    return edit;
+}
+
+QComboBox* User::combo(const QString& name) const {
+    auto* box = m_w.inspector()->findChild<QComboBox*>(name);
+    EXPECT_NE(box, nullptr) << "no Inspector choice " << name.toStdString();
+    return box;
+}
+
+void User::type(const QString& key, const QString& text, Commit how) {
+    QLineEdit* edit = field(key);
+    if (!edit)
+        return;
+    QTest::mouseClick(edit, Qt::LeftButton, {}, edit->rect().center());
+    QTest::keyClick(edit, Qt::Key_A, Qt::ControlModifier); // select what is there
+    if (text.isEmpty())
+        QTest::keyClick(edit, Qt::Key_Delete);
+    else
+        QTest::keyClicks(edit, text);
+    switch (how) {
+    case Commit::Enter:
+        QTest::keyClick(edit, Qt::Key_Return);
+        break;
+    case Commit::Tab:
+        QTest::keyClick(edit, Qt::Key_Tab);
+        break;
+    case Commit::ClickAway: {
+        auto* filter = m_w.findings()->findChild<QLineEdit*>("findingsFilter");
+        QTest::mouseClick(filter, Qt::LeftButton, {}, filter->rect().center());
+        break;
+    }
+    }
+    settle();
+}
+
+void User::choose(const QString& name, const QString& label) {
+    QComboBox* box = combo(name);
+    if (!box)
+        return;
+    const int index = box->findText(label);
+    ASSERT_GE(index, 0) << label.toStdString() << " is not offered in " << name.toStdString();
+    // Open the list with a click and click the entry, as a person does.
+    QTest::mouseClick(box, Qt::LeftButton, {}, box->rect().center());
+    QAbstractItemView* list = box->view();
+    ASSERT_TRUE(QTest::qWaitForWindowExposed(list->window()));
+    const QRect r = list->visualRect(list->model()->index(index, box->modelColumn()));
+    QTest::mouseClick(list->viewport(), Qt::LeftButton, {}, r.center());
+    settle();
+}
+
+QString User::inspectorMessage() const {
+    auto* label = m_w.inspector()->findChild<QLabel*>("inspectorMessage");
+    return label ? label->text() : QString();
+}
+
+bool User::clickFinding(const QString& rule) {
+    QTreeWidget* list = m_w.findings()->list();
+    for (int i = 0; i < list->topLevelItemCount(); ++i) {
+        QTreeWidgetItem* row = list->topLevelItem(i);
+        if (row->text(1) != rule)
+            continue;
+        list->scrollToItem(row);
+        QTest::mouseClick(list->viewport(), Qt::LeftButton, {},
+                          list->visualItemRect(row).center());
+        settle();
+        return true;
+    }
+    return false;
+}
+
+void User::clickApplyFix() {
+    auto* button = m_w.findings()->findChild<QPushButton*>("applyFix");
+    ASSERT_NE(button, nullptr);
+    ASSERT_TRUE(button->isEnabled());
+    QTest::mouseClick(button, Qt::LeftButton);
+    settle();
+}
+
+void User::press(Qt::Key key, Qt::KeyboardModifiers mods) {
+    QWidget* target = QApplication::focusWidget() ? QApplication::focusWidget() : &m_w;
+    QTest::keyClick(target, key, mods);
+    settle();
+}
+
+void User::answerFileDialogWith(const QString& path) {
+    // The dialog is modal: answer it from the event loop once it is up.
+    QTimer::singleShot(200, [path] {
+        auto* dialog = qobject_cast<QFileDialog*>(QApplication::activeModalWidget());
+        if (!dialog) {
+            ADD_FAILURE() << "no file dialog opened";
+            return;
+        }
+        auto* name = dialog->findChild<QLineEdit*>("fileNameEdit");
+        if (!name) {
+            ADD_FAILURE() << "the file dialog has no file name box";
+            dialog->reject();
+            return;
+        }
+        QTest::keyClicks(name, path);
+        QTest::keyClick(name, Qt::Key_Return);
+    });
+}
+
+void User::answerMessageBox(QMessageBox::StandardButton button, QString* text) {
+    // Poll: the box may open after other queued work.
+    auto* timer = new QTimer;
+    timer->setInterval(50);
+    QObject::connect(timer, &QTimer::timeout, [timer, button, text] {
+        auto* box = qobject_cast<QMessageBox*>(QApplication::activeModalWidget());
+        if (!box)
+            return;
+        timer->stop();
+        timer->deleteLater();
+        if (text)
+            *text = box->text();
+        if (QAbstractButton* b = box->button(button))
+            QTest::mouseClick(b, Qt::LeftButton);
+        else
+            ADD_FAILURE() << "the message box has no such button: " << box->text().toStdString();
+    });
+    timer->start();
+}
+
+} // namespace lineward::ui::test
