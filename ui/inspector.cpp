@@ -83,6 +83,14 @@ Inspector::Inspector(Document& doc, QWidget* parent)
     showPart(std::nullopt);
 }
 
+Inspector::~Inspector() {
+    for (const Row& row : m_rows)
+        for (QObject* w : {static_cast<QObject*>(row.edit), static_cast<QObject*>(row.combo),
+                           static_cast<QObject*>(row.check), static_cast<QObject*>(row.pairBox)})
+            if (w)
+                w->disconnect(this);
+}
+
 QSize Inspector::sizeHint() const {
     return {400, 600};
 }
@@ -116,6 +124,7 @@ void Inspector::clearForm() {
                 continue;
             if (QWidget* w = item->widget()) {
                 w->disconnect(this); // hiding a focused editor emits editingFinished
+                w->setObjectName(QString()); // gone from the form, though deleted later
                 w->hide();
                 w->deleteLater();
             }

@@ -21,6 +21,8 @@ class Inspector : public QWidget {
     Q_OBJECT
 public:
     explicit Inspector(Document& doc, QWidget* parent = nullptr);
+    /// Cuts the editors off first: a focused editor emits editingFinished as it is destroyed.
+    ~Inspector() override;
     /// Shows this part (or nothing).
     void showPart(std::optional<PartId> id);
     QSize sizeHint() const override;

@@ -121,6 +121,10 @@ MainWindow::~MainWindow() {
     // QWidget deletes the docks, view and scene after this class's part of the object is gone;
     // cut every connection into this window first so no late signal (a scene clearing its
     // selection, a list losing its current row) reaches a half-destroyed MainWindow.
+    // The Document is a member and goes before the child widgets: drop the Inspector's form
+    // now, or a focused editor's editingFinished (sent as the window tears down) would reach
+    // a Document that no longer exists.
+    m_inspector->showPart(std::nullopt);
     for (QObject* child : findChildren<QObject*>())
         child->disconnect(this);
     m_doc.disconnect(this);
@@ -235,12 +239,16 @@ QString MainWindow::applyFix(const Finding& f) {
                         m_view->verticalScrollBar()->value());
     m_doc.undoStack().push(new SetFieldsCommand(
         m_doc, after, tr("Apply fix: %1").arg(QString::fromStdString(f.fix->description))));
-    m_scene->clearSelection();
-    for (auto id : selected.empty() ? std::vector<PartId>{after.front().id} : selected)
-        if (auto* item = m_scene->itemFor(id))
-            item->setSelected(true);
-    m_view->horizontalScrollBar()->setValue(scroll.x());
-    m_view->verticalScrollBar()->setValue(scroll.y());
+    // After the re-check and the panels' refresh (queued), put the selection and view back.
+    const auto keep = selected.empty() ? std::vector<PartId>{after.front().id} : selected;
+    QTimer::singleShot(0, this, [this, keep, scroll] {
+        m_scene->clearSelection();
+        for (auto id : keep)
+            if (auto* item = m_scene->itemFor(id))
+                item->setSelected(true);
+        m_view->horizontalScrollBar()->setValue(scroll.x());
+        m_view->verticalScrollBar()->setValue(scroll.y());
+    });
     return {};
 }
 

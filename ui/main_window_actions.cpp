@@ -124,9 +124,9 @@ void MainWindow::buildFileMenu() {
                 plainMessage(this, QMessageBox::Warning, tr("Export failed"), why);
     });
     file->addSeparator();
-    menuAction(file, tr("&Close"), QKeySequence::Close, this, [this] { close(); });
+    menuAction(file, tr("&Close"), QKeySequence(tr("Ctrl+W")), this, [this] { close(); });
     // Quit asks each window about its unsaved drawing; one Cancel keeps the program running.
-    menuAction(file, tr("&Quit"), QKeySequence::Quit, this, [] {
+    menuAction(file, tr("&Quit"), QKeySequence(tr("Ctrl+Q")), this, [] {
         QApplication::closeAllWindows();
         for (QWidget* w : QApplication::topLevelWidgets())
             if (qobject_cast<MainWindow*>(w) && w->isVisible())
@@ -140,7 +140,11 @@ void MainWindow::buildEditMenu() {
     auto* undo = m_doc.undoStack().createUndoAction(this, tr("&Undo"));
     undo->setShortcut(QKeySequence::Undo);
     auto* redo = m_doc.undoStack().createRedoAction(this, tr("&Redo"));
-    redo->setShortcut(QKeySequence::Redo);
+    // Every binding the platform has for Redo (Ctrl+Shift+Z and Ctrl+Y on Linux).
+    auto redoKeys = QKeySequence::keyBindings(QKeySequence::Redo);
+    if (!redoKeys.contains(QKeySequence(tr("Ctrl+Y"))))
+        redoKeys << QKeySequence(tr("Ctrl+Y"));
+    redo->setShortcuts(redoKeys);
     edit->addAction(undo);
     edit->addAction(redo);
     edit->addSeparator();

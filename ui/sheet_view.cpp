@@ -73,6 +73,7 @@ void SheetView::mousePressEvent(QMouseEvent* e) {
     if (e->button() == Qt::LeftButton) {
         if (auto t = terminalAt(sp)) {
             m_wireFrom = t;
+            m_wirePress = e->pos();
             m_rubberWire =
                 m_scene->addLine(QLineF(sp, sp), QPen(QColor(0x1d, 0x7f, 0xb8), 1.2, Qt::DashLine));
             return;
@@ -111,6 +112,15 @@ void SheetView::mouseReleaseEvent(QMouseEvent* e) {
     if (m_rubberWire) {
         delete m_rubberWire;
         m_rubberWire = nullptr;
+        if (m_wireFrom && (e->pos() - m_wirePress).manhattanLength() < 4) {
+            // A click on a terminal (a bus bar is one terminal along its length) selects.
+            if (auto* item = m_scene->itemFor(m_wireFrom->part)) {
+                m_scene->clearSelection();
+                item->setSelected(true);
+            }
+            m_wireFrom.reset();
+            return;
+        }
         auto to = terminalAt(mapToScene(e->pos()));
         if (to && m_wireFrom &&
             !(to->part == m_wireFrom->part && to->terminal == m_wireFrom->terminal))

@@ -43,6 +43,7 @@ private:
     SheetScene* m_scene;
     std::optional<PartKind> m_placeKind;
     std::optional<WireEnd> m_wireFrom;
+    QPoint m_wirePress; ///< where a wire drag began, in view pixels
     QGraphicsLineItem* m_rubberWire = nullptr;
     std::vector<std::pair<PartId, QPointF>> m_pressPositions;
     bool m_panning = false;

@@ -22,6 +22,7 @@
 #include <QTimer>
 #include <QTreeWidget>
 #include <gtest/gtest.h>
+#include <memory>
 
 namespace lineward::ui::test {
 
@@ -107,8 +108,16 @@ void User::dragWire(WireEnd from, WireEnd to) {
 void User::clickPart(PartId id) {
     PartItem* item = m_w.scene()->itemFor(id);
     ASSERT_NE(item, nullptr);
-    // The middle of what can be clicked (a bus bar spans its feeders, not its origin).
-    const QPointF at = item->mapToScene(item->shape().boundingRect().center());
+    // A point of the part that nothing lies on (a bus bar carries its wires' ends).
+    const QRectF r = item->shape().boundingRect();
+    QPointF at = item->mapToScene(r.center());
+    for (qreal f : {0.5, 0.3, 0.7, 0.15, 0.85}) {
+        const QPointF p = item->mapToScene(QPointF(r.left() + f * r.width(), r.center().y()));
+        if (m_w.scene()->itemAt(p, m_w.view()->transform()) == item) {
+            at = p;
+            break;
+        }
+    }
     QTest::mouseClick(m_w.view()->viewport(), Qt::LeftButton, {}, viewPoint(at));
     settle();
 }
@@ -178,12 +187,12 @@ void User::choose(const QString& name, const QString& label) {
         return;
     const int index = box->findText(label);
     ASSERT_GE(index, 0) << label.toStdString() << " is not offered in " << name.toStdString();
-    // Open the list with a click and click the entry, as a person does.
-    QTest::mouseClick(box, Qt::LeftButton, {}, box->rect().center());
-    QAbstractItemView* list = box->view();
-    ASSERT_TRUE(QTest::qWaitForWindowExposed(list->window()));
-    const QRect r = list->visualRect(list->model()->index(index, box->modelColumn()));
-    QTest::mouseClick(list->viewport(), Qt::LeftButton, {}, r.center());
+    // Focus the closed box and type the entry's words, as a person does with the keyboard.
+    // (Clicking would open the list; offscreen its popup cannot grab the keyboard, so the
+    // box takes focus as by Tab and the words are typed into it.)
+    box->setFocus(Qt::TabFocusReason);
+    QTest::keyClicks(box, label);
+    EXPECT_EQ(box->currentIndex(), index) << label.toStdString();
     settle();
 }
 
@@ -216,6 +225,7 @@ void User::clickApplyFix() {
 }
 
 void User::press(Qt::Key key, Qt::KeyboardModifiers mods) {
+    QApplication::setActiveWindow(&m_w); // a closed dialog may have taken activation
     QWidget* target = QApplication::focusWidget() ? QApplication::focusWidget() : &m_w;
     QTest::keyClick(target, key, mods);
     settle();
@@ -244,10 +254,17 @@ void User::answerMessageBox(QMessageBox::StandardButton button, QString* text) {
     // Poll: the box may open after other queued work.
     auto* timer = new QTimer;
     timer->setInterval(50);
-    QObject::connect(timer, &QTimer::timeout, [timer, button, text] {
+    auto tries = std::make_shared<int>(0);
+    QObject::connect(timer, &QTimer::timeout, [timer, button, text, tries] {
         auto* box = qobject_cast<QMessageBox*>(QApplication::activeModalWidget());
-        if (!box)
+        if (!box) {
+            if (++*tries > 100) { // 5 s: no box came; do not answer a later test's box
+                timer->stop();
+                timer->deleteLater();
+                ADD_FAILURE() << "no message box opened";
+            }
             return;
+        }
         timer->stop();
         timer->deleteLater();
         if (text)
