@@ -15,7 +15,6 @@
 
 namespace lineward::ui {
 
-
 /// Owns the Drawing of one window; re-checks it through the core after every change.
 class Document : public QObject {
     Q_OBJECT

@@ -16,12 +16,9 @@ void report(QWidget* parent, const QString& what, const QString& why) {
     // Queued: the handler that failed may be inside a paint or a widget's own signal.
     QPointer<QWidget> guard(parent);
     QTimer::singleShot(0, qApp, [guard, what, why] {
-        QMessageBox box(QMessageBox::Warning, QObject::tr("Lineward"),
-                        QObject::tr("%1 could not be completed. The drawing is unchanged.\n\n%2")
-                            .arg(what, why),
-                        QMessageBox::Ok, guard.data());
-        box.setTextFormat(Qt::PlainText); // the reason may quote text from a file
-        box.exec();
+        plainMessage(guard.data(), QMessageBox::Warning, QObject::tr("Lineward"),
+                     QObject::tr("%1 could not be completed. The drawing is unchanged.\n\n%2")
+                         .arg(what, why));
     });
 }
 
@@ -49,9 +46,13 @@ bool runGuarded(QWidget* parent, const QString& what, const std::function<void()
 Application::Application(int& argc, char** argv) : QApplication(argc, argv) {}
 
 bool Application::notify(QObject* receiver, QEvent* event) {
-    bool handled = false;
-    runGuarded(nullptr, tr("An action"), [&] { handled = QApplication::notify(receiver, event); });
-    return handled;
+    // Every event passes here: no allocation or translation lookup unless something threw.
+    try {
+        return QApplication::notify(receiver, event);
+    } catch (...) {
+        runGuarded(nullptr, tr("An action"), [] { throw; });
+    }
+    return false;
 }
 
 } // namespace lineward::ui

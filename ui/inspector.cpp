@@ -123,7 +123,7 @@ void Inspector::clearForm() {
             if (!item)
                 continue;
             if (QWidget* w = item->widget()) {
-                w->disconnect(this); // hiding a focused editor emits editingFinished
+                w->disconnect(this);         // hiding a focused editor emits editingFinished
                 w->setObjectName(QString()); // gone from the form, though deleted later
                 w->hide();
                 w->deleteLater();
@@ -142,7 +142,8 @@ void Inspector::buildForm(const Part& p) {
     tag->setObjectName("field_tag");
     m_rows.push_back(Row{});
     m_rows.back().edit = tag;
-    connect(tag, &QLineEdit::editingFinished, this, guarded(this, tr("Renaming the part"), [this, tag] {
+    connect(tag, &QLineEdit::editingFinished, this,
+            guarded(this, tr("Renaming the part"), [this, tag] {
                 if (!tag->isModified())
                     return;
                 tag->setModified(false);
@@ -350,8 +351,7 @@ QString Inspector::commitTag(const QString& text) {
     Part trial = *p;
     trial.tag = t.toStdString();
     if (!(trial == *p))
-        emit editRequested(trial, tr("Rename %1 to %2")
-                                      .arg(QString::fromStdString(p->tag), t));
+        emit editRequested(trial, tr("Rename %1 to %2").arg(QString::fromStdString(p->tag), t));
     if (const Part* now = current())
         refreshValues(*now);
     return {};

@@ -8,8 +8,8 @@
 #include "commands/move_parts_command.h"
 #include "commands/set_fields_command.h"
 #include "curves_panel.h"
-#include "guard.h"
 #include "findings_panel.h"
+#include "guard.h"
 #include "inspector.h"
 #include "io/drawing_file.h"
 #include "model/part_defaults.h"
@@ -33,10 +33,10 @@
 #include <QMenuBar>
 #include <QMessageBox>
 #include <QMimeData>
+#include <QScrollBar>
 #include <QSettings>
 #include <QStatusBar>
 #include <QTimer>
-#include <QScrollBar>
 
 namespace lineward::ui {
 
@@ -58,7 +58,8 @@ MainWindow::MainWindow(std::shared_ptr<const Tables> tables, QWidget* parent)
         return d;
     };
     dock(m_palette, tr("Parts"), "partsDock", Qt::LeftDockWidgetArea);
-    auto* inspectorDock = dock(m_inspector, tr("Inspector"), "inspectorDock", Qt::RightDockWidgetArea);
+    auto* inspectorDock =
+        dock(m_inspector, tr("Inspector"), "inspectorDock", Qt::RightDockWidgetArea);
     auto* f = dock(m_findings, tr("Findings"), "findingsDock", Qt::BottomDockWidgetArea);
     auto* s = dock(m_schedules, tr("Schedules"), "schedulesDock", Qt::BottomDockWidgetArea);
     auto* c = dock(m_curves, tr("Curves"), "curvesDock", Qt::BottomDockWidgetArea);
@@ -79,10 +80,12 @@ MainWindow::MainWindow(std::shared_ptr<const Tables> tables, QWidget* parent)
             }));
     connect(m_palette, &PartsPalette::kindChosen, m_view,
             [this](PartKind k) { m_view->setPlaceKind(k); });
-    connect(m_view, &SheetView::placeRequested, this,
-            guarded(this, tr("Placing a part"), [this](PartKind k, QPointF at) { placePart(k, at); }));
-    connect(m_view, &SheetView::connectRequested, this,
-            guarded(this, tr("Connecting"), [this](WireEnd a, WireEnd b) { connectTerminals(a, b); }));
+    connect(
+        m_view, &SheetView::placeRequested, this,
+        guarded(this, tr("Placing a part"), [this](PartKind k, QPointF at) { placePart(k, at); }));
+    connect(
+        m_view, &SheetView::connectRequested, this,
+        guarded(this, tr("Connecting"), [this](WireEnd a, WireEnd b) { connectTerminals(a, b); }));
     connect(m_view, &SheetView::moveFinished, this,
             guarded(this, tr("Moving parts"),
                     [this](std::vector<PartId> ids, std::vector<QPointF> from,
@@ -104,7 +107,8 @@ MainWindow::MainWindow(std::shared_ptr<const Tables> tables, QWidget* parent)
 
     buildActions();
     m_recovery = std::make_unique<RecoverySlot>();
-    connect(m_autosave, &QTimer::timeout, this, guarded(this, tr("Autosave"), [this] { autosave(); }));
+    connect(m_autosave, &QTimer::timeout, this,
+            guarded(this, tr("Autosave"), [this] { autosave(); }));
     bool ok = false;
     const int seconds = qEnvironmentVariableIntValue("LINEWARD_AUTOSAVE_SECONDS", &ok);
     m_autosave->start((ok && seconds > 0 ? seconds : 60) * 1000);

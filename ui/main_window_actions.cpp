@@ -188,11 +188,11 @@ void MainWindow::printPreview() {
     QPrintPreviewDialog preview(&printer, this);
     connect(&preview, &QPrintPreviewDialog::paintRequested, this,
             guarded(this, tr("Print preview"), [this](QPrinter* p) {
-        SubmittalOptions o;
-        o.paper = p->pageLayout().pageSize();
-        o.orientation = p->pageLayout().orientation();
-        paintSubmittal(*p, m_doc.drawing(), m_doc.sharedTables(), o);
-    }));
+                SubmittalOptions o;
+                o.paper = p->pageLayout().pageSize();
+                o.orientation = p->pageLayout().orientation();
+                paintSubmittal(*p, m_doc.drawing(), m_doc.sharedTables(), o);
+            }));
     preview.exec();
 }
 

@@ -15,9 +15,8 @@ namespace {
 
 // Asks about one drawing; returns the button chosen.
 QMessageBox::StandardButton askAbout(QWidget* parent, const LeftSlot& slot) {
-    const QString name = slot.originalPath.isEmpty()
-                             ? QObject::tr("an untitled drawing")
-                             : QFileInfo(slot.originalPath).fileName();
+    const QString name = slot.originalPath.isEmpty() ? QObject::tr("an untitled drawing")
+                                                     : QFileInfo(slot.originalPath).fileName();
     QMessageBox box(QMessageBox::Question, QObject::tr("Recover drawing"),
                     QObject::tr("Lineward was not closed normally. It kept unsaved changes to %1 "
                                 "(autosaved %2).\n\nOpen them? Discard deletes the copy; Later "

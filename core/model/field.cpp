@@ -71,12 +71,10 @@ std::optional<std::string> checkNumber(const FieldSpec& spec, double v, FieldNam
     if (v < spec.minValue || (spec.minExclusive && v == spec.minValue)) {
         if (spec.minExclusive && spec.minValue == 0.0)
             return key + " must be greater than 0 (got " + unit(v) + ")";
-        return key + " " + unit(v) + " is below the smallest accepted value " +
-               unit(spec.minValue);
+        return key + " " + unit(v) + " is below the smallest accepted value " + unit(spec.minValue);
     }
     if (v > spec.maxValue)
-        return key + " " + unit(v) + " is above the largest accepted value " +
-               unit(spec.maxValue);
+        return key + " " + unit(v) + " is above the largest accepted value " + unit(spec.maxValue);
     return std::nullopt;
 }
 

@@ -52,8 +52,8 @@ std::optional<std::string> Part::set(std::string_view key, FieldValue v, FieldNa
     return set({{key, std::move(v)}}, naming);
 }
 
-std::optional<std::string> Part::set(const std::vector<std::pair<std::string_view, FieldValue>>& changes,
-                                     FieldNaming naming) {
+std::optional<std::string>
+Part::set(const std::vector<std::pair<std::string_view, FieldValue>>& changes, FieldNaming naming) {
     Part trial = *this;
     trial.values.resize(kindInfo(kind).fields.size());
     for (const auto& [key, v] : changes) {
@@ -100,8 +100,8 @@ void temperatureColumn(const Part& p, std::string_view key, FieldNaming naming,
                        std::vector<std::string>& out) {
     auto t = p.number(key);
     if (t && *t != 60 && *t != 75 && *t != 90)
-        out.push_back(nameOf(p, key, naming) + " must be 60, 75 or 90 °C (got " +
-                      formatNumber(*t) + ")");
+        out.push_back(nameOf(p, key, naming) + " must be 60, 75 or 90 °C (got " + formatNumber(*t) +
+                      ")");
 }
 
 } // namespace

@@ -2,12 +2,11 @@
 #include "rules/check.h"
 
 #include "rules/drawing_rules.h"
+#include "rules/rule_catalog.h"
 #include "rules/rule_context.h"
 #include "rules/topology_rules.h"
 #include "topology/flow.h"
 #include "topology/network.h"
-
-#include "rules/rule_catalog.h"
 
 #include <algorithm>
 #include <optional>
@@ -42,8 +41,7 @@ void markAccepted(const Drawing& d, std::vector<Finding>& findings) {
 // Runs one family; an internal error in it becomes a finding instead of ending the check (the
 // editor calls this from a worker thread and a Qt slot, where an exception would end the
 // program and lose the user's work).
-template <typename Fn>
-void runFamily(const char* family, std::vector<Finding>& out, Fn&& fn) {
+template <typename Fn> void runFamily(const char* family, std::vector<Finding>& out, Fn&& fn) {
     try {
         fn();
     } catch (const std::exception& e) {

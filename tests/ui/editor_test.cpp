@@ -16,11 +16,11 @@
 
 #include <QApplication>
 #include <QComboBox>
+#include <QFile>
 #include <QLabel>
 #include <QLineEdit>
-#include <QTimer>
-#include <QFile>
 #include <QTest>
+#include <QTimer>
 #include <QTreeWidget>
 #include <chrono>
 #include <gtest/gtest.h>
@@ -33,17 +33,6 @@ using test::sharedTables;
 using test::User;
 
 namespace {
-
-std::string bytes(MainWindow& w) {
-    return io::serializeDrawing(w.document().drawing());
-}
-
-const Finding* findingOf(MainWindow& w, const std::string& rule) {
-    for (const auto& f : w.document().report().findings)
-        if (f.ruleId == rule)
-            return &f;
-    return nullptr;
-}
 
 // Answers the input dialogs of Group as Bucket (tag, then SCCR) by pressing Enter.
 void acceptInputDialogs(int count) {
@@ -61,7 +50,7 @@ TEST(Editor, InspectorRefusesBadValuesWithReasons) {
     User user(w);
     const PartId m = user.clickToPlace(PartKind::Motor, QPointF(0, 0));
     user.clickPart(m);
-    const auto before = bytes(w);
+    const auto before = test::drawingBytes(w);
     user.type("hp_or_kw", "-5", Commit::Enter);
     EXPECT_TRUE(user.inspectorMessage().startsWith("Refused:"));
     EXPECT_TRUE(user.inspectorMessage().contains("Rated output (hp) must be greater than 0"))
@@ -72,7 +61,7 @@ TEST(Editor, InspectorRefusesBadValuesWithReasons) {
     EXPECT_TRUE(user.inspectorMessage().contains("above the largest"));
     user.type("tag", "  ", Commit::Enter);
     EXPECT_TRUE(user.inspectorMessage().contains("empty"));
-    EXPECT_EQ(bytes(w), before); // nothing applied, nothing clamped
+    EXPECT_EQ(test::drawingBytes(w), before); // nothing applied, nothing clamped
     user.type("hp_or_kw", "15", Commit::Enter);
     EXPECT_TRUE(user.inspectorMessage().isEmpty());
     EXPECT_EQ(*w.document().drawing().part(m)->number("hp"), 15);
@@ -108,7 +97,8 @@ TEST(Editor, ChoicesShowWordsAndLabelsShowUnits) {
     QStringList labels;
     for (auto* l : w.inspector()->findChildren<QLabel*>())
         labels << l->text();
-    EXPECT_TRUE(labels.contains("Nameplate full-load current (A)")) << labels.join(" | ").toStdString();
+    EXPECT_TRUE(labels.contains("Nameplate full-load current (A)"))
+        << labels.join(" | ").toStdString();
     EXPECT_FALSE(labels.contains("fla"));
     user.choose("field_rotor", "wound rotor");
     EXPECT_EQ(*w.document().drawing().part(m)->word("rotor"), "wound_rotor");
@@ -121,17 +111,17 @@ TEST(Editor, EveryCommandUndoesToTheSameBytes) {
     auto& stack = w.document().undoStack();
     const Drawing& d = w.document().drawing();
     auto check = [&](const char* what, const std::function<void()>& act) {
-        const auto before = bytes(w);
+        const auto before = test::drawingBytes(w);
         const int index = stack.index();
         act();
         user.settle();
         ASSERT_EQ(stack.index(), index + 1) << what; // exactly one command per action
-        const auto after = bytes(w);
+        const auto after = test::drawingBytes(w);
         EXPECT_NE(after, before) << what;
         stack.undo();
-        EXPECT_EQ(bytes(w), before) << what;
+        EXPECT_EQ(test::drawingBytes(w), before) << what;
         stack.redo();
-        EXPECT_EQ(bytes(w), after) << what;
+        EXPECT_EQ(test::drawingBytes(w), after) << what;
         stack.undo();
         user.settle();
     };
@@ -172,7 +162,7 @@ TEST(Editor, MoveDragPushesOneMergedCommand) {
     const int count = stack.count();
     for (int i = 1; i <= 3; ++i)
         user.dragPart(id, QPointF(0, 10)); // press, move, release: one move per drag
-    EXPECT_EQ(stack.count(), count + 1); // repeated moves of the same part merge
+    EXPECT_EQ(stack.count(), count + 1);   // repeated moves of the same part merge
     EXPECT_EQ(w.document().drawing().part(id)->y, 30);
     user.press(Qt::Key_Z, Qt::ControlModifier);
     EXPECT_EQ(w.document().drawing().part(id)->y, 0);
@@ -194,7 +184,7 @@ TEST(Editor, RandomEditsUndoneGiveBackTheOriginalBytes) {
     MainWindow w(sharedTables());
     ASSERT_TRUE(w.openFile(test::samplePath("kestrel-mill-mcc1-review.lineward"), true).isEmpty());
     User user(w);
-    const auto original = bytes(w);
+    const auto original = test::drawingBytes(w);
     std::mt19937 rng(20261202);
     const Drawing& d = w.document().drawing();
     auto randomPart = [&] { return d.parts()[rng() % d.parts().size()].id; };
@@ -247,7 +237,7 @@ TEST(Editor, RandomEditsUndoneGiveBackTheOriginalBytes) {
     EXPECT_GE(edits, 120);
     while (w.document().undoStack().canUndo())
         w.document().undoStack().undo();
-    EXPECT_EQ(bytes(w), original);
+    EXPECT_EQ(test::drawingBytes(w), original);
 }
 
 TEST(Editor, LargePlantIsCheckedOffTheGuiThread) {
@@ -260,7 +250,7 @@ TEST(Editor, LargePlantIsCheckedOffTheGuiThread) {
     user.clickPart(w.document().drawing().partByTag("C-1-4")->id);
     user.type("size", "14 AWG", Commit::Enter);
     w.document().waitForCheck();
-    EXPECT_NE(findingOf(w, "branch.conductor.ampacity"), nullptr);
+    EXPECT_NE(test::findingOf(w, "branch.conductor.ampacity"), nullptr);
 }
 
 TEST(Editor, AutosaveWritesARecoveryCopyWithoutTouchingTheDocument) {
@@ -274,7 +264,7 @@ TEST(Editor, AutosaveWritesARecoveryCopyWithoutTouchingTheDocument) {
     user.clickToPlace(PartKind::Load, QPointF(3000, 0));
     QTest::qWait(1300);
     ASSERT_TRUE(QFile::exists(w.recoveryPath()));
-    EXPECT_EQ(test::fileBytes(w.recoveryPath()), bytes(w));
+    EXPECT_EQ(test::fileBytes(w.recoveryPath()), test::drawingBytes(w));
     EXPECT_TRUE(w.document().isModified()); // still unsaved; the file path is unchanged
     EXPECT_TRUE(w.document().filePath().endsWith("kestrel-mill-mcc1.lineward"));
 }

@@ -31,8 +31,8 @@ void emptyRecoveryFolder() {
 
 // What a window that crashed leaves: its autosaved drawing and the name of its file, no lock.
 QString leaveSlot(const std::string& drawingBytes, const QString& originalPath) {
-    const QString base = RecoverySlot::folder() + "/" +
-                         QUuid::createUuid().toString(QUuid::WithoutBraces);
+    const QString base =
+        RecoverySlot::folder() + "/" + QUuid::createUuid().toString(QUuid::WithoutBraces);
     EXPECT_FALSE(io::writeFileAtomic((base + ".lineward").toStdString(), drawingBytes));
     const std::string origin = originalPath.toStdString() + "\n";
     EXPECT_FALSE(io::writeFileAtomic((base + ".origin").toStdString(), origin));

@@ -24,15 +24,8 @@ using test::User;
 
 namespace {
 
-std::string bytes(MainWindow& w) {
-    return io::serializeDrawing(w.document().drawing());
-}
-
 bool hasFinding(MainWindow& w, const std::string& rule) {
-    for (const auto& f : w.document().report().findings)
-        if (f.ruleId == rule)
-            return true;
-    return false;
+    return test::findingOf(w, rule) != nullptr;
 }
 
 double number(MainWindow& w, PartId id, const char* key) {
@@ -55,8 +48,8 @@ TEST(Scenario, DrawTypeFixUndoSaveReopenWithRealInput) {
                                  : user.clickToPlace(kinds[i], at));
     }
     ASSERT_EQ(w.document().drawing().parts().size(), 8u);
-    const PartId src = ids[0], tx = ids[1], bus = ids[2], cb = ids[3], ol = ids[5],
-                 cable = ids[6], motor = ids[7];
+    const PartId src = ids[0], tx = ids[1], bus = ids[2], cb = ids[3], ol = ids[5], cable = ids[6],
+                 motor = ids[7];
     // 9–15: wires dragged from terminal to terminal.
     user.dragWire({src, 0}, {tx, 0});
     user.dragWire({tx, 1}, {bus, 0});
@@ -112,7 +105,7 @@ TEST(Scenario, DrawTypeFixUndoSaveReopenWithRealInput) {
     EXPECT_DOUBLE_EQ(number(w, motor, "fla"), 32);
 
     // 31–33: refused values show the reason, by label and unit, and change nothing.
-    const std::string good = bytes(w);
+    const std::string good = test::drawingBytes(w);
     user.type("fla", "-3", Commit::Enter);
     EXPECT_TRUE(user.inspectorMessage().startsWith("Refused: Nameplate full-load current (A)"))
         << user.inspectorMessage().toStdString();
@@ -121,7 +114,7 @@ TEST(Scenario, DrawTypeFixUndoSaveReopenWithRealInput) {
     user.type("volts", "1e9", Commit::ClickAway);
     EXPECT_TRUE(user.inspectorMessage().contains("above the largest accepted value"));
     EXPECT_FALSE(user.inspectorMessage().contains("volts")); // the label, never the file key
-    EXPECT_EQ(bytes(w), good);
+    EXPECT_EQ(test::drawingBytes(w), good);
 
     // 34–36: 25 hp on the starter's 12 AWG cable: NEC 2023 430.22 needs 1.25 × 34 A (Table
     // 430.250, 460 V) = 42.5 A, more than 12 AWG carries. The badge appears on the cable.
@@ -135,16 +128,16 @@ TEST(Scenario, DrawTypeFixUndoSaveReopenWithRealInput) {
     EXPECT_FALSE(hasFinding(w, "branch.conductor.ampacity"));
     EXPECT_NE(*w.document().drawing().part(cable)->word("size"), "12 AWG");
     EXPECT_TRUE(cableItem->isSelected()); // Apply fix keeps the part selected
-    const std::string fixed = bytes(w);
+    const std::string fixed = test::drawingBytes(w);
 
     // 37–38: undo and redo from the keyboard.
     user.clickEmptySheet();
     user.press(Qt::Key_Z, Qt::ControlModifier);
     EXPECT_TRUE(hasFinding(w, "branch.conductor.ampacity"));
-    EXPECT_EQ(bytes(w), good);
+    EXPECT_EQ(test::drawingBytes(w), good);
     user.press(Qt::Key_Y, Qt::ControlModifier); // Redo
     EXPECT_FALSE(hasFinding(w, "branch.conductor.ampacity"));
-    EXPECT_EQ(bytes(w), fixed);
+    EXPECT_EQ(test::drawingBytes(w), fixed);
 
     // 39–41: save with Ctrl+S into the file dialog, reopen with Ctrl+O: the same bytes.
     const QString path = test::tempDir("scenario") + "/lineup.lineward";
@@ -155,7 +148,7 @@ TEST(Scenario, DrawTypeFixUndoSaveReopenWithRealInput) {
     EXPECT_EQ(test::fileBytes(path), fixed);
     user.answerFileDialogWith(path);
     user.press(Qt::Key_O, Qt::ControlModifier);
-    EXPECT_EQ(bytes(w), test::fileBytes(path));
+    EXPECT_EQ(test::drawingBytes(w), test::fileBytes(path));
     EXPECT_EQ(w.document().drawing().parts().size(), 8u);
 }
 

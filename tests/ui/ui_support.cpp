@@ -2,6 +2,8 @@
 #include "ui_support.h"
 
 #include "guard.h"
+#include "io/drawing_file.h"
+#include "main_window.h"
 
 #include <QApplication>
 #include <QDir>
@@ -26,6 +28,17 @@ std::string fileBytes(const QString& path) {
     std::ostringstream s;
     s << in.rdbuf();
     return s.str();
+}
+
+std::string drawingBytes(MainWindow& w) {
+    return io::serializeDrawing(w.document().drawing());
+}
+
+const Finding* findingOf(MainWindow& w, const std::string& rule) {
+    for (const auto& f : w.document().report().findings)
+        if (f.ruleId == rule)
+            return &f;
+    return nullptr;
 }
 
 QString tempDir(const char* name) {

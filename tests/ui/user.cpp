@@ -64,8 +64,7 @@ PartId User::dragFromPalette(PartKind kind, QPointF scenePos) {
     EXPECT_NE(palette, nullptr);
     QListWidgetItem* item = palette->item(static_cast<int>(kind));
     // The palette's own drag data, delivered as a drop delivers it: enter, move, drop.
-    std::unique_ptr<QMimeData> data(
-        palette->model()->mimeData({palette->indexFromItem(item)}));
+    std::unique_ptr<QMimeData> data(palette->model()->mimeData({palette->indexFromItem(item)}));
     QWidget* target = m_w.view()->viewport();
     const QPoint at = viewPoint(scenePos);
     QDragEnterEvent enter(at, Qt::CopyAction, data.get(), Qt::LeftButton, Qt::NoModifier);
@@ -208,8 +207,7 @@ bool User::clickFinding(const QString& rule) {
         if (row->text(1) != rule)
             continue;
         list->scrollToItem(row);
-        QTest::mouseClick(list->viewport(), Qt::LeftButton, {},
-                          list->visualItemRect(row).center());
+        QTest::mouseClick(list->viewport(), Qt::LeftButton, {}, list->visualItemRect(row).center());
         settle();
         return true;
     }
