@@ -170,23 +170,25 @@ bool PartItem::labelOnLeft() const {
            m_roomLeft > m_roomRight;
 }
 
+qreal PartItem::gap() const {
+    return m_part.kind == PartKind::Bus ? 12.0 : kLabelGap; // a bus's badge sits at its end
+}
+
 bool PartItem::ratingsWrapped() const {
-    if (m_part.kind == PartKind::Bus || m_ratingHalves.isEmpty())
+    if (m_ratingHalves.isEmpty())
         return false;
-    const qreal room = (labelOnLeft() ? m_roomLeft : m_roomRight) - kLabelGap - kLabelMargin;
+    const qreal room = (labelOnLeft() ? m_roomLeft : m_roomRight) - gap() - kLabelMargin;
     return m_labelWidth > room;
 }
 
 QRectF PartItem::labelRect() const {
     const QRectF sym = uprightSymbolRect();
-    if (m_part.kind == PartKind::Bus)
-        return QRectF(sym.right() + 12, sym.center().y() - 18, m_labelWidth, 27);
     const bool left = labelOnLeft();
-    const qreal room = (left ? m_roomLeft : m_roomRight) - kLabelGap - kLabelMargin;
+    const qreal room = (left ? m_roomLeft : m_roomRight) - gap() - kLabelMargin;
     const bool wrapped = ratingsWrapped();
     // The ratings are shortened to the room; the tag, which names the part, never is.
     const qreal w = std::max(m_tagWidth, std::min(wrapped ? m_wrappedWidth : m_labelWidth, room));
-    const qreal x = left ? sym.left() - kLabelGap - w : sym.right() + kLabelGap;
+    const qreal x = left ? sym.left() - gap() - w : sym.right() + gap();
     return QRectF(x, sym.center().y() - 16, w, wrapped ? 40 : 27);
 }
 
@@ -224,7 +226,7 @@ QString PartItem::ratingText() const {
     case PartKind::InstBreaker:
         return num(p, "amps", " A") + "  " + num(p, "pickup_a", " A inst");
     case PartKind::Fuse:
-        return num(p, "amps", " A") + " " +
+        return num(p, "amps", " A") + "  " +
                QString::fromStdString(p.word("fuse_type").value_or("")).replace('_', '-');
     case PartKind::Disconnect:
         return num(p, "amps", " A");

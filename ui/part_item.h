@@ -65,6 +65,7 @@ private:
     qreal labelWidth() const { return m_labelWidth; }
     /// Whether the ratings go on two lines (they do not fit the room on one).
     bool ratingsWrapped() const;
+    qreal gap() const; ///< between the symbol and its label
     Part m_part;
     qreal m_barLeft = -60, m_barRight = 60;
     qreal m_roomRight = kLabelWidth, m_roomLeft = 0;

@@ -73,8 +73,6 @@ void SheetScene::layoutLabels() {
         addWireRuns(grid, w);
     const qreal most = PartItem::kLabelWidth + 12;
     for (auto& [id, item] : m_parts) {
-        if (item->part().kind == PartKind::Bus)
-            continue;
         const QRectF sym = item->symbolSceneRect();
         // the label's band, with room for ratings wrapped onto a second line
         const qreal top = sym.center().y() - 16, bottom = sym.center().y() + 24;

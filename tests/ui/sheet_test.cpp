@@ -205,7 +205,10 @@ TEST(Sheet, SampleLabelsCrossNoSymbolLabelOrWire) {
         s.shot((std::string(sample) + "-zoomed").c_str());
         const auto bad = crossings(s);
         EXPECT_TRUE(bad.empty()) << sample << ": " << bad.size() << " crossings, first "
-                                 << (bad.empty() ? "" : bad.front());
+                                 << (bad.empty() ? "" : bad.front())
+                                 << (bad.size() > 1 ? "; " + bad[1] : "")
+                                 << (bad.size() > 2 ? "; " + bad[2] : "")
+                                 << (bad.size() > 3 ? "; " + bad[3] : "");
         // Every tag is shown whole (only ratings are shortened): its label is as wide as it.
         QFont bold;
         bold.setPixelSize(10);
