@@ -76,6 +76,16 @@ void SheetScene::selectionLost() {
     });
 }
 
+void SheetScene::deleteItem(QGraphicsItem* item) {
+    const bool selected = item->isSelected();
+    {
+        const QSignalBlocker quiet(this);
+        delete item;
+    }
+    if (selected)
+        selectionLost();
+}
+
 std::vector<PartId> SheetScene::selectedParts() const {
     std::vector<PartId> out;
     for (auto* gi : selectedItems())
@@ -139,13 +149,7 @@ void SheetScene::onPartAdded(PartId id) {
 void SheetScene::onPartRemoved(PartId id) {
     if (auto* item = itemFor(id)) {
         m_parts.erase(id);
-        if (item->isSelected()) {
-            const QSignalBlocker quiet(this);
-            delete item;
-            selectionLost();
-        } else {
-            delete item;
-        }
+        deleteItem(item);
     }
     scheduleRoute();
 }
@@ -166,13 +170,7 @@ void SheetScene::onWireAdded(WireId id) {
 void SheetScene::onWireRemoved(WireId id) {
     if (auto* item = wireItem(id)) {
         m_wires.erase(id);
-        if (item->isSelected()) {
-            const QSignalBlocker quiet(this);
-            delete item;
-            selectionLost();
-        } else {
-            delete item;
-        }
+        deleteItem(item);
     }
     scheduleRoute();
 }

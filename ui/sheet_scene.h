@@ -44,6 +44,7 @@ private:
     void layoutLabels();
     void refreshBuckets();
     void selectionLost();
+    void deleteItem(QGraphicsItem* item); ///< a selected one tells selectionChanged once, later
     void refreshBadges();
     void onPartAdded(PartId id);
     void onPartRemoved(PartId id);
