@@ -11,6 +11,7 @@
 #include <QTimer>
 #include <spdlog/spdlog.h>
 #include <thread>
+#include <unordered_set>
 
 namespace lineward::ui {
 
@@ -133,6 +134,47 @@ void Document::removeBucket(BucketId id) {
 
 void Document::replaceBucket(const Bucket& bucket) {
     m_drawing.updateBucket(bucket);
+    emit bucketsChanged();
+    changed();
+}
+
+void Document::addParts(const std::vector<Part>& parts) {
+    m_drawing.addParts(parts);
+    for (const auto& p : parts)
+        emit partAdded(p.id);
+    changed();
+}
+
+void Document::removeParts(const std::vector<PartId>& ids) {
+    std::unordered_set<std::uint32_t> gone;
+    for (auto id : ids)
+        gone.insert(id.value);
+    std::vector<WireId> wires;
+    for (const auto& w : m_drawing.wires())
+        if (gone.count(w.a.part.value) || gone.count(w.b.part.value))
+            wires.push_back(w.id);
+    removeWires(wires);
+    for (const auto& p : m_drawing.removeParts(ids))
+        emit partRemoved(p.id);
+    emit bucketsChanged();
+    changed();
+}
+
+void Document::addWires(const std::vector<Wire>& wires) {
+    m_drawing.addWires(wires);
+    for (const auto& w : wires)
+        emit wireAdded(w.id);
+    changed();
+}
+
+void Document::removeWires(const std::vector<WireId>& ids) {
+    for (const auto& w : m_drawing.removeWires(ids))
+        emit wireRemoved(w.id);
+    changed();
+}
+
+void Document::replaceBuckets(const std::vector<Bucket>& buckets) {
+    m_drawing.updateBuckets(buckets);
     emit bucketsChanged();
     changed();
 }

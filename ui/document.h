@@ -53,6 +53,12 @@ public:
     void addBucket(const Bucket& bucket);
     void removeBucket(BucketId id);
     void replaceBucket(const Bucket& bucket);
+    // bulk forms: one pass over the drawing for many parts (Select All, then Delete or undo)
+    void addParts(const std::vector<Part>& parts);
+    void removeParts(const std::vector<PartId>& ids); ///< with every wire on them
+    void addWires(const std::vector<Wire>& wires);
+    void removeWires(const std::vector<WireId>& ids);
+    void replaceBuckets(const std::vector<Bucket>& buckets);
     void setSheet(const SheetInfo& sheet);
     void setAccepted(const std::vector<Accepted>& accepted);
 

@@ -183,7 +183,8 @@ QString MainWindow::openFile(const QString& path, bool quiet) {
 }
 
 PartId MainWindow::placePart(PartKind kind, QPointF at) {
-    Part p = makeStarterPart(kind, m_doc.drawing().nextPartId(), nextTag(m_doc.drawing(), kind));
+    // Its voltage follows the terminal it is dropped by (within 60 units), or the system's.
+    Part p = makeStarterPart(m_doc.drawing(), kind, m_scene->nearestTerminal(at, 60));
     p.x = at.x();
     p.y = at.y();
     const PartId id = p.id;

@@ -27,7 +27,6 @@
 #include <QSettings>
 #include <QStatusBar>
 #include <functional>
-#include <map>
 #include <set>
 
 namespace lineward::ui {
@@ -155,10 +154,8 @@ void MainWindow::buildEditMenu() {
     menuAction(edit, tr("&Copy"), QKeySequence::Copy, this, [this] { copySelection(); });
     menuAction(edit, tr("&Paste"), QKeySequence::Paste, this, [this] { paste(); });
     menuAction(edit, tr("&Delete"), QKeySequence::Delete, this, [this] { deleteSelection(); });
-    menuAction(edit, tr("Select &All"), QKeySequence::SelectAll, this, [this] {
-        for (auto* item : m_scene->items())
-            item->setSelected(true);
-    });
+    menuAction(edit, tr("Select &All"), QKeySequence::SelectAll, this,
+               [this] { m_scene->selectEverything(); });
     edit->addSeparator();
     menuAction(edit, tr("&Rotate"), QKeySequence(tr("Ctrl+R")), this,
                [this] { rotateSelection(); });
@@ -253,45 +250,15 @@ void MainWindow::paste() {
                                  8000);
         return;
     }
-    // New ids and tags after the drawing's own; the copy lands 40 units down and right.
-    const Drawing& src = *loaded.drawing;
-    std::map<std::uint32_t, PartId> newId;
-    std::vector<Part> parts;
-    Drawing probe = m_doc.drawing();
-    for (const auto& p : src.parts()) {
-        Part q = p;
-        q.id = probe.nextPartId();
-        q.x += 40;
-        q.y += 40;
-        if (probe.partByTag(q.tag))
-            q.tag = nextTag(probe, q.kind);
-        newId[p.id.value] = q.id;
-        probe.addPart(q);
-        parts.push_back(q);
-    }
-    std::vector<Wire> wires;
-    WireId nextWire = m_doc.drawing().nextWireId();
-    for (const auto& w : src.wires()) {
-        wires.push_back(Wire{nextWire,
-                             {newId[w.a.part.value], w.a.terminal},
-                             {newId[w.b.part.value], w.b.terminal}});
-        nextWire = WireId(nextWire.value + 1);
-    }
-    std::vector<Bucket> buckets;
-    BucketId nextBucket = m_doc.drawing().nextBucketId();
-    for (const auto& b : src.buckets()) {
-        Bucket nb{nextBucket, b.tag + "-copy", b.sccrKa, {}};
-        for (auto p : b.parts)
-            nb.parts.push_back(newId[p.value]);
-        buckets.push_back(nb);
-        nextBucket = BucketId(nextBucket.value + 1);
-    }
-    m_doc.undoStack().push(
-        new AddPartsCommand(m_doc, parts, wires, buckets, tr("Paste %1 parts").arg(parts.size())));
-    m_scene->clearSelection();
-    for (const auto& p : parts)
-        if (auto* item = m_scene->itemFor(p.id))
-            item->setSelected(true);
+    // New ids; tags renumbered with their bucket; each copy lands 40 units further (core).
+    PasteSet set = preparePaste(m_doc.drawing(), *loaded.drawing);
+    std::vector<PartId> ids;
+    for (const auto& p : set.parts)
+        ids.push_back(p.id);
+    m_doc.undoStack().push(new AddPartsCommand(m_doc, std::move(set.parts), std::move(set.wires),
+                                               std::move(set.buckets),
+                                               tr("Paste %1 parts").arg(ids.size())));
+    m_scene->selectParts(ids);
 }
 
 void MainWindow::groupSelectionAsBucket() {

@@ -5,6 +5,7 @@
 
 #include "severity_style.h"
 
+#include <QFontMetricsF>
 #include <QPainter>
 #include <QStyleOptionGraphicsItem>
 #include <QSvgRenderer>
@@ -39,6 +40,16 @@ QSvgRenderer* symbolRenderer(PartKind kind) {
 constexpr qreal kHalf = 20.0; // terminals sit 20 units above and below the centre
 const QColor kInk(0x22, 0x2a, 0x33);
 const QColor kSelect(0x1d, 0x7f, 0xb8);
+constexpr qreal kLabelGap = 8.0;    // between a symbol and its label
+constexpr qreal kLabelMargin = 8.0; // kept free before the next symbol or wire
+
+// Label fonts sized in scene units, so screen, print and measurement agree.
+QFont labelFont(bool bold) {
+    QFont f;
+    f.setPixelSize(10);
+    f.setBold(bold);
+    return f;
+}
 
 QString num(const Part& p, const char* key, const char* unit) {
     auto v = p.number(key);
@@ -53,6 +64,7 @@ PartItem::PartItem(const Part& part) : m_part(part) {
     setFlag(ItemIsMovable);
     setFlag(ItemSendsGeometryChanges);
     setData(0, QVariant::fromValue<quint32>(part.id.value));
+    refreshText();
 }
 
 void PartItem::setPart(const Part& part) {
@@ -60,6 +72,7 @@ void PartItem::setPart(const Part& part) {
     m_part = part;
     setPos(part.x, part.y);
     setRotation(part.rotation);
+    refreshText();
     update();
 }
 
@@ -69,11 +82,14 @@ int PartItem::terminalCount() const {
 
 QPainterPath PartItem::shape() const {
     QPainterPath p;
-    if (m_part.kind == PartKind::Bus)
-        p.addRect(QRectF(m_barLeft, -6, m_barRight - m_barLeft, 12));
-    else
-        p.addRect(QRectF(-16, -22, 32, 44));
+    p.addRect(symbolRect());
     return p;
+}
+
+QRectF PartItem::symbolRect() const {
+    if (m_part.kind == PartKind::Bus)
+        return QRectF(m_barLeft, -6, m_barRight - m_barLeft, 12);
+    return QRectF(-16, -22, 32, 44);
 }
 
 QVariant PartItem::itemChange(GraphicsItemChange change, const QVariant& value) {
@@ -93,7 +109,41 @@ void PartItem::setBarSpan(qreal left, qreal right) {
 
 void PartItem::setBadge(std::optional<Severity> worst, const QString& tooltip) {
     m_badge = worst;
-    setToolTip(tooltip);
+    m_badgeTip = tooltip;
+    refreshText();
+    update();
+}
+
+void PartItem::refreshText() {
+    const QString tag = QString::fromStdString(m_part.tag), ratings = ratingText();
+    const QFontMetricsF bold(labelFont(true)), plain(labelFont(false));
+    const qreal tagW = bold.horizontalAdvance(tag);
+    m_tagWidth = std::ceil(tagW) + 2;
+    m_labelWidth =
+        std::min(kLabelWidth, std::ceil(std::max(tagW, plain.horizontalAdvance(ratings))) + 2);
+    // Where two ratings are shown, they may go on two lines in a narrow place.
+    m_ratingHalves.clear();
+    m_wrappedWidth = m_labelWidth;
+    if (const int gap = ratings.indexOf("  "); gap > 0) {
+        m_ratingHalves = {ratings.left(gap), ratings.mid(gap + 2)};
+        m_wrappedWidth = std::min(
+            kLabelWidth, std::ceil(std::max({tagW, plain.horizontalAdvance(m_ratingHalves[0]),
+                                             plain.horizontalAdvance(m_ratingHalves[1])})) +
+                             2);
+    }
+    // The whole label, for when it is shortened to fit, then the findings.
+    QString tip = tag + "  " + ratings;
+    if (!m_badgeTip.isEmpty())
+        tip += "\n" + m_badgeTip;
+    setToolTip(tip);
+}
+
+void PartItem::setLabelRoom(qreal right, qreal left) {
+    if (right == m_roomRight && left == m_roomLeft)
+        return;
+    prepareGeometryChange();
+    m_roomRight = right;
+    m_roomLeft = left;
     update();
 }
 
@@ -109,10 +159,55 @@ QPointF PartItem::terminalScenePos(int terminal, QPointF toward) const {
     return mapToScene(QPointF(0, m_part.kind == PartKind::Source ? kHalf : -kHalf));
 }
 
+QRectF PartItem::uprightSymbolRect() const {
+    return QTransform().rotate(m_part.rotation).mapRect(symbolRect());
+}
+
+bool PartItem::labelOnLeft() const {
+    // Right unless it does not fit there and the left has more room.
+    return m_part.kind != PartKind::Bus &&
+           m_roomRight < std::min(m_labelWidth, m_wrappedWidth) + kLabelGap + kLabelMargin &&
+           m_roomLeft > m_roomRight;
+}
+
+qreal PartItem::gap() const {
+    return m_part.kind == PartKind::Bus ? 12.0 : kLabelGap; // a bus's badge sits at its end
+}
+
+bool PartItem::ratingsWrapped() const {
+    if (m_ratingHalves.isEmpty())
+        return false;
+    const qreal room = (labelOnLeft() ? m_roomLeft : m_roomRight) - gap() - kLabelMargin;
+    return m_labelWidth > room;
+}
+
+QRectF PartItem::labelRect() const {
+    const QRectF sym = uprightSymbolRect();
+    const bool left = labelOnLeft();
+    const qreal room = (left ? m_roomLeft : m_roomRight) - gap() - kLabelMargin;
+    const bool wrapped = ratingsWrapped();
+    // The ratings are shortened to the room; the tag, which names the part, never is.
+    const qreal w = std::max(m_tagWidth, std::min(wrapped ? m_wrappedWidth : m_labelWidth, room));
+    const qreal x = left ? sym.left() - gap() - w : sym.right() + gap();
+    return QRectF(x, sym.center().y() - 16, w, wrapped ? 40 : 27);
+}
+
 QRectF PartItem::boundingRect() const {
-    if (m_part.kind == PartKind::Bus)
-        return QRectF(m_barLeft - 10, -30, m_barRight - m_barLeft + 140, 50);
-    return QRectF(-30, -30, 190, 60);
+    // Painted in the upright frame: map that back into the item's rotated one.
+    const QRectF upright = uprightSymbolRect().united(labelRect()).adjusted(-8, -8, 8, 8);
+    return QTransform().rotate(-m_part.rotation).mapRect(upright);
+}
+
+QRectF PartItem::symbolSceneRect() const {
+    return uprightSymbolRect().translated(pos());
+}
+
+QRectF PartItem::labelSceneRect() const {
+    return labelRect().translated(pos());
+}
+
+QRectF PartItem::footprintSceneRect() const {
+    return uprightSymbolRect().united(labelRect()).translated(pos());
 }
 
 QString PartItem::ratingText() const {
@@ -131,7 +226,7 @@ QString PartItem::ratingText() const {
     case PartKind::InstBreaker:
         return num(p, "amps", " A") + "  " + num(p, "pickup_a", " A inst");
     case PartKind::Fuse:
-        return num(p, "amps", " A") + " " +
+        return num(p, "amps", " A") + "  " +
                QString::fromStdString(p.word("fuse_type").value_or("")).replace('_', '-');
     case PartKind::Disconnect:
         return num(p, "amps", " A");
@@ -171,48 +266,77 @@ void PartItem::paintSymbol(QPainter* p) const {
         pen.setWidthF(2.2);
         p->setPen(pen);
         p->drawLine(QPointF(-12, 12), QPointF(12, -12));
-        p->drawText(QRectF(-30, 12, 26, 10), Qt::AlignRight, "open");
     }
 }
 
-void PartItem::paint(QPainter* p, const QStyleOptionGraphicsItem* option, QWidget*) {
-    p->setRenderHint(QPainter::Antialiasing);
-    QPen pen(isSelected() ? kSelect : kInk, 1.6);
-    p->setPen(pen);
-    QFont f = p->font();
-    f.setPointSizeF(7.5);
-    p->setFont(f);
-    paintSymbol(p);
+void PartItem::paintLabel(QPainter* p) const {
+    const QRectF r = labelRect();
+    const Qt::Alignment side = (labelOnLeft() ? Qt::AlignRight : Qt::AlignLeft) | Qt::AlignVCenter;
+    const QFont bold = labelFont(true), plain = labelFont(false);
     p->setPen(isSelected() ? kSelect : kInk);
-    const qreal textX = m_part.kind == PartKind::Bus ? m_barRight + 16 : 24;
-    const qreal textY = m_part.kind == PartKind::Bus ? -18 : -16;
-    QFont bold = f;
-    bold.setBold(true);
     p->setFont(bold);
-    p->drawText(QRectF(textX, textY, 130, 14), Qt::AlignLeft | Qt::AlignVCenter,
-                QString::fromStdString(m_part.tag));
-    p->setFont(f);
+    p->drawText(QRectF(r.left(), r.top(), r.width(), 14), side, QString::fromStdString(m_part.tag));
+    p->setFont(plain);
     p->setPen(QColor(0x55, 0x5f, 0x6a));
-    p->drawText(QRectF(textX, textY + 13, 130, 14), Qt::AlignLeft | Qt::AlignVCenter, ratingText());
-    if (m_badge) {
-        // upper right of the symbol, between it and the tag
-        const QPointF at =
-            m_part.kind == PartKind::Bus ? QPointF(m_barRight + 2, -12) : QPointF(14, -14);
-        p->save();
-        p->translate(at);
-        p->setPen(QPen(Qt::white, 1.2));
-        p->setBrush(severityColor(*m_badge));
-        p->drawPath(severityShape(*m_badge, 13));
-        p->setPen(Qt::white);
-        QFont bf = f;
-        bf.setBold(true);
-        bf.setPointSizeF(6.5);
-        p->setFont(bf);
-        p->drawText(QRectF(-6, -6, 12, 12), Qt::AlignCenter,
-                    *m_badge == Severity::Note ? "i" : "!");
-        p->restore();
+    const QStringList lines = ratingsWrapped() ? m_ratingHalves : QStringList{ratingText()};
+    for (int i = 0; i < lines.size(); ++i)
+        p->drawText(QRectF(r.left(), r.top() + 13 + 13 * i, r.width(), 14), side,
+                    QFontMetricsF(plain).elidedText(lines[i], Qt::ElideRight, r.width()));
+}
+
+void PartItem::paintBadge(QPainter* p) const {
+    // upper right of the symbol, between it and the tag
+    const QRectF sym = uprightSymbolRect();
+    const QPointF at = m_part.kind == PartKind::Bus
+                           ? QPointF(sym.right() + 2, sym.center().y() - 12)
+                           : QPointF(sym.right() - 2, sym.top() + 8);
+    p->save();
+    p->translate(at);
+    p->setPen(QPen(Qt::white, 1.2));
+    p->setBrush(severityColor(*m_badge));
+    p->drawPath(severityShape(*m_badge, 13));
+    p->setPen(Qt::white);
+    QFont bf = labelFont(true);
+    bf.setPixelSize(9);
+    p->setFont(bf);
+    p->drawText(QRectF(-6, -6, 12, 12), Qt::AlignCenter, *m_badge == Severity::Note ? "i" : "!");
+    p->restore();
+}
+
+void PartItem::paint(QPainter* p, const QStyleOptionGraphicsItem* option, QWidget*) {
+    // Below this scale a label would be a few pixels of grey: draw symbols and badges only.
+    const qreal lod = option->levelOfDetailFromTransform(p->worldTransform());
+    p->setRenderHint(QPainter::Antialiasing);
+    p->setFont(labelFont(false));
+    p->setPen(QPen(isSelected() ? kSelect : kInk, 1.6));
+    if (lod < 0.15 && m_part.kind != PartKind::Bus)
+        p->drawLine(QPointF(0, -20), QPointF(0, 20)); // a stroke where the symbol is
+    else
+        paintSymbol(p);
+    // The text is painted in the scene's orientation, whatever the part's rotation.
+    p->save();
+    p->rotate(-m_part.rotation);
+    if (isSelected()) {
+        // Our selection mark: a tinted, dashed frame around symbol and label.
+        QPen frame(kSelect, 1.2, Qt::DashLine);
+        frame.setCosmetic(true);
+        p->setPen(frame);
+        p->setBrush(QColor(0x1d, 0x7f, 0xb8, 30));
+        const QRectF around =
+            lod < 0.45 ? uprightSymbolRect() : uprightSymbolRect().united(labelRect());
+        p->drawRoundedRect(around.adjusted(-5, -5, 5, 5), 4, 4);
+        p->setBrush(Qt::NoBrush);
     }
-    (void)option;
+    if (lod >= 0.45)
+        paintLabel(p);
+    if (lod >= 0.45 && m_part.isOpen()) {
+        const QRectF sym = uprightSymbolRect();
+        p->setPen(kInk);
+        p->drawText(QRectF(sym.left() - 14, sym.bottom() - 10, 26, 10), Qt::AlignRight, "open");
+    }
+    if (m_badge)
+        paintBadge(p);
+    p->restore();
 }
 
 } // namespace lineward::ui

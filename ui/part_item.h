@@ -1,4 +1,5 @@
-// Scene item drawing one part's symbol, tag, key ratings and its findings badge.
+// Scene item drawing one part's symbol, tag, key ratings and its findings badge. The text stays
+// upright when the part is rotated and goes to the side with free room.
 #pragma once
 
 #include "model/part.h"
@@ -30,10 +31,24 @@ public:
     /// Worst open finding on this part (drawn as a badge) and its tooltip text.
     void setBadge(std::optional<Severity> worst, const QString& tooltip);
     std::optional<Severity> badge() const { return m_badge; }
+    /// Free width (scene units) beside the symbol, right and left, up to the next part; the
+    /// label goes to the side with room and is shortened to fit.
+    void setLabelRoom(qreal right, qreal left);
+    /// Whether the label is drawn left of the symbol (no room on the right).
+    bool labelOnLeft() const;
+    /// The symbol's extent in scene coordinates (what a neighbour's label must not cross).
+    QRectF symbolSceneRect() const;
+    /// The label (tag and ratings) as drawn, in scene coordinates.
+    QRectF labelSceneRect() const;
+    /// Symbol and label as drawn, in scene coordinates (the bucket outline goes around it).
+    QRectF footprintSceneRect() const;
 
     QRectF boundingRect() const override;
     QPainterPath shape() const override;
     void paint(QPainter* p, const QStyleOptionGraphicsItem* option, QWidget* widget) override;
+
+    /// Widest label text (scene units) drawn beside a symbol.
+    static constexpr qreal kLabelWidth = 130;
 
 protected:
     QVariant itemChange(GraphicsItemChange change, const QVariant& value) override;
@@ -41,9 +56,25 @@ protected:
 private:
     QString ratingText() const;
     void paintSymbol(QPainter* p) const;
+    void paintLabel(QPainter* p) const;
+    void paintBadge(QPainter* p) const;
+    void refreshText();        ///< tooltip and the label's measured width, after the part changes
+    QRectF symbolRect() const; ///< item coordinates
+    QRectF uprightSymbolRect() const; ///< the symbol in the text's upright frame
+    QRectF labelRect() const;         ///< upright frame: where the tag and ratings go
+    qreal labelWidth() const { return m_labelWidth; }
+    /// Whether the ratings go on two lines (they do not fit the room on one).
+    bool ratingsWrapped() const;
+    qreal gap() const; ///< between the symbol and its label
     Part m_part;
     qreal m_barLeft = -60, m_barRight = 60;
+    qreal m_roomRight = kLabelWidth, m_roomLeft = 0;
+    qreal m_tagWidth = 0;               ///< the tag is never shortened
+    qreal m_labelWidth = kLabelWidth;   ///< tag and ratings on one line each
+    qreal m_wrappedWidth = kLabelWidth; ///< ratings split in two at their middle gap
+    QStringList m_ratingHalves;         ///< the two halves, or empty when there is no gap
     std::optional<Severity> m_badge;
+    QString m_badgeTip;
 };
 
 } // namespace lineward::ui

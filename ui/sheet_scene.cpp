@@ -1,11 +1,13 @@
 // Sheet scene: the scene owns every item; an item is deleted when its part or wire goes.
 #include "sheet_scene.h"
 
+#include "bucket_item.h"
 #include "part_item.h"
 #include "rules/report_format.h"
 #include "wire_item.h"
 
 #include <QPainter>
+#include <QSignalBlocker>
 #include <QTimer>
 #include <algorithm>
 #include <cmath>
@@ -20,6 +22,7 @@ SheetScene::SheetScene(Document& doc, QObject* parent) : QGraphicsScene(parent),
     connect(&doc, &Document::partChanged, this, &SheetScene::onPartChanged);
     connect(&doc, &Document::wireAdded, this, &SheetScene::onWireAdded);
     connect(&doc, &Document::wireRemoved, this, &SheetScene::onWireRemoved);
+    connect(&doc, &Document::bucketsChanged, this, &SheetScene::scheduleRoute);
     rebuild();
 }
 
@@ -31,6 +34,56 @@ PartItem* SheetScene::itemFor(PartId id) const {
 WireItem* SheetScene::wireItem(WireId id) const {
     auto it = m_wires.find(id);
     return it == m_wires.end() ? nullptr : it->second;
+}
+
+BucketItem* SheetScene::bucketItem(BucketId id) const {
+    auto it = m_buckets.find(id);
+    return it == m_buckets.end() ? nullptr : it->second;
+}
+
+void SheetScene::selectParts(const std::vector<PartId>& ids) {
+    // One item at a time would emit selectionChanged per item, and each listener reads the
+    // whole selection: quadratic on a large drawing. Select quietly, then tell once.
+    {
+        const QSignalBlocker quiet(this);
+        clearSelection();
+        for (auto id : ids)
+            if (auto* item = itemFor(id))
+                item->setSelected(true);
+    }
+    emit selectionChanged();
+}
+
+void SheetScene::selectEverything() {
+    {
+        const QSignalBlocker quiet(this);
+        for (auto& [id, item] : m_parts)
+            item->setSelected(true);
+        for (auto& [id, item] : m_wires)
+            item->setSelected(true);
+    }
+    emit selectionChanged();
+}
+
+void SheetScene::selectionLost() {
+    // Deleting selected items changes the selection once per item: tell once, after the edit.
+    if (m_selectionPending)
+        return;
+    m_selectionPending = true;
+    QTimer::singleShot(0, this, [this] {
+        m_selectionPending = false;
+        emit selectionChanged();
+    });
+}
+
+void SheetScene::deleteItem(QGraphicsItem* item) {
+    const bool selected = item->isSelected();
+    {
+        const QSignalBlocker quiet(this);
+        delete item;
+    }
+    if (selected)
+        selectionLost();
 }
 
 std::vector<PartId> SheetScene::selectedParts() const {
@@ -50,11 +103,28 @@ std::vector<WireId> SheetScene::selectedWires() const {
     return out;
 }
 
+std::optional<WireEnd> SheetScene::nearestTerminal(QPointF at, qreal reach) const {
+    std::optional<WireEnd> best;
+    qreal bestD = reach;
+    for (auto* gi : items(QRectF(at - QPointF(reach, reach), QSizeF(2 * reach, 2 * reach))))
+        if (auto* item = qgraphicsitem_cast<PartItem*>(gi))
+            for (int t = 0; t < item->terminalCount(); ++t) {
+                const QPointF tp = item->terminalScenePos(t, at);
+                const qreal d = std::hypot(tp.x() - at.x(), tp.y() - at.y());
+                if (d <= bestD) {
+                    bestD = d;
+                    best = WireEnd{item->partId(), t};
+                }
+            }
+    return best;
+}
+
 void SheetScene::rebuild() {
     emit aboutToRebuild();
     clear();
     m_parts.clear();
     m_wires.clear();
+    m_buckets.clear();
     for (const auto& p : m_doc.drawing().parts()) {
         auto* item = new PartItem(p);
         addItem(item);
@@ -80,7 +150,7 @@ void SheetScene::onPartAdded(PartId id) {
 void SheetScene::onPartRemoved(PartId id) {
     if (auto* item = itemFor(id)) {
         m_parts.erase(id);
-        delete item;
+        deleteItem(item);
     }
     scheduleRoute();
 }
@@ -101,7 +171,7 @@ void SheetScene::onWireAdded(WireId id) {
 void SheetScene::onWireRemoved(WireId id) {
     if (auto* item = wireItem(id)) {
         m_wires.erase(id);
-        delete item;
+        deleteItem(item);
     }
     scheduleRoute();
 }
@@ -150,6 +220,8 @@ void SheetScene::routeWires() {
         const QPointF pb = b->terminalScenePos(w->wire().b.terminal, pa);
         w->route(pa, pb);
     }
+    layoutLabels();
+    refreshBuckets();
 }
 
 void SheetScene::refreshBadges() {

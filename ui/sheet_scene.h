@@ -9,6 +9,7 @@
 
 namespace lineward::ui {
 
+class BucketItem;
 class PartItem;
 class WireItem;
 
@@ -19,8 +20,15 @@ public:
     explicit SheetScene(Document& doc, QObject* parent = nullptr);
     PartItem* itemFor(PartId id) const;
     WireItem* wireItem(WireId id) const;
+    BucketItem* bucketItem(BucketId id) const;
+    /// Selects exactly these parts (or every part and wire) with one selectionChanged.
+    void selectParts(const std::vector<PartId>& ids);
+    void selectEverything();
     std::vector<PartId> selectedParts() const;
     std::vector<WireId> selectedWires() const;
+    /// The part terminal nearest a scene point within `reach`, if any (what a new part is
+    /// dropped onto).
+    std::optional<WireEnd> nearestTerminal(QPointF at, qreal reach) const;
     /// Sheet grid pitch in scene units.
     static constexpr qreal kGrid = 10.0;
     /// Re-routes wires between the items' current positions (also during a drag).
@@ -38,6 +46,10 @@ protected:
 
 private:
     void rebuild();
+    void layoutLabels();
+    void refreshBuckets();
+    void selectionLost();
+    void deleteItem(QGraphicsItem* item); ///< a selected one tells selectionChanged once, later
     void refreshBadges();
     void onPartAdded(PartId id);
     void onPartRemoved(PartId id);
@@ -47,6 +59,8 @@ private:
     Document& m_doc;
     std::unordered_map<PartId, PartItem*> m_parts;
     std::unordered_map<WireId, WireItem*> m_wires;
+    std::unordered_map<BucketId, BucketItem*> m_buckets;
+    bool m_selectionPending = false;
     bool m_routePending = false;
     bool m_printing = false;
     void scheduleRoute();

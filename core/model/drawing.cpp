@@ -2,7 +2,9 @@
 #include "model/drawing.h"
 
 #include <algorithm>
+#include <iterator>
 #include <stdexcept>
+#include <unordered_set>
 
 namespace lineward {
 
@@ -141,6 +143,86 @@ void Drawing::reindex() {
     for (std::size_t i = 0; i < m_buckets.size(); ++i)
         for (auto pid : m_buckets[i].parts)
             m_bucketOfPart[pid.value] = i;
+}
+
+// --- bulk edits ---
+
+namespace {
+template <typename T, typename IdOf> void sortById(std::vector<T>& v, IdOf idOf) {
+    if (!std::is_sorted(v.begin(), v.end(),
+                        [&](const T& a, const T& b) { return idOf(a) < idOf(b); }))
+        std::stable_sort(v.begin(), v.end(),
+                         [&](const T& a, const T& b) { return idOf(a) < idOf(b); });
+}
+} // namespace
+
+void Drawing::addParts(std::vector<Part> parts) {
+    std::unordered_set<std::uint32_t> fresh;
+    for (const auto& p : parts)
+        if (!p.id.valid() || part(p.id) || !fresh.insert(p.id.value).second)
+            throw std::invalid_argument("part id " + std::to_string(p.id.value) + " is in use");
+    for (auto& p : parts) {
+        m_maxPart = std::max(m_maxPart, p.id.value);
+        m_parts.push_back(std::move(p));
+    }
+    sortById(m_parts, [](const Part& p) { return p.id; });
+    reindex();
+}
+
+std::vector<Part> Drawing::removeParts(const std::vector<PartId>& ids) {
+    std::unordered_set<std::uint32_t> gone;
+    for (auto id : ids)
+        if (part(id))
+            gone.insert(id.value);
+    std::vector<Part> removed;
+    removed.reserve(gone.size());
+    auto isGone = [&](PartId id) { return gone.count(id.value) > 0; };
+    auto keep = std::stable_partition(m_parts.begin(), m_parts.end(),
+                                      [&](const Part& p) { return !isGone(p.id); });
+    std::move(keep, m_parts.end(), std::back_inserter(removed));
+    m_parts.erase(keep, m_parts.end());
+    std::erase_if(m_wires, [&](const Wire& w) { return isGone(w.a.part) || isGone(w.b.part); });
+    for (auto& b : m_buckets)
+        std::erase_if(b.parts, isGone);
+    reindex();
+    return removed;
+}
+
+void Drawing::addWires(std::vector<Wire> wires) {
+    std::unordered_set<std::uint32_t> fresh;
+    for (const auto& w : wires)
+        if (!w.id.valid() || wire(w.id) || !fresh.insert(w.id.value).second)
+            throw std::invalid_argument("wire id " + std::to_string(w.id.value) + " is in use");
+    for (auto& w : wires) {
+        m_maxWire = std::max(m_maxWire, w.id.value);
+        m_wires.push_back(w);
+    }
+    sortById(m_wires, [](const Wire& w) { return w.id; });
+}
+
+std::vector<Wire> Drawing::removeWires(const std::vector<WireId>& ids) {
+    std::unordered_set<std::uint32_t> gone;
+    for (auto id : ids)
+        gone.insert(id.value);
+    auto keep = std::stable_partition(m_wires.begin(), m_wires.end(),
+                                      [&](const Wire& w) { return !gone.count(w.id.value); });
+    std::vector<Wire> removed(keep, m_wires.end());
+    m_wires.erase(keep, m_wires.end());
+    return removed;
+}
+
+std::size_t Drawing::updateBuckets(const std::vector<Bucket>& buckets) {
+    std::size_t n = 0;
+    for (const auto& b : buckets) {
+        auto it = std::lower_bound(m_buckets.begin(), m_buckets.end(), b.id,
+                                   [](const Bucket& a, BucketId i) { return a.id < i; });
+        if (it != m_buckets.end() && it->id == b.id) {
+            *it = b;
+            ++n;
+        }
+    }
+    reindex();
+    return n;
 }
 
 } // namespace lineward

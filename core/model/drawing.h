@@ -117,6 +117,19 @@ public:
                m_wires == o.m_wires && m_buckets == o.m_buckets && m_accepted == o.m_accepted;
     }
 
+    // --- bulk edits: one pass and one reindex for many parts (Select All + Delete, undo) ---
+    /// Adds parts whose ids are all unused (checked before anything is added).
+    void addParts(std::vector<Part> parts);
+    /// Removes parts, every wire on them and their places in buckets; returns the removed
+    /// parts in id order.
+    std::vector<Part> removeParts(const std::vector<PartId>& ids);
+    /// Adds wires whose ids are all unused.
+    void addWires(std::vector<Wire> wires);
+    /// Removes wires; returns those removed in id order.
+    std::vector<Wire> removeWires(const std::vector<WireId>& ids);
+    /// Replaces each bucket with the same id (others are ignored); returns how many were.
+    std::size_t updateBuckets(const std::vector<Bucket>& buckets);
+
 private:
     void reindex();
     std::vector<Part> m_parts;

@@ -1,4 +1,4 @@
-// AddPartsCommand: redo adds in id order; undo removes in reverse.
+// AddPartsCommand: redo adds parts, wires, then buckets; undo takes them away again.
 #include "commands/add_parts_command.h"
 
 namespace lineward::ui {
@@ -11,10 +11,8 @@ AddPartsCommand::AddPartsCommand(Document& doc, std::vector<Part> parts, std::ve
 }
 
 void AddPartsCommand::redo() {
-    for (const auto& p : m_parts)
-        m_doc.addPart(p);
-    for (const auto& w : m_wires)
-        m_doc.addWire(w);
+    m_doc.addParts(m_parts);
+    m_doc.addWires(m_wires);
     for (const auto& b : m_buckets)
         m_doc.addBucket(b);
 }
@@ -22,10 +20,14 @@ void AddPartsCommand::redo() {
 void AddPartsCommand::undo() {
     for (auto it = m_buckets.rbegin(); it != m_buckets.rend(); ++it)
         m_doc.removeBucket(it->id);
-    for (auto it = m_wires.rbegin(); it != m_wires.rend(); ++it)
-        m_doc.removeWire(it->id);
-    for (auto it = m_parts.rbegin(); it != m_parts.rend(); ++it)
-        m_doc.removePart(it->id);
+    std::vector<WireId> wires;
+    for (const auto& w : m_wires)
+        wires.push_back(w.id);
+    m_doc.removeWires(wires);
+    std::vector<PartId> ids;
+    for (const auto& p : m_parts)
+        ids.push_back(p.id);
+    m_doc.removeParts(ids);
 }
 
 } // namespace lineward::ui

@@ -37,19 +37,20 @@ DeleteCommand::DeleteCommand(Document& doc, std::vector<PartId> parts, std::vect
 }
 
 void DeleteCommand::redo() {
+    std::vector<WireId> wires;
     for (const auto& w : m_wires)
-        m_doc.removeWire(w.id);
+        wires.push_back(w.id);
+    std::vector<PartId> parts;
     for (const auto& p : m_parts)
-        m_doc.removePart(p.id);
+        parts.push_back(p.id);
+    m_doc.removeWires(wires);
+    m_doc.removeParts(parts);
 }
 
 void DeleteCommand::undo() {
-    for (const auto& p : m_parts)
-        m_doc.addPart(p);
-    for (const auto& w : m_wires)
-        m_doc.addWire(w);
-    for (const auto& b : m_bucketsBefore)
-        m_doc.replaceBucket(b);
+    m_doc.addParts(m_parts);
+    m_doc.addWires(m_wires);
+    m_doc.replaceBuckets(m_bucketsBefore);
 }
 
 } // namespace lineward::ui
