@@ -4,6 +4,7 @@
 #include <algorithm>
 #include <charconv>
 #include <cmath>
+#include <cstdio>
 
 namespace lineward {
 
@@ -15,8 +16,21 @@ std::string formatNumber(double v) {
 
 namespace {
 
+constexpr std::string_view kRangeWhy =
+    "no low-voltage equipment is rated outside it (check the unit: V or kV, VA or kVA)";
+
+// Whole numbers in full (100000, not 1e+05): messages are for people.
+std::string readable(double v) {
+    if (v == std::floor(v) && std::abs(v) < 1e15) {
+        char buf[32];
+        std::snprintf(buf, sizeof buf, "%.0f", v);
+        return buf;
+    }
+    return formatNumber(v);
+}
+
 std::string withUnit(const FieldSpec& spec, double v) {
-    std::string s = formatNumber(v);
+    std::string s = readable(v);
     if (!spec.unit.empty())
         s += " " + std::string(spec.unit);
     return s;
@@ -30,15 +44,20 @@ std::optional<std::string> checkNumber(const FieldSpec& spec, double v) {
         return key + " is infinite";
     if (spec.type == FieldType::Integer && v != std::floor(v))
         return key + " must be a whole number (got " + formatNumber(v) + ")";
+    // The range is physical: what low-voltage motor-control equipment has. A value outside it
+    // is a slip (a unit, a missing digit), and a tiny one would make the studies divide by
+    // almost nothing.
+    const std::string range = "the accepted range is " + readable(spec.minValue) + " to " +
+                              withUnit(spec, spec.maxValue) + ": " + std::string(kRangeWhy);
     if (v < spec.minValue || (spec.minExclusive && v == spec.minValue)) {
         if (spec.minExclusive && spec.minValue == 0.0)
-            return key + " must be greater than 0 (got " + withUnit(spec, v) + ")";
+            return key + " must be greater than 0 (got " + withUnit(spec, v) + "); " + range;
         return key + " " + withUnit(spec, v) + " is below the smallest accepted value " +
-               withUnit(spec, spec.minValue);
+               withUnit(spec, spec.minValue) + "; " + range;
     }
     if (v > spec.maxValue)
         return key + " " + withUnit(spec, v) + " is above the largest accepted value " +
-               withUnit(spec, spec.maxValue);
+               withUnit(spec, spec.maxValue) + "; " + range;
     return std::nullopt;
 }
 
@@ -69,7 +88,8 @@ std::optional<std::string> validateField(const FieldSpec& spec, const FieldValue
             std::string list;
             for (auto c : spec.choices)
                 list += (list.empty() ? "" : ", ") + std::string(c);
-            return key + " '" + s + "' is not one of: " + list;
+            const std::string shown = s.size() > 60 ? s.substr(0, 60) + "..." : s;
+            return key + " '" + shown + "' is not one of: " + list;
         }
         return std::nullopt;
     }

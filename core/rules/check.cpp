@@ -4,6 +4,7 @@
 #include "rules/drawing_rules.h"
 #include "rules/rule_context.h"
 #include "rules/topology_rules.h"
+#include "studies/finite_guard.h"
 #include "topology/flow.h"
 #include "topology/network.h"
 
@@ -52,6 +53,7 @@ CheckReport checkDrawing(const Drawing& drawing, const Tables& tables) {
     checkVoltage(ctx, report.findings);
     checkCurves(ctx, report.findings);
     report.findings.insert(report.findings.end(), study.notes.begin(), study.notes.end());
+    guardFindingNumbers(report.findings);
     markAccepted(drawing, report.findings);
     std::stable_sort(report.findings.begin(), report.findings.end(),
                      [](const Finding& a, const Finding& b) {
