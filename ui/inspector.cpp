@@ -18,6 +18,7 @@ Inspector::Inspector(Document& doc, QWidget* parent)
     setObjectName("inspector");
     m_message->setObjectName("inspectorMessage");
     m_message->setWordWrap(true);
+    m_message->setTextFormat(Qt::PlainText); // refusals quote the file's text
     m_message->setStyleSheet("color: #b23a1e;");
     auto* inner = new QWidget;
     inner->setLayout(m_form);

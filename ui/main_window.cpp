@@ -14,6 +14,7 @@
 #include "model/part_defaults.h"
 #include "part_item.h"
 #include "parts_palette.h"
+#include "plain_text.h"
 #include "rules/report_format.h"
 #include "schedules_panel.h"
 #include "sheet_scene.h"
@@ -73,7 +74,7 @@ MainWindow::MainWindow(std::shared_ptr<const Tables> tables, QWidget* parent)
     connect(m_findings, &FindingsPanel::locatePart, this, &MainWindow::locate);
     connect(m_findings, &FindingsPanel::applyFixRequested, this, [this](const Finding& fnd) {
         if (auto why = applyFix(fnd); !why.isEmpty())
-            QMessageBox::warning(this, tr("Cannot apply fix"), why);
+            warnPlain(this, tr("Cannot apply fix"), why);
     });
     connect(m_palette, &PartsPalette::kindChosen, m_view,
             [this](PartKind k) { m_view->setPlaceKind(k); });
@@ -149,7 +150,7 @@ QString MainWindow::openFile(const QString& path, bool quiet) {
     const QString why = m_doc.open(path);
     if (!why.isEmpty()) {
         if (!quiet)
-            QMessageBox::warning(this, tr("Cannot open drawing"), why);
+            warnPlain(this, tr("Cannot open drawing"), why);
         return why;
     }
     addRecent(path);
@@ -274,7 +275,7 @@ bool MainWindow::maybeSave() {
         return false;
     const QString why = saveTo(path);
     if (!why.isEmpty())
-        QMessageBox::warning(this, tr("Save failed"), why);
+        warnPlain(this, tr("Save failed"), why);
     return why.isEmpty();
 }
 

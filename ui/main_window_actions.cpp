@@ -7,6 +7,7 @@
 #include "main_window.h"
 #include "model/part_defaults.h"
 #include "part_item.h"
+#include "plain_text.h"
 #include "sheet_scene.h"
 #include "sheet_view.h"
 #include "submittal.h"
@@ -18,7 +19,6 @@
 #include <QFileDialog>
 #include <QInputDialog>
 #include <QMenuBar>
-#include <QMessageBox>
 #include <QMimeData>
 #include <QPrintDialog>
 #include <QPrintPreviewDialog>
@@ -79,13 +79,13 @@ void MainWindow::buildFileMenu() {
         if (!path.isEmpty())
             if (auto why = saveTo(path.endsWith(".lineward") ? path : path + ".lineward");
                 !why.isEmpty())
-                QMessageBox::warning(this, tr("Save failed"), why);
+                warnPlain(this, tr("Save failed"), why);
     };
     menuAction(file, tr("&Save"), QKeySequence::Save, this, [this, saveAs] {
         if (m_doc.filePath().isEmpty())
             return saveAs();
         if (auto why = saveTo(m_doc.filePath()); !why.isEmpty())
-            QMessageBox::warning(this, tr("Save failed"), why);
+            warnPlain(this, tr("Save failed"), why);
     });
     menuAction(file, tr("Save &As…"), QKeySequence::SaveAs, this, saveAs);
     file->addSeparator();
@@ -100,7 +100,7 @@ void MainWindow::buildFileMenu() {
             return;
         auto r = writeSubmittalPdf(path, m_doc.drawing(), m_doc.sharedTables(), SubmittalOptions{});
         if (!r.error.isEmpty())
-            QMessageBox::warning(this, tr("Export failed"), r.error);
+            warnPlain(this, tr("Export failed"), r.error);
         else
             statusBar()->showMessage(tr("Wrote %1 (%2 pages)").arg(path).arg(r.pages), 8000);
     });
@@ -110,13 +110,13 @@ void MainWindow::buildFileMenu() {
         if (!path.isEmpty())
             if (auto why = writeOneLineSvg(path, m_doc.drawing(), m_doc.sharedTables());
                 !why.isEmpty())
-                QMessageBox::warning(this, tr("Export failed"), why);
+                warnPlain(this, tr("Export failed"), why);
     });
     menuAction(file, tr("Export Schedules &CSV…"), QKeySequence(), this, [this] {
         const auto dir = QFileDialog::getExistingDirectory(this, tr("Folder for the schedules"));
         if (!dir.isEmpty())
             if (auto why = writeScheduleCsvs(dir, m_doc.drawing(), m_doc.tables()); !why.isEmpty())
-                QMessageBox::warning(this, tr("Export failed"), why);
+                warnPlain(this, tr("Export failed"), why);
     });
     file->addSeparator();
     menuAction(file, tr("&Quit"), QKeySequence::Quit, this, [this] { close(); });
@@ -190,7 +190,7 @@ void MainWindow::printSubmittal() {
     o.orientation = printer.pageLayout().orientation();
     auto r = paintSubmittal(printer, m_doc.drawing(), m_doc.sharedTables(), o);
     if (!r.error.isEmpty())
-        QMessageBox::warning(this, tr("Print failed"), r.error);
+        warnPlain(this, tr("Print failed"), r.error);
 }
 
 void MainWindow::copySelection() {

@@ -3,6 +3,7 @@
 // square for a breaker, a rectangle for a fuse, a heater loop for a thermal overload.
 #include "part_item.h"
 
+#include "plain_text.h"
 #include "severity_style.h"
 
 #include <QPainter>
@@ -93,7 +94,7 @@ void PartItem::setBarSpan(qreal left, qreal right) {
 
 void PartItem::setBadge(std::optional<Severity> worst, const QString& tooltip) {
     m_badge = worst;
-    setToolTip(tooltip);
+    setToolTip(plainToolTip(tooltip));
     update();
 }
 

@@ -120,7 +120,7 @@ TEST(Editor, InspectorRefusesBadValuesWithReasons) {
     const PartId m = w.placePart(PartKind::Motor, QPointF(0, 0));
     select(w, m);
     const auto before = bytes(w);
-    EXPECT_TRUE(w.inspector()->commit("hp", "-5").contains("greater than 0"));
+    EXPECT_TRUE(w.inspector()->commit("hp", "-5").contains("below the smallest accepted value"));
     EXPECT_TRUE(w.inspector()->message().startsWith("Refused:"));
     EXPECT_TRUE(w.inspector()->commit("hp", "ten").contains("not a number"));
     EXPECT_TRUE(w.inspector()->commit("volts", "1e9").contains("above the largest"));
