@@ -3,6 +3,7 @@
 #include "io/drawing_file.h"
 #include "rules/check.h"
 #include "rules/report_format.h"
+#include "util/safe_text.h"
 
 #include <iostream>
 #include <memory>
@@ -25,7 +26,7 @@ int runCheck(const CheckOptions& o, const Tables& tables) {
     for (const auto& file : o.files) {
         auto loaded = io::loadDrawing(file);
         if (!loaded) {
-            std::cerr << "lineward-cli: " << loaded.error->text() << "\n";
+            std::cerr << "lineward-cli: " << escapeControls(loaded.error->text()) << "\n";
             spdlog::info("check: refused {}: {}", file, loaded.error->message);
             anyBad = true;
             continue;
@@ -56,7 +57,7 @@ std::optional<Drawing> loadForVerb(const std::string& file, int& exitCode) {
     auto loaded = io::loadDrawing(file);
     if (loaded)
         return std::move(*loaded.drawing);
-    std::cerr << "lineward-cli: " << loaded.error->text() << "\n";
+    std::cerr << "lineward-cli: " << escapeControls(loaded.error->text()) << "\n";
     exitCode = kBadInput;
     return std::nullopt;
 }

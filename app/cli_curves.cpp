@@ -2,6 +2,7 @@
 #include "cli_commands.h"
 #include "curves_plot.h"
 #include "io/drawing_file.h"
+#include "util/safe_text.h"
 
 #include <QApplication>
 #include <cstdlib>
@@ -57,7 +58,7 @@ void addCurvesCommand(CLI::App& app, const TablesRef& tables, int& exitCode) {
         ensureGuiApplication();
         const auto set = buildCurveSet(*loaded, *tables, p->id);
         if (auto why = ui::saveCurves(set, QString::fromStdString(out)); !why.isEmpty()) {
-            std::cerr << "lineward-cli curves: " << why.toStdString() << "\n";
+            std::cerr << "lineward-cli curves: " << escapeControls(why.toStdString()) << "\n";
             exitCode = kBadInput;
             return;
         }

@@ -2,6 +2,7 @@
 #include "cli_commands.h"
 #include "io/drawing_file.h"
 #include "submittal.h"
+#include "util/safe_text.h"
 
 #include <QDir>
 #include <QFileInfo>
@@ -43,7 +44,7 @@ void addExportCommand(CLI::App& app, const TablesRef& tables, int& exitCode) {
         const Drawing& d = *loaded;
         exitCode = kClean;
         auto fail = [&](const QString& why) {
-            std::cerr << "lineward-cli export: " << why.toStdString() << "\n";
+            std::cerr << "lineward-cli export: " << escapeControls(why.toStdString()) << "\n";
             exitCode = kBadInput;
         };
         if (!a->pdf.empty()) {

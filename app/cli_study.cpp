@@ -5,6 +5,7 @@
 #include "rules/report_format.h"
 #include "sizing/motor_sizing.h"
 #include "studies/study.h"
+#include "util/safe_text.h"
 
 #include <cmath>
 #include <cstdio>
@@ -101,18 +102,19 @@ void printTable(const ojson& j) {
         return v.is_null() ? std::string("-") : fmt(v.get<double>(), 2);
     };
     for (const auto& n : j["nodes"])
-        std::printf("%-22s %8s %10s %8s %9s %8s %10s %10s\n", n["tag"].get<std::string>().c_str(),
-                    num(n["kv"]).c_str(), num(n["fault_ka"]).c_str(), num(n["x_over_r"]).c_str(),
+        std::printf("%-22s %8s %10s %8s %9s %8s %10s %10s\n",
+                    escapeControls(n["tag"].get<std::string>()).c_str(), num(n["kv"]).c_str(),
+                    num(n["fault_ka"]).c_str(), num(n["x_over_r"]).c_str(),
                     num(n["peak_ka"]).c_str(), num(n["v_pct"]).c_str(), num(n["vdrop_pct"]).c_str(),
                     num(n["start_dip_pct"]).c_str());
     std::printf("\n%-14s %-14s %10s %14s %16s\n", "part", "kind", "load A", "line-side kA",
                 "start V % rated");
     for (const auto& p : j["parts"])
-        std::printf("%-14s %-14s %10s %14s %16s\n", p["tag"].get<std::string>().c_str(),
-                    p["kind"].get<std::string>().c_str(), num(p["load_a"]).c_str(),
-                    num(p["line_side_fault_ka"]).c_str(),
-                    p.contains("terminal_v_start_pct") ? num(p["terminal_v_start_pct"]).c_str()
-                                                       : "");
+        std::printf(
+            "%-14s %-14s %10s %14s %16s\n", escapeControls(p["tag"].get<std::string>()).c_str(),
+            p["kind"].get<std::string>().c_str(), num(p["load_a"]).c_str(),
+            num(p["line_side_fault_ka"]).c_str(),
+            p.contains("terminal_v_start_pct") ? num(p["terminal_v_start_pct"]).c_str() : "");
     std::printf("\nThree-phase bolted faults, prefault voltage 1.0 per unit; running motors "
                 "contribute.\n%s\n",
                 kSafetyCaution);

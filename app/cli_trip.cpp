@@ -2,6 +2,7 @@
 #include "cli_commands.h"
 #include "curves/trip_curve.h"
 #include "io/drawing_file.h"
+#include "util/safe_text.h"
 
 #include <cmath>
 #include <iostream>
@@ -55,8 +56,8 @@ void addTripCommand(CLI::App& app, int& exitCode) {
             auto txt = [](double t) {
                 return std::isinf(t) ? std::string("does not trip") : std::to_string(t) + " s";
             };
-            std::cout << curve->label() << " at " << a->amps << " A: minimum " << txt(tmin)
-                      << ", maximum " << txt(tmax) << "\n";
+            std::cout << escapeControls(curve->label()) << " at " << a->amps << " A: minimum "
+                      << txt(tmin) << ", maximum " << txt(tmax) << "\n";
         }
         exitCode = kClean;
     });

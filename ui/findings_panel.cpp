@@ -1,6 +1,7 @@
 // Findings panel: filters above, the list, the detail pane with the calculation trace.
 #include "findings_panel.h"
 
+#include "plain_text.h"
 #include "severity_style.h"
 
 #include <QComboBox>
@@ -42,7 +43,7 @@ QString partTags(const Drawing& d, const Finding& f) {
 FindingsPanel::FindingsPanel(Document& doc, QWidget* parent)
     : QWidget(parent), m_doc(doc), m_severity(new QComboBox), m_rule(new QLineEdit),
       m_apply(new QPushButton(tr("Apply fix"))), m_list(new QTreeWidget),
-      m_detail(new QTextBrowser) {
+      m_detail(new InertTextBrowser) {
     m_list->setObjectName("findingsList");
     m_detail->setObjectName("findingDetail");
     m_apply->setObjectName("applyFix");
@@ -117,7 +118,7 @@ void FindingsPanel::refresh() {
         item->setText(1, rule);
         item->setText(2, partTags(m_doc.drawing(), f));
         item->setText(3, msg);
-        item->setToolTip(3, msg);
+        item->setToolTip(3, plainToolTip(msg));
         item->setData(0, Qt::UserRole, static_cast<qulonglong>(i));
     }
     for (int c = 0; c < 3; ++c)

@@ -15,6 +15,7 @@
 #include "model/part_defaults.h"
 #include "part_item.h"
 #include "parts_palette.h"
+#include "plain_text.h"
 #include "rules/report_format.h"
 #include "schedules_panel.h"
 #include "sheet_scene.h"

@@ -8,6 +8,7 @@
 #include "main_window.h"
 #include "model/part_defaults.h"
 #include "part_item.h"
+#include "plain_text.h"
 #include "sheet_scene.h"
 #include "sheet_view.h"
 #include "submittal.h"
@@ -19,7 +20,6 @@
 #include <QFileDialog>
 #include <QInputDialog>
 #include <QMenuBar>
-#include <QMessageBox>
 #include <QMimeData>
 #include <QPrintDialog>
 #include <QPrintPreviewDialog>

@@ -3,6 +3,7 @@
 // square for a breaker, a rectangle for a fuse, a heater loop for a thermal overload.
 #include "part_item.h"
 
+#include "plain_text.h"
 #include "severity_style.h"
 
 #include <QFontMetricsF>
@@ -135,7 +136,7 @@ void PartItem::refreshText() {
     QString tip = tag + "  " + ratings;
     if (!m_badgeTip.isEmpty())
         tip += "\n" + m_badgeTip;
-    setToolTip(tip);
+    setToolTip(plainToolTip(tip));
 }
 
 void PartItem::setLabelRoom(qreal right, qreal left) {

@@ -7,7 +7,7 @@
 
 namespace lineward {
 
-std::vector<PathDevice> devicesOnPath(const RuleContext& ctx, PartId id) {
+std::vector<PathDevice> devicesOnPath(const RuleContext& ctx, PartId id, PathExtent extent) {
     std::vector<PathDevice> out;
     const Part* p = ctx.drawing.part(id);
     if (!p)
@@ -21,14 +21,22 @@ std::vector<PathDevice> devicesOnPath(const RuleContext& ctx, PartId id) {
         add(p);
         top = ctx.flow.lineNode(id);
     }
-    // Up the supply tree branch by branch, keeping every part that has a curve (overload
-    // relays included).
-    for (std::size_t guard = 0; guard < ctx.drawing.parts().size(); ++guard) {
-        auto feed = ctx.flow.feedingBranch(top);
-        if (!feed)
+    // Up the supply tree from one part with a curve to the next (overload relays included);
+    // the tree knows each node's nearest one, so cables and switches in between cost nothing.
+    auto done = [&] {
+        if (extent == PathExtent::ToSource || out.empty())
+            return false;
+        for (std::size_t i = 1; i < out.size(); ++i)
+            if (out[i].part->kind != PartKind::Overload)
+                return true;
+        return false;
+    };
+    for (std::size_t guard = 0; guard < ctx.drawing.parts().size() && !done(); ++guard) {
+        auto dev = ctx.flow.curveDeviceAbove(top);
+        if (!dev)
             break;
-        add(ctx.drawing.part(*feed));
-        top = ctx.flow.lineNode(*feed);
+        add(ctx.drawing.part(*dev));
+        top = ctx.flow.lineNode(*dev);
     }
     return out;
 }

@@ -17,9 +17,14 @@ struct PathDevice {
     TripCurve curve;
 };
 
+/// How far up devicesOnPath goes: to the source, or only to the first device above the part
+/// that is not an overload relay (what a selectivity check compares against).
+enum class PathExtent { ToSource, NearestUpstream };
+
 /// Protective parts (breakers, fuses, overload relays) from `part` toward the source, nearest
 /// first: the part itself when protective, its branch chain, then each device above.
-std::vector<PathDevice> devicesOnPath(const RuleContext& ctx, PartId part);
+std::vector<PathDevice> devicesOnPath(const RuleContext& ctx, PartId part,
+                                      PathExtent extent = PathExtent::ToSource);
 
 /// A motor's starting current against time: (amps, seconds) corners of a step curve.
 struct StartProfile {

@@ -21,6 +21,7 @@ struct FileLimits {
     std::size_t maxBuckets = 20000;
     std::size_t maxListItems = 10000; ///< revisions, accepted deviations, parts in a bucket
     std::size_t maxTextBytes = 4096;
+    std::size_t maxValues = 4'000'000; ///< numbers, texts, lists and objects in the whole file
 };
 
 /// Why a file was refused: where (line and column from 1) and what was expected.

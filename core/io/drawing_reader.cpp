@@ -6,6 +6,7 @@
 #include <fstream>
 #include <set>
 #include <sstream>
+#include <unordered_set>
 
 namespace lineward::io {
 
@@ -39,6 +40,13 @@ const char* typeName(const json& j) {
     if (j.is_array())
         return "a list";
     return "an object";
+}
+
+// Text from the file as a message quotes it: cut short, so a message stays a line, however
+// long the text.
+std::string cut(const std::string& s) {
+    constexpr std::size_t kMax = 60;
+    return s.size() <= kMax ? s : s.substr(0, kMax) + "...";
 }
 
 class Reader {
@@ -103,7 +111,7 @@ private:
             for (auto key : keys)
                 known = known || key == k;
             if (!known)
-                throw Failure{ptr + "/" + k, "unknown key '" + k + "'"};
+                throw Failure{ptr + "/" + k, "unknown key '" + cut(k) + "'"};
         }
     }
 
@@ -151,14 +159,14 @@ private:
             auto u = text(j.at("units"), "/sheet/units");
             if (u != "us" && u != "si")
                 throw Failure{"/sheet/units",
-                              "units must be \"us\" or \"si\", found \"" + u + "\""};
+                              "units must be \"us\" or \"si\", found \"" + cut(u) + "\""};
             s.units = u == "si" ? UnitSystem::SI : UnitSystem::US;
         }
         if (j.contains("rule_set")) {
             s.ruleSet = text(j.at("rule_set"), "/sheet/rule_set");
             if (s.ruleSet != "NEC 2023")
-                throw Failure{"/sheet/rule_set",
-                              "rule set \"" + s.ruleSet + "\" is not available; use \"NEC 2023\""};
+                throw Failure{"/sheet/rule_set", "rule set \"" + cut(s.ruleSet) +
+                                                     "\" is not available; use \"NEC 2023\""};
         }
     }
 
@@ -224,7 +232,7 @@ private:
         const std::string key = text(j.at("kind"), ptr + "/kind");
         auto kind = kindFromKey(key);
         if (!kind)
-            throw Failure{ptr + "/kind", "unknown part kind '" + key + "'"};
+            throw Failure{ptr + "/kind", "unknown part kind '" + cut(key) + "'"};
         if (!j.contains("id"))
             throw Failure{ptr, "part has no \"id\""};
         Part p = Part::make(*kind, PartId(idValue(j.at("id"), ptr + "/id")), "");
@@ -251,8 +259,8 @@ private:
                 if (auto why = validateField(fields[*idx], p.values[*idx]))
                     throw Failure{fptr, partName(p) + ": " + *why};
             } else {
-                throw Failure{fptr,
-                              std::string(kindInfo(*kind).name) + " has no rating '" + k + "'"};
+                throw Failure{fptr, std::string(kindInfo(*kind).name) + " has no rating '" +
+                                        cut(k) + "'"};
             }
         }
         for (std::size_t i = 0; i < fields.size(); ++i)
@@ -267,29 +275,34 @@ private:
 
     static std::string partName(const Part& p) {
         return std::string(kindInfo(p.kind).key) + " " + std::to_string(p.id.value) +
-               (p.tag.empty() ? "" : " (" + p.tag + ")");
+               (p.tag.empty() ? "" : " (" + cut(p.tag) + ")");
     }
 
     void readParts(const json& j, Drawing& d) {
         list(j, "/parts", m_limits.maxParts);
+        // Collected, then added with one sort: loading costs the same in any id order.
+        std::vector<Part> parts;
+        parts.reserve(j.size());
+        std::unordered_set<std::uint32_t> ids;
         for (std::size_t i = 0; i < j.size(); ++i) {
             const std::string ptr = "/parts/" + std::to_string(i);
             Part p = readPart(j[i], ptr);
-            if (d.part(p.id))
+            if (!ids.insert(p.id.value).second)
                 throw Failure{ptr + "/id", "duplicate part id " + std::to_string(p.id.value)};
-            d.addPart(std::move(p));
+            parts.push_back(std::move(p));
         }
+        d.addParts(std::move(parts));
     }
 
     WireEnd wireEnd(const Drawing& d, const json& j, const std::string& ptr) {
         const std::string s = text(j, ptr);
         const auto dot = s.find('.');
         if (dot == std::string::npos || dot == 0)
-            throw Failure{ptr, "expected \"<part id>.<terminal>\", found \"" + s + "\""};
+            throw Failure{ptr, "expected \"<part id>.<terminal>\", found \"" + cut(s) + "\""};
         std::uint32_t id = 0;
         for (char c : s.substr(0, dot)) {
             if (c < '0' || c > '9' || id > 400000000u)
-                throw Failure{ptr, "expected a part id before '.', found \"" + s + "\""};
+                throw Failure{ptr, "expected a part id before '.', found \"" + cut(s) + "\""};
             id = id * 10 + static_cast<std::uint32_t>(c - '0');
         }
         const Part* p = d.part(PartId(id));
@@ -304,12 +317,15 @@ private:
         std::string names;
         for (auto t : terms)
             names += (names.empty() ? "" : ", ") + std::string(t);
-        throw Failure{ptr, std::string(kindInfo(p->kind).name) + " " + p->tag +
-                               " has no terminal '" + term + "' (it has: " + names + ")"};
+        throw Failure{ptr, std::string(kindInfo(p->kind).name) + " " + cut(p->tag) +
+                               " has no terminal '" + cut(term) + "' (it has: " + names + ")"};
     }
 
     void readWires(const json& j, Drawing& d) {
         list(j, "/wires", m_limits.maxWires);
+        std::vector<Wire> wires;
+        wires.reserve(j.size());
+        std::unordered_set<std::uint32_t> ids;
         for (std::size_t i = 0; i < j.size(); ++i) {
             const std::string ptr = "/wires/" + std::to_string(i);
             object(j[i], ptr);
@@ -320,12 +336,13 @@ private:
             Wire w{WireId(idValue(j[i].at("id"), ptr + "/id")),
                    wireEnd(d, j[i].at("from"), ptr + "/from"),
                    wireEnd(d, j[i].at("to"), ptr + "/to")};
-            if (d.wire(w.id))
+            if (!ids.insert(w.id.value).second)
                 throw Failure{ptr + "/id", "duplicate wire id " + std::to_string(w.id.value)};
             if (w.a == w.b)
                 throw Failure{ptr, "wire joins a terminal to itself"};
-            d.addWire(w);
+            wires.push_back(w);
         }
+        d.addWires(std::move(wires));
     }
 
     std::vector<PartId> partIds(const Drawing& d, const json& j, const std::string& ptr) {
@@ -346,7 +363,8 @@ private:
 
     void readBuckets(const json& j, Drawing& d) {
         list(j, "/buckets", m_limits.maxBuckets);
-        std::set<std::uint32_t> member;
+        std::unordered_set<std::uint32_t> member, ids;
+        std::vector<Bucket> buckets;
         for (std::size_t i = 0; i < j.size(); ++i) {
             const std::string ptr = "/buckets/" + std::to_string(i);
             object(j[i], ptr);
@@ -355,7 +373,7 @@ private:
                 throw Failure{ptr, "bucket has no \"id\""};
             Bucket b;
             b.id = BucketId(idValue(j[i].at("id"), ptr + "/id"));
-            if (d.bucket(b.id))
+            if (!ids.insert(b.id.value).second)
                 throw Failure{ptr + "/id", "duplicate bucket id " + std::to_string(b.id.value)};
             b.tag = optText(j[i], ptr, "tag");
             if (j[i].contains("sccr_ka")) {
@@ -372,8 +390,9 @@ private:
                     throw Failure{ptr + "/parts/" + std::to_string(k),
                                   "part " + std::to_string(b.parts[k].value) +
                                       " is already in another bucket"};
-            d.addBucket(std::move(b));
+            buckets.push_back(std::move(b));
         }
+        d.addBuckets(std::move(buckets));
     }
 
     void readAccepted(const json& j, Drawing& d) {
@@ -399,6 +418,22 @@ private:
     const FileLimits& m_limits;
 };
 
+// The file's list limits, enforced by the parser as it reads (not after the whole file is held).
+JsonLimits parserLimits(const FileLimits& l) {
+    JsonLimits j;
+    j.maxStringBytes = l.maxTextBytes;
+    j.maxValues = l.maxValues;
+    j.maxListItems = l.maxListItems;
+    j.listLimits = {{"/parts", l.maxParts},
+                    {"/wires", l.maxWires},
+                    {"/buckets", l.maxBuckets},
+                    {"/revisions", l.maxListItems},
+                    {"/accepted", l.maxListItems},
+                    {"/buckets/*/parts", l.maxListItems},
+                    {"/accepted/*/parts", l.maxListItems}};
+    return j;
+}
+
 LoadResult failAt(std::string_view text, std::string_view file, std::size_t offset,
                   std::string message) {
     auto pos = textPosition(text, offset);
@@ -418,7 +453,7 @@ LoadResult parseDrawing(std::string_view text, std::string_view fileName,
     // Parse fast first; only a refused file is parsed again with every offset recorded, so
     // its message can name the line and column.
     JsonSyntaxError syntax;
-    JsonLimits fast;
+    JsonLimits fast = parserLimits(limits);
     fast.recordOffsets = false;
     auto doc = parseLocated(text, fast, syntax);
     if (!doc)
@@ -427,7 +462,10 @@ LoadResult parseDrawing(std::string_view text, std::string_view fileName,
         Reader reader(*doc, limits);
         return LoadResult{reader.read(), std::nullopt};
     } catch (const Failure& f) {
-        auto located = parseLocated(text, JsonLimits{}, syntax);
+        doc.reset(); // the second parse records only the refused value's place and its parents
+        JsonLimits locate = parserLimits(limits);
+        locate.locate = f.pointer;
+        auto located = parseLocated(text, locate, syntax);
         return failAt(text, fileName, located ? located->offsetOf(f.pointer) : 0, f.message);
     } catch (const std::exception& e) {
         return failAt(text, fileName, 0, e.what());

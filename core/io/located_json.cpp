@@ -89,6 +89,8 @@ public:
     bool end_array() { return close(); }
     bool key(std::string& k) {
         json* obj = m_stack.back();
+        if (k.size() > m_limits.maxKeyBytes)
+            return fail("a key is longer than " + std::to_string(m_limits.maxKeyBytes) + " bytes");
         if (obj->contains(k))
             return fail("duplicate key '" + k + "'");
         // The cursor sits just past the closing quote; step back to the opening quote.
@@ -96,7 +98,7 @@ public:
         const std::size_t start = end >= k.size() + 2 ? end - k.size() - 2 : 0;
         m_key = k;
         if (m_limits.recordOffsets)
-            m_out.offsets[m_paths.back() + "/" + escape(k)] = start;
+            record(m_paths.back() + "/" + escape(k), start);
         return true;
     }
     bool parse_error(std::size_t position, const std::string&,
@@ -133,6 +135,21 @@ private:
         return out;
     }
 
+    // Records where a pointer starts, if it is one the caller asked to locate.
+    void record(const std::string& path, std::size_t offset) {
+        const auto& want = m_limits.locate;
+        if (want.empty() ||
+            (want.starts_with(path) && (want.size() == path.size() || want[path.size()] == '/')))
+            m_out.offsets[path] = offset;
+    }
+
+    std::size_t listLimit(const std::string& pattern) const {
+        for (const auto& [at, max] : m_limits.listLimits)
+            if (at == pattern)
+                return max;
+        return m_limits.maxListItems;
+    }
+
     bool fail(std::string msg) {
         m_failed = true;
         m_err.offset = here();
@@ -141,7 +158,13 @@ private:
     }
 
     // Places a value in its parent; returns the new value's pointer path.
+    // Returns null (after fail) when a limit is crossed.
     json* place(json v, std::string& path) {
+        if (++m_values > m_limits.maxValues) {
+            fail("the file holds more than " + std::to_string(m_limits.maxValues) +
+                 " values; it is refused as too large");
+            return nullptr;
+        }
         if (m_stack.empty()) {
             m_out.root = std::move(v);
             path = "";
@@ -149,9 +172,16 @@ private:
         }
         json* parent = m_stack.back();
         if (parent->is_array()) {
+            if (parent->size() >= m_listLimit.back()) {
+                const auto& pattern = m_patterns.back();
+                fail("the list \"" + pattern.substr(pattern.rfind('/') + 1) + "\" has more than " +
+                     std::to_string(m_listLimit.back()) + " items; at most " +
+                     std::to_string(m_listLimit.back()) + " are accepted");
+                return nullptr;
+            }
             if (m_limits.recordOffsets) {
                 path = m_paths.back() + "/" + std::to_string(parent->size());
-                m_out.offsets[path] = here() > 0 ? here() - 1 : 0;
+                record(path, here() > 0 ? here() - 1 : 0);
             }
             parent->push_back(std::move(v));
             return &parent->back();
@@ -165,23 +195,33 @@ private:
 
     bool value(json v) {
         std::string path;
-        place(std::move(v), path);
-        return true;
+        return place(std::move(v), path) != nullptr;
     }
 
     bool open(json container) {
         if (m_stack.size() >= m_limits.maxDepth)
             return fail("nesting is deeper than " + std::to_string(m_limits.maxDepth) + " levels");
+        const bool isList = container.is_array();
+        // The place with list indices as "*": what listLimits are keyed by.
+        std::string pattern;
+        if (!m_stack.empty())
+            pattern = m_patterns.back() + "/" + (m_stack.back()->is_array() ? "*" : m_key);
         std::string path;
         json* slot = place(std::move(container), path);
+        if (!slot)
+            return false;
         m_stack.push_back(slot);
         m_paths.push_back(path);
+        m_listLimit.push_back(isList ? listLimit(pattern) : 0);
+        m_patterns.push_back(std::move(pattern));
         return true;
     }
 
     bool close() {
         m_stack.pop_back();
         m_paths.pop_back();
+        m_patterns.pop_back();
+        m_listLimit.pop_back();
         return true;
     }
 
@@ -192,6 +232,9 @@ private:
     JsonSyntaxError& m_err;
     std::vector<json*> m_stack;
     std::vector<std::string> m_paths;
+    std::vector<std::string> m_patterns;
+    std::vector<std::size_t> m_listLimit;
+    std::size_t m_values = 0;
     std::string m_key;
     bool m_failed = false;
 };

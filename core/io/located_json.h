@@ -8,6 +8,8 @@
 #include <string>
 #include <string_view>
 #include <unordered_map>
+#include <utility>
+#include <vector>
 
 namespace lineward::io {
 
@@ -17,12 +19,22 @@ struct TextPos {
 };
 TextPos textPosition(std::string_view text, std::size_t offset);
 
-/// Bounds that protect the parser from hostile input.
+/// Bounds that protect the parser from hostile input. All are enforced while parsing, at the
+/// token that crosses them, so a huge file is refused before it is held in memory.
 struct JsonLimits {
     std::size_t maxDepth = 16;
     std::size_t maxStringBytes = 65536;
-    /// Record the offset of every key and element (costly; needed only to place an error).
+    std::size_t maxKeyBytes = 256;
+    /// Values of every kind (numbers, texts, lists, objects) in the whole document.
+    std::size_t maxValues = 4'000'000;
+    /// Items in a list not named in `listLimits`.
+    std::size_t maxListItems = 200'000;
+    /// Items in the lists at these places; "*" stands for any list index ("/buckets/*/parts").
+    std::vector<std::pair<std::string, std::size_t>> listLimits;
+    /// Record the offset of keys and elements (costly; needed only to place an error).
     bool recordOffsets = true;
+    /// With recordOffsets: record only this pointer and its parents (empty: record all).
+    std::string locate;
 };
 
 /// A parsed document with the byte offset of every key ("/parts/3/hp") and array element

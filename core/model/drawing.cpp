@@ -19,9 +19,10 @@ Part* Drawing::part(PartId id) {
 }
 
 std::optional<std::size_t> Drawing::indexOf(PartId id) const {
-    if (id.value >= m_partIndex.size() || m_partIndex[id.value] < 0)
+    auto it = m_partIndex.find(id.value);
+    if (it == m_partIndex.end())
         return std::nullopt;
-    return static_cast<std::size_t>(m_partIndex[id.value]);
+    return it->second;
 }
 
 const Part* Drawing::partByTag(std::string_view tag) const {
@@ -63,15 +64,54 @@ void Drawing::addPart(Part p) {
         throw std::invalid_argument("part id " + std::to_string(p.id.value) + " is in use");
     m_maxPart = std::max(m_maxPart, p.id.value);
     if (m_parts.empty() || m_parts.back().id < p.id) { // the common case: no reindex
-        if (m_partIndex.size() <= p.id.value)
-            m_partIndex.resize(std::max<std::size_t>(p.id.value + 1, m_partIndex.size() * 2), -1);
-        m_partIndex[p.id.value] = static_cast<std::int64_t>(m_parts.size());
+        m_partIndex[p.id.value] = m_parts.size();
         m_parts.push_back(std::move(p));
         return;
     }
     auto it = std::lower_bound(m_parts.begin(), m_parts.end(), p.id,
                                [](const Part& a, PartId i) { return a.id < i; });
     m_parts.insert(it, std::move(p));
+    reindex();
+}
+
+namespace {
+
+// Merges `more` into `items` (both by id), sorting once; throws on an invalid or repeated id
+// before anything is changed.
+template <typename T>
+void mergeSorted(std::vector<T>& items, std::vector<T> more, const char* what,
+                 std::uint32_t& maxId) {
+    auto byId = [](const T& a, const T& b) { return a.id < b.id; };
+    std::sort(more.begin(), more.end(), byId);
+    for (std::size_t i = 0; i < more.size(); ++i) {
+        const bool repeated = (i > 0 && more[i - 1].id == more[i].id) ||
+                              std::binary_search(items.begin(), items.end(), more[i], byId);
+        if (!more[i].id.valid() || repeated)
+            throw std::invalid_argument(std::string(what) + " id " +
+                                        std::to_string(more[i].id.value) + " is in use");
+    }
+    if (!more.empty())
+        maxId = std::max(maxId, more.back().id.value);
+    const auto mid = items.size();
+    items.insert(items.end(), std::make_move_iterator(more.begin()),
+                 std::make_move_iterator(more.end()));
+    std::inplace_merge(items.begin(), items.begin() + static_cast<std::ptrdiff_t>(mid), items.end(),
+                       byId);
+}
+
+} // namespace
+
+void Drawing::addParts(std::vector<Part> parts) {
+    mergeSorted(m_parts, std::move(parts), "part", m_maxPart);
+    reindex();
+}
+
+void Drawing::addWires(std::vector<Wire> wires) {
+    mergeSorted(m_wires, std::move(wires), "wire", m_maxWire);
+}
+
+void Drawing::addBuckets(std::vector<Bucket> buckets) {
+    mergeSorted(m_buckets, std::move(buckets), "bucket", m_maxBucket);
     reindex();
 }
 
@@ -136,9 +176,10 @@ std::optional<Bucket> Drawing::removeBucket(BucketId id) {
 }
 
 void Drawing::reindex() {
-    m_partIndex.assign(m_maxPart + 1, -1);
+    m_partIndex.clear();
+    m_partIndex.reserve(m_parts.size());
     for (std::size_t i = 0; i < m_parts.size(); ++i)
-        m_partIndex[m_parts[i].id.value] = static_cast<std::int64_t>(i);
+        m_partIndex[m_parts[i].id.value] = i;
     m_bucketOfPart.clear();
     for (std::size_t i = 0; i < m_buckets.size(); ++i)
         for (auto pid : m_buckets[i].parts)
@@ -146,28 +187,6 @@ void Drawing::reindex() {
 }
 
 // --- bulk edits ---
-
-namespace {
-template <typename T, typename IdOf> void sortById(std::vector<T>& v, IdOf idOf) {
-    if (!std::is_sorted(v.begin(), v.end(),
-                        [&](const T& a, const T& b) { return idOf(a) < idOf(b); }))
-        std::stable_sort(v.begin(), v.end(),
-                         [&](const T& a, const T& b) { return idOf(a) < idOf(b); });
-}
-} // namespace
-
-void Drawing::addParts(std::vector<Part> parts) {
-    std::unordered_set<std::uint32_t> fresh;
-    for (const auto& p : parts)
-        if (!p.id.valid() || part(p.id) || !fresh.insert(p.id.value).second)
-            throw std::invalid_argument("part id " + std::to_string(p.id.value) + " is in use");
-    for (auto& p : parts) {
-        m_maxPart = std::max(m_maxPart, p.id.value);
-        m_parts.push_back(std::move(p));
-    }
-    sortById(m_parts, [](const Part& p) { return p.id; });
-    reindex();
-}
 
 std::vector<Part> Drawing::removeParts(const std::vector<PartId>& ids) {
     std::unordered_set<std::uint32_t> gone;
@@ -186,18 +205,6 @@ std::vector<Part> Drawing::removeParts(const std::vector<PartId>& ids) {
         std::erase_if(b.parts, isGone);
     reindex();
     return removed;
-}
-
-void Drawing::addWires(std::vector<Wire> wires) {
-    std::unordered_set<std::uint32_t> fresh;
-    for (const auto& w : wires)
-        if (!w.id.valid() || wire(w.id) || !fresh.insert(w.id.value).second)
-            throw std::invalid_argument("wire id " + std::to_string(w.id.value) + " is in use");
-    for (auto& w : wires) {
-        m_maxWire = std::max(m_maxWire, w.id.value);
-        m_wires.push_back(w);
-    }
-    sortById(m_wires, [](const Wire& w) { return w.id; });
 }
 
 std::vector<Wire> Drawing::removeWires(const std::vector<WireId>& ids) {

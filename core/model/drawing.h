@@ -101,13 +101,20 @@ public:
 
     /// Adds a part; its id must be unused. Parts stay ordered by id.
     void addPart(Part p);
+    /// Adds many parts at once (the loader): one sort, so any id order costs n log n.
+    /// Throws std::invalid_argument on an invalid or repeated id, leaving the drawing unchanged.
+    void addParts(std::vector<Part> parts);
     /// Removes a part and every wire on it; returns what was removed.
     std::optional<Part> removePart(PartId id);
     /// Adds a wire; its id must be unused. Both ends must name existing parts (checked by the
     /// loader and the editor, not here).
     void addWire(Wire w);
+    /// Adds many wires at once, sorted once; ids as for addWire.
+    void addWires(std::vector<Wire> wires);
     std::optional<Wire> removeWire(WireId id);
     void addBucket(Bucket b);
+    /// Adds many buckets at once, sorted once; ids as for addBucket.
+    void addBuckets(std::vector<Bucket> buckets);
     std::optional<Bucket> removeBucket(BucketId id);
     /// Replaces the bucket with the same id; false where there is none.
     bool updateBucket(Bucket b);
@@ -117,14 +124,11 @@ public:
                m_wires == o.m_wires && m_buckets == o.m_buckets && m_accepted == o.m_accepted;
     }
 
-    // --- bulk edits: one pass and one reindex for many parts (Select All + Delete, undo) ---
-    /// Adds parts whose ids are all unused (checked before anything is added).
-    void addParts(std::vector<Part> parts);
+    // --- bulk edits: one pass and one reindex for many parts (Select All + Delete, undo); see
+    // addParts / addWires above for adding many ---
     /// Removes parts, every wire on them and their places in buckets; returns the removed
     /// parts in id order.
     std::vector<Part> removeParts(const std::vector<PartId>& ids);
-    /// Adds wires whose ids are all unused.
-    void addWires(std::vector<Wire> wires);
     /// Removes wires; returns those removed in id order.
     std::vector<Wire> removeWires(const std::vector<WireId>& ids);
     /// Replaces each bucket with the same id (others are ignored); returns how many were.
@@ -136,7 +140,9 @@ private:
     std::vector<Wire> m_wires;
     std::vector<Bucket> m_buckets;
     std::vector<Accepted> m_accepted;
-    std::vector<std::int64_t> m_partIndex; ///< by id value: position in m_parts, or −1
+    /// Id value to position in m_parts. A hash map, so memory follows the number of parts and
+    /// never the size of an id (one part with id 4,000,000,000 costs one entry).
+    std::unordered_map<std::uint32_t, std::size_t> m_partIndex;
     std::unordered_map<std::uint32_t, std::size_t> m_bucketOfPart;
     std::uint32_t m_maxPart = 0, m_maxWire = 0, m_maxBucket = 0;
 };

@@ -4,6 +4,7 @@
 #include <algorithm>
 #include <charconv>
 #include <cmath>
+#include <cstdio>
 
 namespace lineward {
 
@@ -50,9 +51,22 @@ std::string_view choiceLabel(std::string_view choice) {
 
 namespace {
 
+constexpr std::string_view kRangeWhy =
+    "no low-voltage equipment is rated outside it (check the unit and the digits)";
+
+// Whole numbers in full (100000, not 1e+05): messages are for people.
+std::string readable(double v) {
+    if (v == std::floor(v) && std::abs(v) < 1e15) {
+        char buf[32];
+        std::snprintf(buf, sizeof buf, "%.0f", v);
+        return buf;
+    }
+    return formatNumber(v);
+}
+
 std::string withUnit(const FieldSpec& spec, double v, FieldNaming naming = FieldNaming::Key) {
     const bool shown = naming == FieldNaming::People && !spec.shownUnit.empty();
-    std::string s = formatNumber(shown ? v * spec.shownScale : v);
+    std::string s = readable(shown ? v * spec.shownScale : v);
     const auto unit = shown ? spec.shownUnit : spec.unit;
     if (!unit.empty())
         s += " " + std::string(unit);
@@ -68,13 +82,26 @@ std::optional<std::string> checkNumber(const FieldSpec& spec, double v, FieldNam
         return key + " is infinite";
     if (spec.type == FieldType::Integer && v != std::floor(v))
         return key + " must be a whole number (got " + formatNumber(v) + ")";
+    // The range is physical: what low-voltage motor-control equipment has. A value outside it
+    // is a slip (a unit, a missing digit), and a tiny one would make the studies divide by
+    // almost nothing.
+    // Built only for a refusal: a valid number costs no formatting.
+    auto range = [&] {
+        const auto shownMin = naming == FieldNaming::People && !spec.shownUnit.empty()
+                                  ? spec.minValue * spec.shownScale
+                                  : spec.minValue;
+        return "the accepted range is " + readable(shownMin) + " to " + unit(spec.maxValue) + ": " +
+               std::string(kRangeWhy);
+    };
     if (v < spec.minValue || (spec.minExclusive && v == spec.minValue)) {
         if (spec.minExclusive && spec.minValue == 0.0)
-            return key + " must be greater than 0 (got " + unit(v) + ")";
-        return key + " " + unit(v) + " is below the smallest accepted value " + unit(spec.minValue);
+            return key + " must be greater than 0 (got " + unit(v) + "); " + range();
+        return key + " " + unit(v) + " is below the smallest accepted value " +
+               unit(spec.minValue) + "; " + range();
     }
     if (v > spec.maxValue)
-        return key + " " + unit(v) + " is above the largest accepted value " + unit(spec.maxValue);
+        return key + " " + unit(v) + " is above the largest accepted value " + unit(spec.maxValue) +
+               "; " + range();
     return std::nullopt;
 }
 
@@ -107,7 +134,8 @@ std::optional<std::string> validateField(const FieldSpec& spec, const FieldValue
             for (auto c : spec.choices)
                 list += (list.empty() ? "" : ", ") +
                         std::string(naming == FieldNaming::Key ? c : choiceLabel(c));
-            return key + " '" + s + "' is not one of: " + list;
+            const std::string shown = s.size() > 60 ? s.substr(0, 60) + "..." : s;
+            return key + " '" + shown + "' is not one of: " + list;
         }
         return std::nullopt;
     }

@@ -5,6 +5,7 @@
 #include "sizing/motor_sizing.h"
 #include "studies/study.h"
 
+#include <charconv>
 #include <cmath>
 
 namespace lineward {
@@ -112,8 +113,28 @@ std::vector<Schedule> buildSchedules(const Drawing& d, const Tables& t) {
     return {motors, cables, devices};
 }
 
+namespace {
+
+bool isNumber(const std::string& v) {
+    double d = 0;
+    const auto [end, ec] = std::from_chars(v.data(), v.data() + v.size(), d);
+    return ec == std::errc() && end == v.data() + v.size();
+}
+
+} // namespace
+
+std::string csvSafeCell(const std::string& v) {
+    // A spreadsheet runs a cell that starts with = + - @ (or a tab or CR before one) as a
+    // formula. Text from a drawing (a tag "=HYPERLINK(...)") gets a leading apostrophe, which
+    // spreadsheets show as text; numbers such as -5 stay numbers.
+    if (v.empty() || v.find_first_of("=+-@\t\r", 0) != 0 || isNumber(v))
+        return v;
+    return "'" + v;
+}
+
 std::string toCsv(const Schedule& s) {
-    auto field = [](const std::string& v) {
+    auto field = [](const std::string& raw) {
+        const std::string v = csvSafeCell(raw);
         if (v.find_first_of(",\"\r\n") == std::string::npos)
             return v;
         std::string q = "\"";

@@ -22,5 +22,8 @@ std::vector<Schedule> buildSchedules(const Drawing& d, const Tables& t);
 
 /// RFC 4180 CSV: CRLF line ends, fields quoted where they hold a comma, quote or line break.
 std::string toCsv(const Schedule& s);
+/// A cell as CSV must carry it so no spreadsheet runs it as a formula: text starting with
+/// = + - @, a tab or a CR gets a leading apostrophe; numbers are left alone.
+std::string csvSafeCell(const std::string& cell);
 
 } // namespace lineward

@@ -5,6 +5,7 @@
 #include "rules/rule_catalog.h"
 #include "rules/rule_context.h"
 #include "rules/topology_rules.h"
+#include "studies/finite_guard.h"
 #include "topology/flow.h"
 #include "topology/network.h"
 
@@ -84,6 +85,7 @@ void runRuleFamilies(const Drawing& drawing, const Tables& tables, std::vector<F
 CheckReport checkDrawing(const Drawing& drawing, const Tables& tables) {
     CheckReport report;
     runRuleFamilies(drawing, tables, report.findings);
+    guardFindingNumbers(report.findings);
     markAccepted(drawing, report.findings);
     std::stable_sort(report.findings.begin(), report.findings.end(),
                      [](const Finding& a, const Finding& b) {

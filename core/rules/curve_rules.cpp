@@ -137,7 +137,7 @@ double nominalV(const RuleContext& ctx, const Part& p) {
 // together as the downstream protection.
 void selectivity(const RuleContext& ctx, const Part& d, const Part* overloadBelow,
                  std::vector<Finding>& out) {
-    auto path = devicesOnPath(ctx, d.id);
+    auto path = devicesOnPath(ctx, d.id, PathExtent::NearestUpstream);
     if (path.empty() || path.front().part->id != d.id)
         return;
     const TripCurve& down = path.front().curve;

@@ -1,6 +1,8 @@
 // Report rendering. Text groups findings under the part they are about (their first part).
 #include "rules/report_format.h"
 
+#include "util/safe_text.h"
+
 #include <cmath>
 #include <map>
 #include <sstream>
@@ -13,7 +15,7 @@ std::string partLabel(const Drawing& d, PartId id) {
     const Part* p = d.part(id);
     if (!p)
         return "#" + std::to_string(id.value);
-    return (p->tag.empty() ? "#" + std::to_string(id.value) : p->tag) + " (" +
+    return (p->tag.empty() ? "#" + std::to_string(id.value) : escapeControls(p->tag)) + " (" +
            std::string(kindInfo(p->kind).name) + ")";
 }
 
@@ -36,13 +38,13 @@ nlohmann::ordered_json fieldValueJson(const FieldValue& v) {
 
 std::string findingHeadline(const Finding& f) {
     return std::string(severityName(f.severity)) + " · " + f.ruleId + " · " + f.clause + " · " +
-           f.message;
+           escapeControls(f.message);
 }
 
 std::string reportText(const Drawing& d, const CheckReport& r, const std::string& file) {
     std::ostringstream s;
-    s << file << ": " << r.openCounts[2] << " violation(s), " << r.openCounts[1] << " caution(s), "
-      << r.openCounts[0] << " note(s)";
+    s << escapeControls(file) << ": " << r.openCounts[2] << " violation(s), " << r.openCounts[1]
+      << " caution(s), " << r.openCounts[0] << " note(s)";
     if (r.acceptedCount)
         s << ", " << r.acceptedCount << " accepted";
     s << "\n";
@@ -57,11 +59,11 @@ std::string reportText(const Drawing& d, const CheckReport& r, const std::string
                 s << "      computed " << rounded(*f->computed) << " " << f->unit << ", limit "
                   << rounded(*f->limit) << " " << f->unit << "\n";
             for (const auto& t : f->trace)
-                s << "      " << t.name << ": " << t.value << "\n";
+                s << "      " << escapeControls(t.name) << ": " << escapeControls(t.value) << "\n";
             if (f->fix)
-                s << "      fix: " << f->fix->description << "\n";
+                s << "      fix: " << escapeControls(f->fix->description) << "\n";
             if (f->accepted)
-                s << "      accepted: " << f->acceptedNote << "\n";
+                s << "      accepted: " << escapeControls(f->acceptedNote) << "\n";
         }
     }
     return s.str();

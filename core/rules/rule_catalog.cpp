@@ -122,6 +122,10 @@ constexpr std::array kRules{
     RuleInfo{"study.loadflow.diverged", "load flow did not settle", "common practice",
              Severity::Caution,
              "the fixed-point load flow converges within 200 iterations to 1e−9 per unit"},
+    RuleInfo{"study.not_finite", "a study result could not be computed", "common practice",
+             Severity::Caution,
+             "every fault current, voltage, running current and starting voltage is a finite "
+             "number"},
     RuleInfo{"duty.interrupting", "interrupting rating below available fault", "NEC 2023 110.9",
              Severity::Violation,
              "interrupting rating ≥ symmetrical fault current at the line side"},

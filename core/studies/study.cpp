@@ -6,6 +6,7 @@
 #include "rules/rule_context.h"
 #include "sizing/motor_sizing.h"
 #include "studies/admittance.h"
+#include "studies/finite_guard.h"
 #include "studies/tree_solver.h"
 
 #include <cmath>
@@ -93,24 +94,39 @@ void loadFlow(StudyResults& r, const LoadFlowSolver& y) {
 }
 
 void originVoltages(StudyResults& r, const Network& net, const Flow& flow) {
+    // The node each node's voltage comes from (the node fed by a transformer, or the source
+    // node), passed down the supply tree in one pass.
     const Drawing& d = net.drawing();
+    std::vector<NodeIndex> origin(net.nodeCount());
+    for (std::size_t node = 0; node < origin.size(); ++node)
+        origin[node] = node;
+    for (auto v : flow.topDown()) {
+        auto feed = flow.feedingBranch(v);
+        if (feed && d.part(*feed)->kind != PartKind::Transformer)
+            origin[v] = origin[*flow.parentNode(v)];
+    }
     r.originVoltagePu.assign(static_cast<std::size_t>(r.model.busCount()), 1.0);
     for (std::size_t node = 0; node < net.nodeCount(); ++node) {
         const int bus = r.model.busOfNode[node];
         if (bus < 0)
             continue;
-        NodeIndex v = node;
-        // Walk up to the node fed by a transformer, or to the source node.
-        for (std::size_t guard = 0; guard < net.nodeCount(); ++guard) {
-            auto feed = flow.feedingBranch(v);
-            if (!feed || d.part(*feed)->kind == PartKind::Transformer)
-                break;
-            v = flow.lineNode(*feed);
-        }
-        const int ob = r.model.busOfNode[v];
+        const int ob = r.model.busOfNode[origin[node]];
         r.originVoltagePu[static_cast<std::size_t>(bus)] =
             ob >= 0 ? std::abs(r.voltage[static_cast<std::size_t>(ob)]) : 1.0;
     }
+}
+
+// Current of every load at each node plus everything the node feeds: summed bottom up in one
+// pass over the supply tree.
+std::vector<Complex> currentsBelow(const StudyResults& r, const Network& net, const Flow& flow) {
+    std::vector<Complex> below(net.nodeCount(), Complex(0, 0));
+    for (const auto& l : r.model.loads)
+        below[net.nodeOf(l.part, 0)] += std::conj(l.s / r.voltage[static_cast<std::size_t>(l.bus)]);
+    const auto& order = flow.topDown();
+    for (auto it = order.rbegin(); it != order.rend(); ++it)
+        if (auto parent = flow.parentNode(*it))
+            below[*parent] += below[*it];
+    return below;
 }
 
 void partCurrents(StudyResults& r, const Network& net, const Flow& flow) {
@@ -118,6 +134,7 @@ void partCurrents(StudyResults& r, const Network& net, const Flow& flow) {
     std::unordered_map<PartId, Complex> own;
     for (const auto& l : r.model.loads)
         own[l.part] = std::conj(l.s / r.voltage[static_cast<std::size_t>(l.bus)]);
+    const auto below = currentsBelow(r, net, flow);
     for (const auto& p : d.parts()) {
         const NodeIndex at = isTwoTerminal(p.kind) ? flow.lineNode(p.id) : net.nodeOf(p.id, 0);
         const int bus = r.busOf(at);
@@ -127,15 +144,11 @@ void partCurrents(StudyResults& r, const Network& net, const Flow& flow) {
         if (isTwoTerminal(p.kind)) {
             if (p.isOpen())
                 continue;
-            for (auto id : flow.loadsBelow(flow.loadNode(p.id)))
-                if (auto it = own.find(id); it != own.end())
-                    i += it->second;
+            i = below[flow.loadNode(p.id)];
         } else if (auto it = own.find(p.id); it != own.end()) {
             i = it->second;
         } else if (p.kind == PartKind::Bus) {
-            for (auto id : flow.loadsBelow(at))
-                if (auto it2 = own.find(id); it2 != own.end())
-                    i += it2->second;
+            i = below[at];
         } else {
             continue;
         }
@@ -224,6 +237,7 @@ StudyResults runStudies(const Network& net, const Flow& flow, const Tables& t, c
     originVoltages(r, net, flow);
     partCurrents(r, net, flow);
     motorStarting(r, net, flow, tree, lu.get(), t, s);
+    guardStudyResults(r, net);
     return r;
 }
 

@@ -5,6 +5,7 @@
 #include "rules/check.h"
 #include "topology/network.h"
 
+#include <algorithm>
 #include <benchmark/benchmark.h>
 #include <boost/graph/breadth_first_search.hpp>
 
@@ -83,6 +84,64 @@ void BM_BareBfs(benchmark::State& state) {
     }
 }
 BENCHMARK(BM_BareBfs)->Apply(args);
+
+// Source, bus, `n` cables in series (every other one a breaker when `mixed`), then a motor;
+// parts (and wires) written in ascending, descending or shuffled id order.
+std::string chainText(int n, bool mixed, int order) {
+    std::vector<std::string> parts{
+        R"({"id":1,"kind":"source","tag":"U","kv":0.48,"fault_ka":30})",
+        R"({"id":2,"kind":"bus","tag":"B","bus_type":"switchboard","volts":480,"amps":1200})"};
+    std::vector<std::string> wires{R"({"id":1,"from":"1.out","to":"2.bar"})"};
+    std::string prev = "2.bar";
+    for (int i = 0; i < n; ++i) {
+        const std::string id = std::to_string(3 + i);
+        parts.push_back(
+            mixed && i % 2 == 0
+                ? R"({"id":)" + id + R"(,"kind":"breaker","trip_a":100,"interrupting_ka":65})"
+                : R"({"id":)" + id + R"(,"kind":"cable","size":"4/0 AWG","length_ft":0.1})");
+        wires.push_back(R"({"id":)" + std::to_string(wires.size() + 1) + R"(,"from":")" + prev +
+                        R"(","to":")" + id + R"(.line"})");
+        prev = id + ".load";
+    }
+    const std::string m = std::to_string(3 + n);
+    parts.push_back(R"({"id":)" + m + R"(,"kind":"motor","hp":10,"volts":460})");
+    wires.push_back(R"({"id":)" + std::to_string(wires.size() + 1) + R"(,"from":")" + prev +
+                    R"(","to":")" + m + R"(.in"})");
+    for (auto* list : {&parts, &wires}) {
+        if (order == 1)
+            std::reverse(list->begin(), list->end());
+        if (order == 2)
+            for (std::size_t i = 0; i < list->size(); ++i) // a fixed shuffle
+                std::swap((*list)[i], (*list)[(i * 7919) % list->size()]);
+    }
+    auto join = [](const std::vector<std::string>& v) {
+        std::string out;
+        for (const auto& x : v)
+            out += (out.empty() ? "" : ",\n") + x;
+        return out;
+    };
+    return R"({"format":"lineward","version":1,"parts":[)" + join(parts) + R"(],"wires":[)" +
+           join(wires) + "]}";
+}
+
+void BM_ChainCheck(benchmark::State& state) {
+    const auto r = io::parseDrawing(chainText(static_cast<int>(state.range(0)), state.range(1), 0));
+    for (auto _ : state)
+        benchmark::DoNotOptimize(checkDrawing(*r.drawing, tables()));
+}
+BENCHMARK(BM_ChainCheck)
+    ->ArgsProduct({{10000, 50000}, {0}})
+    ->Args({2000, 1})
+    ->Args({10000, 1})
+    ->Unit(benchmark::kMillisecond);
+
+void BM_LoadIdOrder(benchmark::State& state) {
+    const std::string text =
+        chainText(static_cast<int>(state.range(0)), false, static_cast<int>(state.range(1)));
+    for (auto _ : state)
+        benchmark::DoNotOptimize(io::parseDrawing(text));
+}
+BENCHMARK(BM_LoadIdOrder)->ArgsProduct({{100000}, {0, 1, 2}})->Unit(benchmark::kMillisecond);
 
 } // namespace
 

@@ -138,12 +138,12 @@ INSTANTIATE_TEST_SUITE_P(
                 withParts(R"(    {"id":1,"kind":"motor","hp":10,"hp":20,"volts":460})"), 5,
                 "duplicate key 'hp'"},
         BadCase{"negative", withParts(R"(    {"id":1,"kind":"motor","hp":-5,"volts":460})"), 5,
-                "hp must be greater than 0"},
+                "hp -5 hp is below the smallest accepted value 0.1 hp"},
         BadCase{
             "zero_kva",
             withParts(
                 R"(    {"id":1,"kind":"transformer","kva":0,"pri_v":480,"sec_v":208,"z_pct":4})"),
-            5, "kva must be greater than 0"},
+            5, "kva 0 kVA is below the smallest accepted value 1 kVA"},
         BadCase{"huge", withParts(R"(    {"id":1,"kind":"motor","hp":1e300,"volts":460})"), 5,
                 "above the largest accepted value"},
         BadCase{"overflow_to_infinity",
@@ -189,7 +189,7 @@ TEST(FileFormatLimits, OverSizeLimitsAreRefused) {
     auto r = io::parseDrawing(withParts(parts), "t.lineward", small);
     ASSERT_FALSE(r);
     EXPECT_NE(r.error->message.find("at most 2"), std::string::npos) << r.error->text();
-    EXPECT_EQ(r.error->line, 4);
+    EXPECT_EQ(r.error->line, 7); // the first part over the limit, found while parsing
 
     small = FileLimits{};
     small.maxFileBytes = 100;

@@ -53,7 +53,8 @@ TEST(Editor, InspectorRefusesBadValuesWithReasons) {
     const auto before = test::drawingBytes(w);
     user.type("hp_or_kw", "-5", Commit::Enter);
     EXPECT_TRUE(user.inspectorMessage().startsWith("Refused:"));
-    EXPECT_TRUE(user.inspectorMessage().contains("Rated output (hp) must be greater than 0"))
+    EXPECT_TRUE(user.inspectorMessage().contains(
+        "Rated output (hp) -5 hp is below the smallest accepted value 0.1 hp"))
         << user.inspectorMessage().toStdString();
     user.type("hp_or_kw", "ten", Commit::Tab);
     EXPECT_TRUE(user.inspectorMessage().contains("not a number"));
@@ -78,7 +79,7 @@ TEST(Editor, ValidationShowsWhileTyping) {
     QTest::keyClicks(fla, "-");
     EXPECT_FALSE(user.inspectorMessage().isEmpty()); // '-' alone is not a number
     QTest::keyClicks(fla, "2");
-    EXPECT_TRUE(user.inspectorMessage().contains("greater than 0"));
+    EXPECT_TRUE(user.inspectorMessage().contains("below the smallest accepted value"));
     QTest::keyClick(fla, Qt::Key_Home);
     QTest::keyClick(fla, Qt::Key_Delete);
     EXPECT_TRUE(user.inspectorMessage().isEmpty()); // "2" would be accepted
