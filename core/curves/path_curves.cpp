@@ -26,7 +26,7 @@ std::vector<PathDevice> devicesOnPath(const RuleContext& ctx, PartId id, PathExt
     auto done = [&] {
         if (extent == PathExtent::ToSource || out.empty())
             return false;
-        for (std::size_t i = 1; i < out.size(); ++i)
+        for (std::size_t i = extent == PathExtent::OwnProtection ? 0 : 1; i < out.size(); ++i)
             if (out[i].part->kind != PartKind::Overload)
                 return true;
         return false;

@@ -17,9 +17,11 @@ struct PathDevice {
     TripCurve curve;
 };
 
-/// How far up devicesOnPath goes: to the source, or only to the first device above the part
-/// that is not an overload relay (what a selectivity check compares against).
-enum class PathExtent { ToSource, NearestUpstream };
+/// How far up devicesOnPath goes: to the source; only to the first device above the part that
+/// is not an overload relay (what a selectivity check compares against); or only to the first
+/// device that is not an overload relay, the part itself included (a conductor's own
+/// protection: its branch device and the overload relay of its bucket).
+enum class PathExtent { ToSource, NearestUpstream, OwnProtection };
 
 /// Protective parts (breakers, fuses, overload relays) from `part` toward the source, nearest
 /// first: the part itself when protective, its branch chain, then each device above.

@@ -93,7 +93,11 @@ void cableDamage(const RuleContext& ctx, const Part& c, std::vector<Finding>& ou
                              ctx.tables, false);
     if (!i2t || fault <= 0 || !amp)
         return;
-    const auto devices = devicesOnPath(ctx, c.id);
+    // The cable is judged against its own protection: the device at its supply end (with the
+    // overload relay of a motor branch), the device NEC 240.4 makes responsible for it. Devices
+    // further up are set to be slower (selectivity), and crediting them would hide a local device
+    // that is too slow; a chain of any length also costs one step per cable this way.
+    const auto devices = devicesOnPath(ctx, c.id, PathExtent::OwnProtection);
     if (devices.empty())
         return;
     // The adiabatic damage curve is a short-circuit curve: judge the currents the cable takes

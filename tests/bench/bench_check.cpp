@@ -133,6 +133,7 @@ BENCHMARK(BM_ChainCheck)
     ->ArgsProduct({{10000, 50000}, {0}})
     ->Args({2000, 1})
     ->Args({10000, 1})
+    ->Args({50000, 1})
     ->Unit(benchmark::kMillisecond);
 
 void BM_LoadIdOrder(benchmark::State& state) {

@@ -198,3 +198,54 @@ TEST(Selectivity, OverlappingInstantaneousRegionsGiveTheLimitCurrent) {
     EXPECT_LT(*f[0].computed, 2.4);
     EXPECT_GT(*f[0].computed, 2.4 * 0.9); // the scan's step is 1/40 of a log decade span
 }
+
+namespace {
+// Source → bus → UP → bus → DOWN → 4 AWG cable → load: DOWN is the cable's own protection.
+std::vector<Finding> cableDamageOf(Part up, Part down) {
+    Drawing d = pair(std::move(up), std::move(down));
+    const Part* cable = d.partByTag("C");
+    EXPECT_NE(cable, nullptr);
+    if (cable)
+        EXPECT_FALSE(d.part(cable->id)->set("size", std::string("4 AWG")));
+    std::vector<Finding> out;
+    for (const auto& f : checkDrawing(d, testTables()).findings)
+        if (f.ruleId == "curve.cable.damage")
+            out.push_back(f);
+    return out;
+}
+} // namespace
+
+TEST(CableDamage, ASlowOwnDeviceIsNotExcusedByAFastOneUpstream) {
+    // 4 AWG copper, 90 → 250 °C: I²t = 0.0297 log10(484/324) × 41,740² ≈ 9.0 × 10⁶ A²s
+    // (ICEA P-32-382; NEC Chapter 9 Table 8 for the area), so it lasts 1 s at about 3.0 kA.
+    // Its own breaker is an 800 A electronic trip without instantaneous (short-time from
+    // 3.2 kA, long-time delay 20 s): at 3 kA it takes seconds. An instantaneous-only breaker
+    // upstream would clear in 0.025 s, but it is set to coordinate, not to protect this cable.
+    const Part up = device(PartKind::InstBreaker,
+                           {{"amps", 400.0}, {"pickup_a", 1000.0}, {"interrupting_ka", 65.0}});
+    const Part down = device(PartKind::Breaker, {{"trip_type", std::string("electronic")},
+                                                 {"trip_a", 800.0},
+                                                 {"interrupting_ka", 65.0},
+                                                 {"lt_delay_s", 20.0},
+                                                 {"st_pickup_x", 4.0},
+                                                 {"st_delay_s", 0.4}});
+    const auto f = cableDamageOf(up, down);
+    ASSERT_EQ(f.size(), 1u);
+    EXPECT_GT(*f[0].computed, *f[0].limit); // clears later than the cable lasts
+    EXPECT_NEAR(*f[0].limit * 3003.0 * 3003.0, 9.0e6, 0.1e6) << f[0].message;
+}
+
+TEST(CableDamage, AFastOwnDeviceProtectsTheCable) {
+    // The same cable on a 100 A thermal-magnetic breaker, instantaneous 10 × (clears by 1.2 kA):
+    // wherever the cable lasts 1 s or less (from about 3.0 kA) the breaker clears
+    // instantaneously.
+    const Part up = device(PartKind::Breaker, {{"trip_type", std::string("electronic")},
+                                               {"trip_a", 800.0},
+                                               {"interrupting_ka", 65.0},
+                                               {"lt_delay_s", 20.0},
+                                               {"st_pickup_x", 4.0},
+                                               {"st_delay_s", 0.4}});
+    const Part down =
+        device(PartKind::Breaker, {{"trip_a", 100.0}, {"interrupting_ka", 65.0}, {"inst_x", 10.0}});
+    EXPECT_TRUE(cableDamageOf(up, down).empty());
+}
