@@ -42,7 +42,7 @@ int runCheck(const CheckOptions& o, const Tables& tables) {
         nlohmann::ordered_json out;
         out["fail_on"] = o.failOn;
         out["reports"] = all;
-        std::cout << out.dump(2) << "\n";
+        std::cout << inertJson(out.dump(2)) << "\n";
     } else {
         std::cout << kSafetyCaution << "\n";
     }

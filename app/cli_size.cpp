@@ -2,6 +2,7 @@
 #include "cli_commands.h"
 #include "rules/report_format.h"
 #include "sizing/auto_size.h"
+#include "util/safe_text.h"
 
 #include <iostream>
 #include <memory>
@@ -186,7 +187,7 @@ void addSizeCommand(CLI::App& app, const TablesRef& tables, int& exitCode) {
             return;
         }
         if (a->json)
-            std::cout << asJson(*p, o).dump(2) << "\n";
+            std::cout << inertJson(asJson(*p, o).dump(2)) << "\n";
         else
             printText(*p, o);
         exitCode = kClean;

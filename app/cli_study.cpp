@@ -139,7 +139,7 @@ void addStudyCommand(CLI::App& app, const TablesRef& tables, int& exitCode) {
         const auto r = runStudies(net, flow, *tables, loaded->settings);
         const auto j = studyJson(net, flow, r);
         if (*json)
-            std::cout << j.dump(2) << "\n";
+            std::cout << inertJson(j.dump(2)) << "\n";
         else
             printTable(j);
         exitCode = kClean;

@@ -51,7 +51,7 @@ void addTripCommand(CLI::App& app, int& exitCode) {
         if (a->json) {
             nlohmann::ordered_json out{
                 {"tag", a->tag}, {"amps", a->amps}, {"t_min_s", j(tmin)}, {"t_max_s", j(tmax)}};
-            std::cout << out.dump(2) << "\n";
+            std::cout << inertJson(out.dump(2)) << "\n";
         } else {
             auto txt = [](double t) {
                 return std::isinf(t) ? std::string("does not trip") : std::to_string(t) + " s";

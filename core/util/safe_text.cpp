@@ -72,4 +72,32 @@ std::string escapeControls(std::string_view text) {
     return out;
 }
 
+std::string inertJson(std::string_view in) {
+    std::string out;
+    out.reserve(in.size());
+    auto u = [&](unsigned code) {
+        char buf[8];
+        std::snprintf(buf, sizeof buf, "\\u%04x", code);
+        out += buf;
+    };
+    for (std::size_t i = 0; i < in.size(); ++i) {
+        const auto c = static_cast<unsigned char>(in[i]);
+        const auto next = [&](std::size_t k) {
+            return i + k < in.size() ? static_cast<unsigned char>(in[i + k]) : 0u;
+        };
+        if (c == 0x7f) {
+            u(0x7f);
+        } else if (c == 0xc2 && next(1) >= 0x80 && next(1) <= 0x9f) {
+            u(next(1)); // U+0080..U+009F
+            ++i;
+        } else if (c == 0xe2 && next(1) == 0x80 && (next(2) == 0xa8 || next(2) == 0xa9)) {
+            u(next(2) == 0xa8 ? 0x2028 : 0x2029);
+            i += 2;
+        } else {
+            out += static_cast<char>(c);
+        }
+    }
+    return out;
+}
+
 } // namespace lineward

@@ -12,4 +12,9 @@ namespace lineward {
 /// Printable text, including any other non-ASCII letter, is unchanged.
 std::string escapeControls(std::string_view text);
 
+/// Serialised JSON (UTF-8, its C0 controls already escaped by the serialiser) made inert on a
+/// terminal too: DEL, the C1 controls and the Unicode line and paragraph separators become
+/// \uNNNN escapes, which mean the same characters to a JSON reader. Everything else is kept.
+std::string inertJson(std::string_view dumped);
+
 } // namespace lineward

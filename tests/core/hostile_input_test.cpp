@@ -299,6 +299,16 @@ TEST(TerminalSafety, ControlCharactersAreShownNotObeyed) {
     EXPECT_EQ(escapeControls("I²t 90 °C"), "I²t 90 °C");
 }
 
+TEST(TerminalSafety, JsonKeepsItsMeaningAndLosesItsControls) {
+    EXPECT_EQ(inertJson("{\"tag\": \"\xc2\x9b"
+                        "2J\"}"),
+              "{\"tag\": \"\\u009b2J\"}");
+    EXPECT_EQ(inertJson("\"a\xe2\x80\xa9"
+                        "b\x7f\""),
+              "\"a\\u2029b\\u007f\"");
+    EXPECT_EQ(inertJson("\"I²t 90 °C \xc2\xa0\""), "\"I²t 90 °C \xc2\xa0\""); // no-break space kept
+}
+
 TEST(TerminalSafety, ReportTextKeepsEachFindingOnItsLine) {
     Drawing d = smallLineup();
     d.part(PartId(9))->tag = "M\x1b[2J\r\nfake: all clear";
