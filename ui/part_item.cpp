@@ -259,8 +259,22 @@ void PartItem::paintSymbol(QPainter* p) const {
         p->drawLine(QPointF(m_barLeft, 0), QPointF(m_barRight, 0));
         return;
     }
-    if (QSvgRenderer* r = symbolRenderer(k))
-        r->render(p, QRectF(-20, -20, 40, 40));
+    if (QSvgRenderer* r = symbolRenderer(k)) {
+        if (!r->elementExists("upright")) {
+            r->render(p, QRectF(-20, -20, 40, 40));
+        } else {
+            // A letter in a symbol (the motor's M) reads upright like the labels: the body
+            // turns with the part, the letter turns back about its own centre.
+            r->render(p, "body", r->boundsOnElement("body"));
+            const QRectF letter = r->boundsOnElement("upright");
+            p->save();
+            p->translate(letter.center());
+            p->rotate(-m_part.rotation);
+            p->translate(-letter.center());
+            r->render(p, "upright", letter);
+            p->restore();
+        }
+    }
     if (m_part.isOpen()) {
         // An open switching device: a bold gap mark across the symbol (ours).
         QPen pen = p->pen();

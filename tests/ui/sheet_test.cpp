@@ -162,6 +162,66 @@ TEST(Sheet, RotatedPartKeepsItsLabelUpright) {
 }
 
 namespace {
+// The dark pixels of a scene region, 4 pixels per Sheet unit.
+QImage darkOf(SheetScene* scene, const QRectF& region) {
+    QImage img((region.size() * 4).toSize(), QImage::Format_ARGB32);
+    img.fill(Qt::white);
+    QPainter p(&img);
+    scene->setPrinting(true);
+    scene->render(&p, QRectF(img.rect()), region);
+    scene->setPrinting(false);
+    return img;
+}
+// Dark grey ink: the symbol's strokes, not a coloured badge that may reach into the region.
+bool ink(QRgb c) {
+    const int hi = std::max({qRed(c), qGreen(c), qBlue(c)}),
+              lo = std::min({qRed(c), qGreen(c), qBlue(c)});
+    return qGray(c) < 160 && hi - lo < 60;
+}
+int differingDark(const QImage& a, const QImage& b) {
+    int n = 0;
+    for (int y = 0; y < a.height(); ++y)
+        for (int x = 0; x < a.width(); ++x)
+            n += ink(a.pixel(x, y)) != ink(b.pixel(x, y));
+    return n;
+}
+} // namespace
+
+TEST(Sheet, RotatedMotorKeepsItsLetterUpright) {
+    Sheet s;
+    s.place(PartKind::Motor, QPointF(0, 0));
+    ASSERT_EQ(s.drawing().parts().size(), 1u);
+    const PartId id = s.drawing().parts().front().id;
+    PartItem* item = s.item(id);
+    // Inside the circle (centre 8 units below the part's origin, radius 13): only the M.
+    auto inside = [&] {
+        const QPointF c = item->mapToScene(QPointF(0, 8));
+        return QRectF(c - QPointF(7.5, 7.5), QSizeF(15, 15));
+    };
+    s.click(QPointF(90, -70)); // nothing selected: no selection colour on the letter
+    const QImage upright = darkOf(s.w.scene(), inside());
+    int inkPixels = 0;
+    for (int y = 0; y < upright.height(); ++y)
+        for (int x = 0; x < upright.width(); ++x)
+            inkPixels += ink(upright.pixel(x, y));
+    ASSERT_GT(inkPixels, 100); // the letter is there
+    s.click(item->mapToScene(QPointF(0, 8)));
+    for (int turn = 1; turn <= 3; ++turn) {
+        s.key(Qt::Key_R); // Ctrl+R
+        ASSERT_EQ(s.drawing().part(id)->rotation, 90 * turn);
+        s.click(QPointF(90, -70)); // away, so the selection colour does not tint the letter
+        // The letter as it was, not turned with the part: the image is far closer to the
+        // upright letter than to the letter turned by the part's rotation (edges differ by
+        // antialiasing either way).
+        const QImage now = darkOf(s.w.scene(), inside());
+        const QImage turned = upright.transformed(QTransform().rotate(90 * turn));
+        ASSERT_EQ(turned.size(), now.size());
+        EXPECT_LT(3 * differingDark(upright, now), differingDark(turned, now)) << turn;
+        s.click(item->mapToScene(QPointF(0, 8)));
+    }
+}
+
+namespace {
 
 // Label crossings on the opened drawing: a label over another part's symbol or label, or over
 // a wire. Returns "tag: what" lines.
