@@ -32,8 +32,15 @@ const FieldValue& Part::value(std::string_view key) const {
 }
 
 std::optional<double> Part::number(std::string_view key) const {
-    if (auto d = std::get_if<double>(&value(key)))
+    const FieldValue& v = value(key);
+    if (auto d = std::get_if<double>(&v))
         return *d;
+    // An empty rating with a default reads as its default, as it does once saved and loaded
+    // again: one default per rating, the one in the field table.
+    if (std::holds_alternative<std::monostate>(v))
+        if (auto i = fieldIndex(kind, key))
+            if (auto d = std::get_if<double>(&kindInfo(kind).fields[*i].defaultValue))
+                return *d;
     return std::nullopt;
 }
 
@@ -60,9 +67,14 @@ Part::set(const std::vector<std::pair<std::string_view, FieldValue>>& changes, F
         auto i = fieldIndex(kind, key);
         if (!i)
             return std::string(kindInfo(kind).name) + " has no rating '" + std::string(key) + "'";
-        if (auto why = validateField(kindInfo(kind).fields[*i], v, naming))
+        const FieldSpec& spec = kindInfo(kind).fields[*i];
+        if (auto why = validateField(spec, v, naming))
             return why;
-        trial.values[*i] = v;
+        // Clearing a rating that has a default gives the default back (shown, and saved).
+        trial.values[*i] = std::holds_alternative<std::monostate>(v) &&
+                                   !std::holds_alternative<std::monostate>(spec.defaultValue)
+                               ? spec.defaultValue
+                               : v;
     }
     // Refuse only what this change breaks: a part still being filled in may lack other values.
     const auto before = validatePart(*this, naming);

@@ -49,7 +49,7 @@ std::vector<MotorBranch> motorBranches(const RuleContext& ctx) {
 
 double loadAmps(const Part& l) {
     const double kva =
-        l.number("kva").value_or(l.number("kw").value_or(0) / l.number("pf").value_or(1));
+        l.number("kva").value_or(l.number("kw").value_or(0) / l.number("pf").value());
     const double v = l.number("volts").value_or(1);
     const bool one = l.number("phases").value_or(3) == 1;
     return kva * 1000.0 / (one ? v : std::sqrt(3.0) * v);

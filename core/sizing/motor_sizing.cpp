@@ -207,7 +207,7 @@ std::optional<std::pair<std::string, Ampacity>> smallestCable(double requiredA,
 
 OverloadLimit overloadLimit(const Part& m, double fla) {
     OverloadLimit l;
-    const double sf = m.number("sf").value_or(1.0);
+    const double sf = m.number("sf").value(); // default: the field table
     const auto rise = m.number("temp_rise_c");
     const bool high = sf >= 1.15 - 1e-9 || (rise && *rise <= 40);
     l.pctA = high ? 125 : 115;

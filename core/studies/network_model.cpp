@@ -148,7 +148,7 @@ void addShunts(NetworkModel& m, const Network& net, const Tables& t, const Setti
                 m.motors.push_back({bus, fromMagnitude(zOhm / zBase(vb), kMotorXr), p.id});
             }
         } else if (p.kind == PartKind::Load) {
-            const double pf = p.number("pf").value_or(0.9);
+            const double pf = p.number("pf").value(); // default: the field table
             const double kva = p.number("kva").value_or(p.number("kw").value_or(0) / pf);
             m.loads.push_back({bus, std::polar(kva / 1000.0 / kBaseMva, std::acos(pf)), p.id});
         }

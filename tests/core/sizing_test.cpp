@@ -1,6 +1,9 @@
 // Motor branch sizing: worked examples whose method and numbers come from NEC 2023 Article 430
 // and its tables, and the auto-size proposal.
+#include "io/drawing_file.h"
+#include "rules/check.h"
 #include "sizing/auto_size.h"
+#include "sizing/motor_sizing.h"
 #include "test_support.h"
 
 #include <gtest/gtest.h>
@@ -151,4 +154,40 @@ TEST(Sizing, InstantaneousProposalClearsInrushWithinCode) {
     const auto p = propose(m, ScpdType::InstantaneousBreaker);
     // 197.4 A × 1.5 / 0.8 = 370.1 → 375 A; above 800 % (272 A), within 1300 % (442 A).
     EXPECT_DOUBLE_EQ(p.deviceRatingA, 375);
+}
+
+TEST(OneDefault, AClearedServiceFactorReadsAsItsDefaultBeforeAndAfterSaving) {
+    // NEC 2023 430.32(A)(1): 125 % of FLA for a service factor of 1.15 or more, 115 % below.
+    // The field table's default service factor is 1.15; a cleared field must mean the same
+    // thing in the editor as it does once the file is saved and read again.
+    Drawing d = smallLineup();
+    Part* motor = nullptr;
+    for (const auto& p : d.parts())
+        if (p.kind == PartKind::Motor)
+            motor = d.part(p.id);
+    ASSERT_NE(motor, nullptr);
+    ASSERT_FALSE(motor->set("sf", 1.0));
+    EXPECT_DOUBLE_EQ(overloadLimit(*motor, 10).pctA, 115);
+    ASSERT_FALSE(motor->set("sf", FieldValue{}));
+    EXPECT_EQ(motor->number("sf"), 1.15); // the default, shown and saved
+    EXPECT_DOUBLE_EQ(overloadLimit(*motor, 10).pctA, 125);
+    const auto again = io::parseDrawing(io::serializeDrawing(d));
+    ASSERT_TRUE(again.drawing);
+    EXPECT_DOUBLE_EQ(overloadLimit(*again.drawing->part(motor->id), 10).pctA, 125);
+    auto said = [](const Drawing& x) {
+        std::vector<std::string> out;
+        for (const auto& f : checkDrawing(x, testTables()).findings)
+            out.push_back(f.ruleId + ": " + f.message);
+        return out;
+    };
+    EXPECT_EQ(said(*again.drawing), said(d));
+}
+
+TEST(OneDefault, AnEmptyRatingWithADefaultReadsAsTheDefault) {
+    // A drawing whose load has no power factor in its values (as an older editor left it):
+    // every reader gets the field table's 0.9.
+    Part load = Part::make(PartKind::Load, PartId(1), "L");
+    load.values.assign(load.values.size(), FieldValue{});
+    EXPECT_EQ(load.number("pf"), 0.9);
+    EXPECT_EQ(load.number("kva"), std::nullopt); // no default: still nothing
 }
