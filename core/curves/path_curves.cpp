@@ -48,13 +48,12 @@ std::optional<StartProfile> startProfile(const RuleContext& ctx, const Part& m) 
         return std::nullopt;
     StartProfile s;
     s.runningA = running;
-    auto lra = lockedRotorA(m, ctx.tables, nullptr);
-    if (!lra) {
-        lra = 6.0 * running; // common practice
-        s.lraAssumed = true;
-    }
-    s.lockedRotorA = *lra;
-    s.asymA = *lra * ctx.settings().asymmetryFactor;
+    const auto lr = lockedRotor(m, ctx.tables, nullptr);
+    if (!lr)
+        return std::nullopt;
+    s.lraAssumed = lr->assumed;
+    s.lockedRotorA = lr->amps;
+    s.asymA = lr->amps * ctx.settings().asymmetryFactor;
     s.accelS = m.number("accel_s").value_or(5);
     return s;
 }

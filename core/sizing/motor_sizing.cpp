@@ -140,6 +140,23 @@ std::optional<double> lockedRotorA(const Part& m, const Tables& t, std::vector<T
     return lra;
 }
 
+std::optional<LockedRotor> lockedRotor(const Part& m, const Tables& t,
+                                       std::vector<TraceStep>* trace) {
+    if (auto known = lockedRotorA(m, t, trace))
+        return LockedRotor{*known, false};
+    const auto flc = motorFlc(m, t, false);
+    const double base = flc ? flc->amps : m.number("fla").value_or(0);
+    if (base <= 0)
+        return std::nullopt;
+    const double amps = kAssumedLockedRotorMultiple * base;
+    if (trace)
+        trace->push_back({"locked-rotor current",
+                          fmt(amps, 0) + " A assumed = " + fmt(kAssumedLockedRotorMultiple, 0) +
+                              " × " + fmt(base, 1) + " A " + (flc ? "table FLC" : "nameplate FLA") +
+                              " (no LRA or code letter given; common practice)"});
+    return LockedRotor{amps, true};
+}
+
 CableConditions conditionsOf(const Part& c, const Settings& s) {
     CableConditions k;
     k.material = c.word("material").value_or("cu") == "al" ? Material::Al : Material::Cu;

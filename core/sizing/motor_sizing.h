@@ -39,6 +39,20 @@ std::optional<ScpdType> scpdTypeOf(const Part& device);
 /// Locked-rotor current: the given LRA, else from the code letter (upper end of its range).
 std::optional<double> lockedRotorA(const Part& motor, const Tables& t,
                                    std::vector<TraceStep>* trace);
+
+/// Locked-rotor multiple assumed where a motor has neither an LRA nor a code letter (common
+/// practice: 6 × full-load current for a squirrel-cage motor across the line).
+inline constexpr double kAssumedLockedRotorMultiple = 6.0;
+
+/// The locked-rotor current every study, curve and rule uses: lockedRotorA where it is known,
+/// else kAssumedLockedRotorMultiple × the table FLC (the nameplate FLA where the table has no
+/// row), marked assumed and said so in the trace. Nothing where there is no current to base it on.
+struct LockedRotor {
+    double amps = 0;
+    bool assumed = false;
+};
+std::optional<LockedRotor> lockedRotor(const Part& motor, const Tables& t,
+                                       std::vector<TraceStep>* trace);
 /// Instantaneous pickup tolerance assumed below the setting (common practice: ±20 %).
 inline constexpr double kInstantaneousTolerance = 0.20;
 

@@ -165,17 +165,15 @@ void motorStarting(StudyResults& r, const Network& net, const Flow& flow,
         if (p.kind != PartKind::Motor)
             continue;
         MotorStart ms;
-        auto flc = motorFlc(p, t, false);
-        auto lra = lockedRotorA(p, t, nullptr);
-        if (!lra) {
-            lra = 6.0 * (flc ? flc->amps : p.number("fla").value_or(0)); // common practice
-            ms.lraAssumed = true;
-        }
-        ms.lockedRotorA = *lra;
+        const auto lr = lockedRotor(p, t, nullptr);
+        if (!lr)
+            continue; // no current to start with: the motor's own findings say what is missing
+        ms.lraAssumed = lr->assumed;
+        ms.lockedRotorA = lr->amps;
         const int m = l.bus;
         const double vb = r.model.baseV[static_cast<std::size_t>(m)];
         const double rated = p.number("volts").value_or(vb);
-        const double zOhm = rated / std::sqrt(3.0) / *lra;
+        const double zOhm = rated / std::sqrt(3.0) / lr->amps;
         const Complex zlr = std::polar(zOhm / (vb * vb / (kBaseMva * 1e6)), std::acos(s.startPf));
         auto chain = net.branchChain(p.id);
         const NodeIndex busNode = chain.empty() ? net.nodeOf(p.id, 0) : flow.lineNode(chain.back());

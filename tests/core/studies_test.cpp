@@ -1,7 +1,9 @@
 // Studies against published methods and analytic results: infinite-bus transformer faults,
 // an independent series (point-to-point) calculation, ties, κ, voltage drop, motor starting,
 // and properties on generated radial networks.
+#include "curves/path_curves.h"
 #include "rules/check.h"
+#include "sizing/motor_sizing.h"
 #include "studies/admittance.h"
 #include "studies/study.h"
 #include "studies/tree_solver.h"
@@ -354,4 +356,32 @@ TEST(FaultStudy, TreeRecursionEqualsSparseLu) {
     EXPECT_FALSE(TreeSolver::build(meshed.r.model, true).has_value());
     // Two equal cables in parallel: the motor terminal sees half the cable impedance.
     EXPECT_GT(meshed.faultAt(PartId(9)).ikKa, Studied(smallLineup()).faultAt(PartId(9)).ikKa);
+}
+
+TEST(OneAssumption, StudyAndCurvesAssumeTheSameLockedRotorCurrent) {
+    // A motor with neither an LRA nor a code letter, and a nameplate FLA below its table FLC:
+    // the start study and the starting curve must assume the same locked-rotor current
+    // (6 × table FLC, common practice), and say it was assumed.
+    Drawing d = smallLineup();
+    Part* motor = nullptr;
+    for (const auto& p : d.parts())
+        if (p.kind == PartKind::Motor)
+            motor = d.part(p.id);
+    ASSERT_NE(motor, nullptr);
+    ASSERT_FALSE(motor->set("lra", FieldValue{}));
+    ASSERT_FALSE(motor->set("code_letter", FieldValue{}));
+    const auto flc = motorFlc(*motor, testTables(), false);
+    ASSERT_TRUE(flc);
+    ASSERT_FALSE(motor->set("fla", 0.85 * flc->amps));
+    Network net(d);
+    Flow flow(net);
+    const StudyResults study = runStudies(net, flow, testTables(), d.settings);
+    const RuleContext ctx{d, net, flow, testTables(), study};
+    ASSERT_TRUE(study.starts.count(motor->id));
+    const auto profile = startProfile(ctx, *motor);
+    ASSERT_TRUE(profile);
+    EXPECT_TRUE(study.starts.at(motor->id).lraAssumed);
+    EXPECT_TRUE(profile->lraAssumed);
+    EXPECT_DOUBLE_EQ(study.starts.at(motor->id).lockedRotorA, profile->lockedRotorA);
+    EXPECT_DOUBLE_EQ(profile->lockedRotorA, kAssumedLockedRotorMultiple * flc->amps);
 }
