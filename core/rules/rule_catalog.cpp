@@ -122,6 +122,11 @@ constexpr std::array kRules{
     RuleInfo{"study.loadflow.diverged", "load flow did not settle", "common practice",
              Severity::Caution,
              "the fixed-point load flow converges within 200 iterations to 1e−9 per unit"},
+    RuleInfo{"study.solve.failed", "a study could not be solved", "common practice",
+             Severity::Violation,
+             "the network's admittance matrix factorises, so the short-circuit study and the "
+             "load flow have an answer (the checks that need them are otherwise not "
+             "performed)"},
     RuleInfo{"study.not_finite", "a study result could not be computed", "common practice",
              Severity::Caution,
              "every fault current, voltage, running current and starting voltage is a finite "

@@ -33,7 +33,7 @@ Admittance::Admittance(const NetworkModel& m, bool withMotors) : m_n(m.busCount(
     m_lu = std::make_unique<Eigen::SparseLU<Eigen::SparseMatrix<Complex>>>();
     m_lu->analyzePattern(m_y);
     m_lu->factorize(m_y);
-    m_ok = m_lu->info() == Eigen::Success;
+    m_ok = m_lu->info() == Eigen::Success && !failForTests;
 }
 
 Eigen::VectorXcd Admittance::solve(const Eigen::VectorXcd& b) const {

@@ -12,6 +12,10 @@ namespace lineward {
 /// Y = branches + chosen shunts to ground, LU-factorised.
 class Admittance {
 public:
+    /// Test seam: while true, every factorisation reports failure (a singular matrix cannot be
+    /// built from physical ratings, but the path that handles one must be tested).
+    static inline bool failForTests = false;
+
     /// `withMotors` adds the motors' fault contribution shunts (fault study); the load flow
     /// leaves them out. Buses with no path to a shunt get a tiny shunt so Y stays regular.
     Admittance(const NetworkModel& m, bool withMotors);

@@ -39,8 +39,16 @@ void faultStudy(StudyResults& r) {
     std::unique_ptr<Admittance> y;
     if (!tree) {
         y = std::make_unique<Admittance>(r.model, true);
-        if (!y->ok())
+        if (!y->ok()) {
+            r.fault.clear(); // no fault current anywhere: no duty check may pass on a zero
+            r.faultSolved = false;
+            r.notes.push_back(makeFinding(
+                "study.solve.failed", {},
+                "the short-circuit study could not be solved: the network's admittance matrix "
+                "did not factorise (singular); no fault current is known, so the interrupting, "
+                "bracing, SCCR and withstand checks were not performed"));
             return;
+        }
     }
     for (int k = 0; k < r.model.busCount(); ++k) {
         const Complex zth = tree ? tree->zth(k) : y->zColumn(k)[k];
@@ -221,8 +229,15 @@ StudyResults runStudies(const Network& net, const Flow& flow, const Tables& t, c
     std::unique_ptr<Admittance> lu;
     if (!tree) {
         lu = std::make_unique<Admittance>(r.model, false);
-        if (!lu->ok())
+        if (!lu->ok()) {
+            r.notes.push_back(makeFinding(
+                "study.solve.failed", {},
+                "the load flow could not be solved: the network's admittance matrix did not "
+                "factorise (singular); the voltage-drop and motor-starting checks were not "
+                "performed"));
+            guardStudyResults(r, net);
             return r;
+        }
     }
     loadFlow(r, LoadFlowSolver{tree, lu.get()});
     if (!r.loadFlowConverged) {

@@ -33,6 +33,9 @@ struct StudyResults {
     std::vector<Complex> voltage;        ///< steady state, per unit, by solve bus
     std::vector<double> originVoltagePu; ///< |V| at the bus's supplying transformer or source
     bool loadFlowConverged = false;
+    /// False where the network's equations could not be solved (a singular admittance matrix):
+    /// `fault` is then empty and the duty checks are not performed.
+    bool faultSolved = true;
     std::unordered_map<PartId, MotorStart> starts;
     std::unordered_map<PartId, double> loadAmps; ///< steady-state current of each part
     std::vector<Finding> notes;

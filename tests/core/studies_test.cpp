@@ -385,3 +385,31 @@ TEST(OneAssumption, StudyAndCurvesAssumeTheSameLockedRotorCurrent) {
     EXPECT_DOUBLE_EQ(study.starts.at(motor->id).lockedRotorA, profile->lockedRotorA);
     EXPECT_DOUBLE_EQ(profile->lockedRotorA, kAssumedLockedRotorMultiple * flc->amps);
 }
+
+TEST(FailuresAreResults, AFactorisationThatFailsIsAFindingNotZeros) {
+    // Two cables in parallel make the network meshed, so the studies factorise Y. When that
+    // fails, no fault current is known: the check must say so, and no duty check may pass
+    // against a fault current of zero.
+    Drawing d = smallLineup();
+    Part twin = *d.part(PartId(8));
+    twin.id = d.nextPartId();
+    twin.tag = "C-1B";
+    d.addPart(twin);
+    d.addWire(Wire{d.nextWireId(), {PartId(7), 1}, {twin.id, 0}});
+    d.addWire(Wire{d.nextWireId(), {twin.id, 1}, {PartId(9), 0}});
+    auto count = [](const CheckReport& r, std::string_view id) {
+        return std::count_if(r.findings.begin(), r.findings.end(),
+                             [&](const Finding& f) { return f.ruleId == id; });
+    };
+    ASSERT_EQ(count(checkDrawing(d, testTables()), "study.solve.failed"), 0);
+    Admittance::failForTests = true;
+    Studied failed(d);
+    const auto report = checkDrawing(d, testTables());
+    Admittance::failForTests = false;
+    EXPECT_FALSE(failed.r.faultSolved);
+    EXPECT_EQ(failed.r.faultAtNode(failed.net->nodeOf(PartId(9), 0)), nullptr);
+    EXPECT_EQ(count(report, "study.solve.failed"), 2); // the fault study and the load flow
+    for (const auto& f : report.findings)
+        if (f.ruleId == "study.solve.failed")
+            EXPECT_NE(f.message.find("were not performed"), std::string::npos) << f.message;
+}
