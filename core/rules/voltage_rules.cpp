@@ -65,7 +65,9 @@ void starting(const RuleContext& ctx, const Part& motor, const MotorStart& ms,
         return;
     std::vector<TraceStep> trace{
         {"locked-rotor current", fmt(ms.lockedRotorA, 0) + " A" +
-                                     (ms.lraAssumed ? " (6 × FLC assumed, common practice)" : "")},
+                                     (ms.lraAssumed ? " (" + fmt(kAssumedLockedRotorMultiple, 0) +
+                                                          " × table FLC assumed, common practice)"
+                                                    : std::string())},
         {"starting power factor", fmt(s.startPf, 2) + " (setting)"},
         {"method", "superposition on the load-flow state: the motor at locked-rotor impedance, "
                    "others running"}};

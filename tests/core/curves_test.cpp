@@ -205,8 +205,9 @@ std::vector<Finding> cableDamageOf(Part up, Part down) {
     Drawing d = pair(std::move(up), std::move(down));
     const Part* cable = d.partByTag("C");
     EXPECT_NE(cable, nullptr);
-    if (cable)
+    if (cable) {
         EXPECT_FALSE(d.part(cable->id)->set("size", std::string("4 AWG")));
+    }
     std::vector<Finding> out;
     for (const auto& f : checkDrawing(d, testTables()).findings)
         if (f.ruleId == "curve.cable.damage")

@@ -6,6 +6,7 @@
 #include "rules/rule_catalog.h"
 #include "test_support.h"
 
+#include <filesystem>
 #include <gtest/gtest.h>
 #include <map>
 #include <regex>
@@ -110,4 +111,18 @@ TEST(Docs, FileFormatDocumentsEveryKindAndField) {
             EXPECT_NE(section.find("`" + std::string(t) + "`"), std::string::npos)
                 << info.key << " terminal " << t << " is not documented";
     }
+}
+
+TEST(Docs, EveryRuleHasATestThatNamesIt) {
+    // Each rule in the catalogue is named, quoted, by at least one test source (where its
+    // failing and passing cases live), so a rule cannot be added untested.
+    std::string tests;
+    for (const char* dir : {"tests/core", "tests/ui"})
+        for (const auto& e : std::filesystem::directory_iterator(sourcePath(dir)))
+            if (e.path().extension() == ".cpp")
+                tests += readFile(e.path().string());
+    tests += readFile(sourcePath("tests/cli_exit_codes.cmake"));
+    for (const auto& r : ruleCatalog())
+        EXPECT_NE(tests.find("\"" + std::string(r.id) + "\""), std::string::npos)
+            << "no test names rule " << r.id;
 }
