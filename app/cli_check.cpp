@@ -1,8 +1,8 @@
 // `lineward-cli check`: load each file, run every rule, report, exit by the worst finding.
+#include "check/check.h"
 #include "cli_commands.h"
 #include "io/drawing_file.h"
-#include "rules/check.h"
-#include "rules/report_format.h"
+#include "report/report_format.h"
 #include "util/safe_text.h"
 
 #include <iostream>
@@ -31,12 +31,13 @@ int runCheck(const CheckOptions& o, const Tables& tables) {
             anyBad = true;
             continue;
         }
-        const auto report = checkDrawing(*loaded.drawing, tables);
+        const auto result = runCheck(std::move(*loaded.drawing), tables);
+        const CheckReport& report = result->report;
         anyFindings = anyFindings || report.hasOpenAtLeast(threshold);
         if (o.json)
-            all.push_back(reportJson(*loaded.drawing, report, file));
+            all.push_back(reportJson(*result->drawing, report, file));
         else
-            std::cout << reportText(*loaded.drawing, report, file) << "\n";
+            std::cout << reportText(*result->drawing, report, file) << "\n";
     }
     if (o.json) {
         nlohmann::ordered_json out;

@@ -1,7 +1,10 @@
 // `lineward-cli curves FILE --part TAG (--svg|--png|--pdf OUT)`: the Curves plot, headless.
+#include "check/check.h"
 #include "cli_commands.h"
+#include "curves/curve_set.h"
 #include "curves_plot.h"
 #include "io/drawing_file.h"
+#include "studies/study_view.h"
 #include "util/safe_text.h"
 
 #include <QApplication>
@@ -55,8 +58,11 @@ void addCurvesCommand(CLI::App& app, const TablesRef& tables, int& exitCode) {
             exitCode = kBadInput;
             return;
         }
+        const PartId id = p->id;
+        const auto result = runCheck(std::move(*loaded), *tables);
+        const auto view = result->view();
         ensureGuiApplication();
-        const auto set = buildCurveSet(*loaded, *tables, p->id);
+        const auto set = view ? buildCurveSet(*view, id) : CurveSet{};
         if (auto why = ui::saveCurves(set, QString::fromStdString(out)); !why.isEmpty()) {
             std::cerr << "lineward-cli curves: " << escapeControls(why.toStdString()) << "\n";
             exitCode = kBadInput;

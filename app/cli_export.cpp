@@ -1,4 +1,5 @@
 // `lineward-cli export FILE [--pdf OUT] [--svg OUT] [--csv DIR] [--paper NAME] [--portrait]`
+#include "check/check.h"
 #include "cli_commands.h"
 #include "io/drawing_file.h"
 #include "submittal.h"
@@ -41,7 +42,8 @@ void addExportCommand(CLI::App& app, const TablesRef& tables, int& exitCode) {
         for (const auto& out : {a->pdf, a->svg})
             if (!out.empty())
                 QDir().mkpath(QFileInfo(QString::fromStdString(out)).absolutePath());
-        const Drawing& d = *loaded;
+        // One analysis for every output: the PDF, the SVG and the CSVs read the same result.
+        const auto result = runCheck(std::move(*loaded), *tables);
         exitCode = kClean;
         auto fail = [&](const QString& why) {
             std::cerr << "lineward-cli export: " << escapeControls(why.toStdString()) << "\n";
@@ -51,20 +53,20 @@ void addExportCommand(CLI::App& app, const TablesRef& tables, int& exitCode) {
             ui::SubmittalOptions o;
             o.paper = *ui::paperByName(QString::fromStdString(a->paper));
             o.orientation = a->portrait ? QPageLayout::Portrait : QPageLayout::Landscape;
-            auto r = ui::writeSubmittalPdf(QString::fromStdString(a->pdf), d, tables, o);
+            auto r = ui::writeSubmittalPdf(QString::fromStdString(a->pdf), result, tables, o);
             if (!r.error.isEmpty())
                 return fail(r.error);
             std::cout << "wrote " << a->pdf << " (" << r.pages << " pages, " << r.oneLineSheets
                       << " one-line sheet(s))\n";
         }
         if (!a->svg.empty()) {
-            if (auto why = ui::writeOneLineSvg(QString::fromStdString(a->svg), d, tables);
+            if (auto why = ui::writeOneLineSvg(QString::fromStdString(a->svg), result, tables);
                 !why.isEmpty())
                 return fail(why);
             std::cout << "wrote " << a->svg << "\n";
         }
         if (!a->csv.empty()) {
-            if (auto why = ui::writeScheduleCsvs(QString::fromStdString(a->csv), d, *tables);
+            if (auto why = ui::writeScheduleCsvs(QString::fromStdString(a->csv), *result);
                 !why.isEmpty())
                 return fail(why);
             std::cout << "wrote motors.csv, cables.csv, devices.csv in " << a->csv << "\n";

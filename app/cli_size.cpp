@@ -1,6 +1,6 @@
 // `lineward-cli size`: a compliant motor bucket from hp (or kW) and voltage.
 #include "cli_commands.h"
-#include "rules/report_format.h"
+#include "report/report_format.h"
 #include "sizing/auto_size.h"
 #include "util/safe_text.h"
 

@@ -1,10 +1,11 @@
 // `lineward-cli study FILE [--json]`: fault currents, voltages and motor starting per node and
 // part.
+#include "check/check.h"
 #include "cli_commands.h"
 #include "io/drawing_file.h"
-#include "rules/report_format.h"
+#include "report/report_format.h"
 #include "sizing/motor_sizing.h"
-#include "studies/study.h"
+#include "studies/study_view.h"
 #include "util/safe_text.h"
 
 #include <cmath>
@@ -134,10 +135,15 @@ void addStudyCommand(CLI::App& app, const TablesRef& tables, int& exitCode) {
         auto loaded = loadForVerb(*file, exitCode);
         if (!loaded)
             return;
-        Network net(*loaded);
-        Flow flow(net);
-        const auto r = runStudies(net, flow, *tables, loaded->settings);
-        const auto j = studyJson(net, flow, r);
+        const auto result = runCheck(std::move(*loaded), *tables);
+        if (!result->study) {
+            for (const auto& f : result->report.findings)
+                if (f.ruleId == "check.incomplete")
+                    std::cerr << "lineward-cli study: " << escapeControls(f.message) << "\n";
+            exitCode = kBadInput;
+            return;
+        }
+        const auto j = studyJson(*result->net, *result->flow, *result->study);
         if (*json)
             std::cout << inertJson(j.dump(2)) << "\n";
         else

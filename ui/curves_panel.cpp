@@ -3,6 +3,7 @@
 
 #include "curves_plot.h"
 #include "guard.h"
+#include "studies/study_view.h"
 
 #include <QPainter>
 
@@ -22,9 +23,11 @@ void CurvesPanel::showPart(std::optional<PartId> id) {
 }
 
 void CurvesPanel::refresh() {
-    m_set = m_part && m_doc.drawing().part(*m_part)
-                ? buildCurveSet(m_doc.drawing(), m_doc.tables(), *m_part)
-                : CurveSet{};
+    // Read from the newest check result (its own drawing: a part added since is not in it yet).
+    const CheckResult& result = m_doc.result();
+    const auto view = result.view();
+    m_set = m_part && view && result.drawing->part(*m_part) ? buildCurveSet(*view, *m_part)
+                                                            : CurveSet{};
     update();
 }
 

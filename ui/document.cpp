@@ -7,6 +7,7 @@
 
 #include <QCoreApplication>
 #include <QEventLoop>
+#include <QFileInfo>
 #include <QThread>
 #include <QTimer>
 #include <spdlog/spdlog.h>
@@ -18,22 +19,33 @@ namespace lineward::ui {
 namespace {
 // The check never ends the program, on the GUI thread or a worker: an exception that escapes
 // the core (which already turns a failing rule family into a finding) becomes a finding too.
-CheckReport checkSafely(const Drawing& d, const Tables& tables) {
+std::shared_ptr<const CheckResult> checkSafely(std::shared_ptr<const Drawing> d,
+                                               const Tables& tables, quint64 generation) {
     try {
-        return checkDrawing(d, tables);
+        return runCheck(d, tables, generation);
     } catch (const std::exception& e) {
         spdlog::error("check failed: {}", e.what());
-        CheckReport r;
-        r.findings.push_back(
+        auto r = std::make_shared<CheckResult>();
+        r->drawing = std::move(d);
+        r->tables = &tables;
+        r->generation = generation;
+        r->report.findings.push_back(
             makeFinding("check.incomplete", {}, std::string("the check stopped: ") + e.what()));
-        r.openCounts[static_cast<std::size_t>(Severity::Violation)] = 1;
+        r->report.openCounts[static_cast<std::size_t>(Severity::Violation)] = 1;
         return r;
     }
 }
+// A drawing's own path is kept absolute: the recovery slot records it, and a recovered drawing
+// opened from another folder must save to the file it came from, not to a namesake there.
+QString absolute(const QString& path) {
+    return path.isEmpty() ? path : QFileInfo(path).absoluteFilePath();
+}
+
 } // namespace
 
 Document::Document(std::shared_ptr<const Tables> tables, QObject* parent)
-    : QObject(parent), m_tables(std::move(tables)) {
+    : QObject(parent), m_tables(std::move(tables)),
+      m_result(checkSafely(std::make_shared<const Drawing>(), *m_tables, 0)) {
     connect(&m_undo, &QUndoStack::cleanChanged, this, &Document::modifiedChanged);
     startCheck();
 }
@@ -47,7 +59,7 @@ QString Document::open(const QString& path) {
     auto loaded = io::loadDrawing(path.toStdString());
     if (!loaded)
         return QString::fromStdString(loaded.error->text());
-    reset(std::move(*loaded.drawing), path);
+    reset(std::move(*loaded.drawing), absolute(path));
     spdlog::info("opened {}", path.toStdString());
     return {};
 }
@@ -55,7 +67,7 @@ QString Document::open(const QString& path) {
 QString Document::saveAs(const QString& path) {
     if (auto why = io::saveDrawing(m_drawing, path.toStdString()))
         return QString::fromStdString(*why);
-    m_path = path;
+    m_path = absolute(path);
     m_recovered = false;
     m_undo.setClean();
     emit modifiedChanged();
@@ -74,9 +86,21 @@ void Document::reset(Drawing drawing, const QString& path) {
 }
 
 void Document::resetRecovered(Drawing drawing, const QString& originalPath) {
-    reset(std::move(drawing), originalPath);
+    reset(std::move(drawing), absolute(originalPath));
     m_recovered = true;
     emit modifiedChanged();
+}
+
+void Document::resetChecked(std::shared_ptr<const CheckResult> result) {
+    m_drawing = *result->drawing;
+    m_path.clear();
+    m_recovered = false;
+    m_undo.clear();
+    ++m_generation; // any check still running is older than this result
+    m_result = std::move(result);
+    emit drawingReset();
+    emit modifiedChanged();
+    emit reportChanged();
 }
 
 void Document::addPart(const Part& part) {
@@ -201,15 +225,15 @@ void Document::changed() {
 
 void Document::startCheck() {
     const quint64 gen = ++m_generation;
+    auto copy = std::make_shared<const Drawing>(m_drawing);
     if (m_drawing.parts().size() < kBackgroundParts) {
-        finishCheck(gen, checkSafely(m_drawing, *m_tables));
+        finishCheck(gen, checkSafely(std::move(copy), *m_tables, gen));
         return;
     }
-    auto copy = std::make_shared<const Drawing>(m_drawing);
     auto tables = m_tables;
     ++m_running;
     std::thread([this, copy, tables, gen] {
-        CheckReport r = checkSafely(*copy, *tables);
+        auto r = checkSafely(copy, *tables, gen);
         QMetaObject::invokeMethod(
             this, [this, gen, r = std::move(r)]() mutable { finishCheck(gen, std::move(r)); },
             Qt::QueuedConnection);
@@ -217,10 +241,10 @@ void Document::startCheck() {
     }).detach();
 }
 
-void Document::finishCheck(quint64 generation, CheckReport report) {
+void Document::finishCheck(quint64 generation, std::shared_ptr<const CheckResult> result) {
     if (generation != m_generation)
         return; // a newer edit is being checked; this result is stale
-    m_report = std::move(report);
+    m_result = std::move(result);
     emit reportChanged();
 }
 

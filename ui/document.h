@@ -3,9 +3,8 @@
 // change event that the Sheet and panels follow.
 #pragma once
 
+#include "check/check.h"
 #include "model/drawing.h"
-#include "rules/check.h"
-#include "studies/study.h"
 
 #include <QObject>
 #include <QString>
@@ -23,7 +22,10 @@ public:
     ~Document() override;
 
     const Drawing& drawing() const { return m_drawing; }
-    const CheckReport& report() const { return m_report; }
+    /// The newest check result: what every panel, badge and the Submittal read.
+    const CheckResult& result() const { return *m_result; }
+    std::shared_ptr<const CheckResult> sharedResult() const { return m_result; }
+    const CheckReport& report() const { return m_result->report; }
     const Tables& tables() const { return *m_tables; }
     std::shared_ptr<const Tables> sharedTables() const { return m_tables; }
     const QString& filePath() const { return m_path; }
@@ -43,6 +45,9 @@ public:
     /// Replaces the drawing by one recovered after a crash: it keeps the name of its own file
     /// (if it had one) and stays modified until saved.
     void resetRecovered(Drawing drawing, const QString& originalPath);
+    /// Replaces the drawing by the one a check result was made from and takes that result as
+    /// this document's (the Submittal paints a result it was given; nothing is checked again).
+    void resetChecked(std::shared_ptr<const CheckResult> result);
 
     // --- edits, called by commands only ---
     void addPart(const Part& part);
@@ -76,7 +81,7 @@ signals:
     void wireRemoved(lineward::WireId id);
     void bucketsChanged();
     void sheetChanged();
-    /// A new check report is available.
+    /// A new check result is available.
     void reportChanged();
     /// The modified state changed (an edit, undo to the saved state, a save).
     void modifiedChanged();
@@ -84,11 +89,11 @@ signals:
 private:
     void changed();
     void startCheck();
-    void finishCheck(quint64 generation, CheckReport report);
+    void finishCheck(quint64 generation, std::shared_ptr<const CheckResult> result);
 
     std::shared_ptr<const Tables> m_tables;
     Drawing m_drawing;
-    CheckReport m_report;
+    std::shared_ptr<const CheckResult> m_result;
     QString m_path;
     bool m_recovered = false;
     QUndoStack m_undo;

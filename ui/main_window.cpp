@@ -16,7 +16,7 @@
 #include "part_item.h"
 #include "parts_palette.h"
 #include "plain_text.h"
-#include "rules/report_format.h"
+#include "report/report_format.h"
 #include "schedules_panel.h"
 #include "sheet_scene.h"
 #include "sheet_view.h"

@@ -102,7 +102,9 @@ void MainWindow::buildFileMenu() {
             QFileDialog::getSaveFileName(this, tr("Export Submittal PDF"), {}, tr("PDF (*.pdf)"));
         if (path.isEmpty())
             return;
-        auto r = writeSubmittalPdf(path, m_doc.drawing(), m_doc.sharedTables(), SubmittalOptions{});
+        m_doc.waitForCheck(); // the result of the newest edit
+        auto r =
+            writeSubmittalPdf(path, m_doc.sharedResult(), m_doc.sharedTables(), SubmittalOptions{});
         if (!r.error.isEmpty())
             plainMessage(this, QMessageBox::Warning, tr("Export failed"), r.error);
         else
@@ -111,15 +113,17 @@ void MainWindow::buildFileMenu() {
     menuAction(file, tr("Export One-line &SVG…"), QKeySequence(), this, [this] {
         const auto path =
             QFileDialog::getSaveFileName(this, tr("Export one-line SVG"), {}, tr("SVG (*.svg)"));
+        m_doc.waitForCheck();
         if (!path.isEmpty())
-            if (auto why = writeOneLineSvg(path, m_doc.drawing(), m_doc.sharedTables());
+            if (auto why = writeOneLineSvg(path, m_doc.sharedResult(), m_doc.sharedTables());
                 !why.isEmpty())
                 plainMessage(this, QMessageBox::Warning, tr("Export failed"), why);
     });
     menuAction(file, tr("Export Schedules &CSV…"), QKeySequence(), this, [this] {
         const auto dir = QFileDialog::getExistingDirectory(this, tr("Folder for the schedules"));
+        m_doc.waitForCheck();
         if (!dir.isEmpty())
-            if (auto why = writeScheduleCsvs(dir, m_doc.drawing(), m_doc.tables()); !why.isEmpty())
+            if (auto why = writeScheduleCsvs(dir, m_doc.result()); !why.isEmpty())
                 plainMessage(this, QMessageBox::Warning, tr("Export failed"), why);
     });
     file->addSeparator();
@@ -188,7 +192,7 @@ void MainWindow::printPreview() {
                 SubmittalOptions o;
                 o.paper = p->pageLayout().pageSize();
                 o.orientation = p->pageLayout().orientation();
-                paintSubmittal(*p, m_doc.drawing(), m_doc.sharedTables(), o);
+                paintSubmittal(*p, m_doc.sharedResult(), m_doc.sharedTables(), o);
             }));
     preview.exec();
 }
@@ -203,7 +207,7 @@ void MainWindow::printSubmittal() {
     SubmittalOptions o;
     o.paper = printer.pageLayout().pageSize();
     o.orientation = printer.pageLayout().orientation();
-    auto r = paintSubmittal(printer, m_doc.drawing(), m_doc.sharedTables(), o);
+    auto r = paintSubmittal(printer, m_doc.sharedResult(), m_doc.sharedTables(), o);
     if (!r.error.isEmpty())
         plainMessage(this, QMessageBox::Warning, tr("Print failed"), r.error);
 }

@@ -23,7 +23,7 @@ void SchedulesPanel::refresh() {
         removeTab(0);
         delete w;
     }
-    for (const auto& s : buildSchedules(m_doc.drawing(), m_doc.tables())) {
+    for (const auto& s : buildSchedules(m_doc.result())) {
         auto* table =
             new QTableWidget(static_cast<int>(s.rows.size()), static_cast<int>(s.headers.size()));
         table->setObjectName(QString::fromStdString("schedule_" + s.name));

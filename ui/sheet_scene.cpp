@@ -3,7 +3,7 @@
 
 #include "bucket_item.h"
 #include "part_item.h"
-#include "rules/report_format.h"
+#include "report/report_format.h"
 #include "wire_item.h"
 
 #include <QPainter>

@@ -7,9 +7,10 @@
 #include "curves/path_curves.h"
 #include "curves_plot.h"
 #include "document.h"
+#include "report/report_format.h"
 #include "report/schedules.h"
-#include "rules/report_format.h"
 #include "sheet_scene.h"
+#include "studies/study_view.h"
 
 #include <QBuffer>
 #include <QDate>
@@ -258,7 +259,7 @@ namespace {
 
 struct SubmittalData {
     const Drawing& d;
-    const RuleContext& ctx;
+    const StudyView* view; ///< nothing where no study could run (no curve sheets then)
     SheetScene& scene;
     std::vector<PartId> curveParts;
     std::vector<std::vector<QStringList>> findings;
@@ -298,7 +299,7 @@ int paintPages(QPagedPaintDevice& dev, const SubmittalData& s, const SubmittalOp
     for (auto id : s.curveParts) {
         nextPage(c);
         titleBlock(c, "Curves " + qs(s.d.part(id)->tag));
-        paintCurves(painter, c.body(), buildCurveSet(s.ctx, id));
+        paintCurves(painter, c.body(), s.view ? buildCurveSet(*s.view, id) : CurveSet{});
     }
     painter.end();
     return c.pageNo;
@@ -306,7 +307,7 @@ int paintPages(QPagedPaintDevice& dev, const SubmittalData& s, const SubmittalOp
 
 } // namespace
 
-SubmittalResult paintSubmittal(QPagedPaintDevice& dev, const Drawing& d,
+SubmittalResult paintSubmittal(QPagedPaintDevice& dev, std::shared_ptr<const CheckResult> result,
                                std::shared_ptr<const Tables> tables, const SubmittalOptions& o) {
     SubmittalResult res;
     // The layout is in points (72 per inch); a printer is asked for that resolution and the
@@ -319,21 +320,19 @@ SubmittalResult paintSubmittal(QPagedPaintDevice& dev, const Drawing& d,
         return res;
     }
     Document doc(tables);
-    doc.reset(d);
-    doc.waitForCheck();
+    doc.resetChecked(result);
     SheetScene scene(doc);
     scene.setPrinting(true);
     scene.routeWires();
-    Network net(d);
-    Flow flow(net);
-    const StudyResults study = runStudies(net, flow, *tables, d.settings);
-    const RuleContext ctx{d, net, flow, *tables, study};
-    SubmittalData data{d, ctx, scene, {}, findingRows(d, doc.report()), buildSchedules(d, *tables)};
+    const Drawing& d = *result->drawing;
+    const auto view = result->view();
+    SubmittalData data{d,  view ? &*view : nullptr,        scene,
+                       {}, findingRows(d, result->report), buildSchedules(*result)};
     if (o.curveParts)
         data.curveParts = *o.curveParts;
     else
-        for (const auto& b : motorBranches(ctx))
-            data.curveParts.push_back(b.motor->id);
+        for (const auto& m : result->motors)
+            data.curveParts.push_back(m.branch.motor->id);
     const QString date = o.date.isEmpty() ? QDate::currentDate().toString(Qt::ISODate) : o.date;
     // "Sheet n of m" needs m first: lay the pages out once on a scratch PDF of the same size.
     QBuffer scratch;
@@ -349,24 +348,25 @@ SubmittalResult paintSubmittal(QPagedPaintDevice& dev, const Drawing& d,
     return res;
 }
 
-SubmittalResult writeSubmittalPdf(const QString& path, const Drawing& d,
+SubmittalResult writeSubmittalPdf(const QString& path, std::shared_ptr<const CheckResult> result,
                                   std::shared_ptr<const Tables> tables, const SubmittalOptions& o) {
+    const Drawing& d = *result->drawing;
     QPdfWriter pdf(path);
     pdf.setPageLayout(QPageLayout(o.paper, o.orientation, QMarginsF(0, 0, 0, 0)));
     pdf.setResolution(72);
     pdf.setTitle(qs(d.sheet.title));
     pdf.setCreator("Lineward");
-    auto r = paintSubmittal(pdf, d, std::move(tables), o);
+    auto r = paintSubmittal(pdf, std::move(result), std::move(tables), o);
     if (r.error.isEmpty() && !QFile::exists(path))
         r.error = "cannot write " + path;
     return r;
 }
 
-QString writeOneLineSvg(const QString& path, const Drawing& d,
+QString writeOneLineSvg(const QString& path, std::shared_ptr<const CheckResult> result,
                         std::shared_ptr<const Tables> tables) {
+    const Drawing& d = *result->drawing;
     Document doc(std::move(tables));
-    doc.reset(d);
-    doc.waitForCheck();
+    doc.resetChecked(std::move(result));
     SheetScene scene(doc);
     scene.setPrinting(true);
     scene.routeWires();
@@ -384,10 +384,10 @@ QString writeOneLineSvg(const QString& path, const Drawing& d,
     return p.end() ? QString() : "cannot write " + path;
 }
 
-QString writeScheduleCsvs(const QString& dir, const Drawing& d, const Tables& tables) {
+QString writeScheduleCsvs(const QString& dir, const CheckResult& result) {
     if (!QDir().mkpath(dir))
         return "cannot make folder " + dir;
-    for (const auto& s : buildSchedules(d, tables)) {
+    for (const auto& s : buildSchedules(result)) {
         QFile f(dir + "/" + qs(s.name) + ".csv");
         if (!f.open(QIODevice::WriteOnly | QIODevice::Truncate))
             return "cannot write " + f.fileName();

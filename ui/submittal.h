@@ -2,8 +2,7 @@
 // sheets, painted onto any paged device (PDF writer or printer); plus SVG and CSV exports.
 #pragma once
 
-#include "model/drawing.h"
-#include "tables/tables.h"
+#include "check/check.h"
 
 #include <QPageLayout>
 #include <QPageSize>
@@ -35,15 +34,17 @@ struct SubmittalResult {
     int oneLineSheets = 0;
     QString error;
 };
-SubmittalResult paintSubmittal(QPagedPaintDevice& device, const Drawing& d,
+/// Everything below reads one check result (the editor's newest, or the command line's one
+/// runCheck); nothing here builds a network or runs a study. `tables` are the result's.
+SubmittalResult paintSubmittal(QPagedPaintDevice& device, std::shared_ptr<const CheckResult> result,
                                std::shared_ptr<const Tables> tables, const SubmittalOptions& o);
 /// paintSubmittal into a PDF file (vector, selectable text).
-SubmittalResult writeSubmittalPdf(const QString& path, const Drawing& d,
+SubmittalResult writeSubmittalPdf(const QString& path, std::shared_ptr<const CheckResult> result,
                                   std::shared_ptr<const Tables> tables, const SubmittalOptions& o);
 /// The one-line drawing as SVG; the reason on failure.
-QString writeOneLineSvg(const QString& path, const Drawing& d,
+QString writeOneLineSvg(const QString& path, std::shared_ptr<const CheckResult> result,
                         std::shared_ptr<const Tables> tables);
 /// motors.csv, cables.csv, devices.csv (RFC 4180) into a folder; the reason on failure.
-QString writeScheduleCsvs(const QString& dir, const Drawing& d, const Tables& tables);
+QString writeScheduleCsvs(const QString& dir, const CheckResult& result);
 
 } // namespace lineward::ui

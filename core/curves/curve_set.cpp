@@ -2,20 +2,11 @@
 #include "curves/curve_set.h"
 
 #include "curves/path_curves.h"
-#include "studies/study.h"
 
 #include <algorithm>
 #include <cmath>
 
 namespace lineward {
-
-CurveSet buildCurveSet(const Drawing& d, const Tables& t, PartId id) {
-    Network net(d);
-    Flow flow(net);
-    const StudyResults study = runStudies(net, flow, t, d.settings);
-    const RuleContext ctx{d, net, flow, t, study};
-    return buildCurveSet(ctx, id);
-}
 
 namespace {
 
@@ -48,7 +39,7 @@ void chooseAxis(CurveSet& set, const std::vector<PathDevice>& devices,
     set.maxA = std::min(1e5, std::pow(10.0, std::ceil(std::log10(hi))));
 }
 
-void addDeviceBands(CurveSet& set, const RuleContext& ctx, const std::vector<PathDevice>& devices) {
+void addDeviceBands(CurveSet& set, const StudyView& ctx, const std::vector<PathDevice>& devices) {
     for (const auto& dv : devices) {
         // A device across a transformer sees the current scaled by the voltage ratio.
         const Part& p = *dv.part;
@@ -99,7 +90,7 @@ void addMotorSeries(CurveSet& set, const Part& motor, const StartProfile& prof) 
 }
 
 // The damage curve of the cable nearest the part: its own cable for a motor, or itself.
-void addDamageCurve(CurveSet& set, const RuleContext& ctx, const Part& part) {
+void addDamageCurve(CurveSet& set, const StudyView& ctx, const Part& part) {
     const Part* cable = part.kind == PartKind::Cable ? &part : nullptr;
     for (auto c : cable ? std::vector<PartId>{} : ctx.net.branchChain(part.id))
         if (!cable && ctx.drawing.part(c)->kind == PartKind::Cable)
@@ -119,7 +110,7 @@ void addDamageCurve(CurveSet& set, const RuleContext& ctx, const Part& part) {
 
 } // namespace
 
-CurveSet buildCurveSet(const RuleContext& ctx, PartId id) {
+CurveSet buildCurveSet(const StudyView& ctx, PartId id) {
     CurveSet set;
     const Part* part = ctx.drawing.part(id);
     if (!part)

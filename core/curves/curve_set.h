@@ -3,7 +3,7 @@
 #pragma once
 
 #include "model/drawing.h"
-#include "tables/tables.h"
+#include "model/ids.h"
 
 #include <string>
 #include <vector>
@@ -27,10 +27,9 @@ struct CurveSet {
     double voltsBase = 0;          ///< currents are referred to this voltage
 };
 
-struct RuleContext;
-/// The curve set of a part's path; empty series when the part is not found or unfed.
-CurveSet buildCurveSet(const Drawing& d, const Tables& t, PartId part);
-/// The same on an existing check context (many plots of one drawing share one study).
-CurveSet buildCurveSet(const RuleContext& ctx, PartId part);
+struct StudyView;
+/// The curve set of a part's path, from the check result's view (many plots of one drawing
+/// share one study); empty series when the part is not found or unfed.
+CurveSet buildCurveSet(const StudyView& ctx, PartId part);
 
 } // namespace lineward

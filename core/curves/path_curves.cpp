@@ -7,7 +7,7 @@
 
 namespace lineward {
 
-std::vector<PathDevice> devicesOnPath(const RuleContext& ctx, PartId id, PathExtent extent) {
+std::vector<PathDevice> devicesOnPath(const StudyView& ctx, PartId id, PathExtent extent) {
     std::vector<PathDevice> out;
     const Part* p = ctx.drawing.part(id);
     if (!p)
@@ -41,7 +41,7 @@ std::vector<PathDevice> devicesOnPath(const RuleContext& ctx, PartId id, PathExt
     return out;
 }
 
-std::optional<StartProfile> startProfile(const RuleContext& ctx, const Part& m) {
+std::optional<StartProfile> startProfile(const StudyView& ctx, const Part& m) {
     auto flc = motorFlc(m, ctx.tables, false);
     const double running = m.number("fla").value_or(flc ? flc->amps : 0);
     if (running <= 0)
@@ -58,7 +58,7 @@ std::optional<StartProfile> startProfile(const RuleContext& ctx, const Part& m) 
     return s;
 }
 
-std::optional<double> cableDamageI2t(const RuleContext& ctx, const Part& c) {
+std::optional<double> cableDamageI2t(const StudyView& ctx, const Part& c) {
     const auto size = c.word("size").value_or("");
     const double ins = c.number("insulation_c").value_or(90), sets = c.number("sets").value_or(1);
     const bool al = c.word("material").value_or("cu") == "al";
@@ -76,7 +76,7 @@ std::optional<double> cableDamageI2t(const RuleContext& ctx, const Part& c) {
     return perSet * sets * sets; // the current divides among the sets
 }
 
-double availableFaultA(const RuleContext& ctx, const Part& p) {
+double availableFaultA(const StudyView& ctx, const Part& p) {
     const NodeIndex n = isTwoTerminal(p.kind) ? ctx.flow.lineNode(p.id) : ctx.net.nodeOf(p.id, 0);
     const auto* f = ctx.study.faultAtNode(n);
     return f ? f->ikKa * 1000.0 : 0.0;

@@ -3,19 +3,13 @@
 // `lineward-cli curves` and the Curves panel.
 #pragma once
 
-#include "curves/trip_curve.h"
-#include "rules/rule_context.h"
+#include "curves/path_types.h"
+#include "studies/study_view.h"
 
 #include <optional>
 #include <vector>
 
 namespace lineward {
-
-/// A protective part on a path with its band.
-struct PathDevice {
-    const Part* part = nullptr;
-    TripCurve curve;
-};
 
 /// How far up devicesOnPath goes: to the source; only to the first device above the part that
 /// is not an overload relay (what a selectivity check compares against); or only to the first
@@ -25,22 +19,15 @@ enum class PathExtent { ToSource, NearestUpstream, OwnProtection };
 
 /// Protective parts (breakers, fuses, overload relays) from `part` toward the source, nearest
 /// first: the part itself when protective, its branch chain, then each device above.
-std::vector<PathDevice> devicesOnPath(const RuleContext& ctx, PartId part,
+std::vector<PathDevice> devicesOnPath(const StudyView& ctx, PartId part,
                                       PathExtent extent = PathExtent::ToSource);
 
-/// A motor's starting current against time: (amps, seconds) corners of a step curve.
-struct StartProfile {
-    double asymA = 0, lockedRotorA = 0, runningA = 0, accelS = 0;
-    static constexpr double kAsymS =
-        0.1; ///< asymmetrical inrush lasts a few cycles (common practice)
-    bool lraAssumed = false;
-};
-std::optional<StartProfile> startProfile(const RuleContext& ctx, const Part& motor);
+std::optional<StartProfile> startProfile(const StudyView& ctx, const Part& motor);
 
 /// Cable damage: the I²t it takes (ICEA P-32-382 / IEC adiabatic, per parallel set times sets²).
-std::optional<double> cableDamageI2t(const RuleContext& ctx, const Part& cable);
+std::optional<double> cableDamageI2t(const StudyView& ctx, const Part& cable);
 
 /// Fault current available at a part's line side, in amperes (0 when unknown).
-double availableFaultA(const RuleContext& ctx, const Part& part);
+double availableFaultA(const StudyView& ctx, const Part& part);
 
 } // namespace lineward

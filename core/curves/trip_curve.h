@@ -2,6 +2,7 @@
 // time by which it has cleared (maximum) at each current. Infinity means "does not trip".
 #pragma once
 
+#include "model/curve_points.h"
 #include "model/part.h"
 
 #include <limits>
@@ -12,14 +13,6 @@
 namespace lineward {
 
 inline constexpr double kNoTrip = std::numeric_limits<double>::infinity();
-
-/// One point of a user-entered curve.
-struct CurvePoint {
-    double amps, minS, maxS;
-};
-
-/// Parses "amps:min_s:max_s; ..." (currents rising, 0 < min ≤ max); the reason when refused.
-std::optional<std::string> parseCurvePoints(const std::string& text, std::vector<CurvePoint>& out);
 
 /// A protective part's band. Built from its ratings, or from its user points when it has them.
 class TripCurve {

@@ -1,8 +1,8 @@
 // Part field access and the cross-field checks of each kind.
 #include "model/part.h"
 
-#include "curves/trip_curve.h"
 #include "model/conductor.h"
+#include "model/curve_points.h"
 
 #include <algorithm>
 #include <stdexcept>

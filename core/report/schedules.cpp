@@ -1,9 +1,9 @@
 // Schedules are views of the core's results; every number comes from sizing or the studies.
 #include "report/schedules.h"
 
-#include "rules/rule_context.h"
 #include "sizing/motor_sizing.h"
 #include "studies/study.h"
+#include "studies/study_view.h"
 
 #include <charconv>
 #include <cmath>
@@ -48,19 +48,31 @@ std::string faultAt(const StudyResults& r, NodeIndex n) {
 
 } // namespace
 
-std::vector<Schedule> buildSchedules(const Drawing& d, const Tables& t) {
-    Network net(d);
-    Flow flow(net);
-    const StudyResults r = runStudies(net, flow, t, d.settings);
-    const RuleContext ctx{d, net, flow, t, r};
+std::vector<Schedule> buildSchedules(const CheckResult& result) {
+    const Drawing& d = *result.drawing;
+    const Tables& t = *result.tables;
     Schedule motors{"motors",
                     {"Tag", "Rating", "Volts", "FLC A", "FLA A", "Short-circuit device",
                      "Contactor", "Overload A", "Class", "Conductor", "Length ft", "EGC", "Drop %",
                      "Fault kA"},
                     {}};
-    for (const auto& b : motorBranches(ctx)) {
+    Schedule cables{"cables",
+                    {"Tag", "Material", "Size", "Sets", "Length ft", "Insulation °C", "Ampacity A",
+                     "Load A", "Drop at load end %", "Fault kA at line end"},
+                    {}};
+    Schedule devices{"devices",
+                     {"Tag", "Kind", "Rating", "Interrupting kA", "Line-side fault kA", "Duty %"},
+                     {}};
+    // Without a network and studies the schedules have their headers and no rows.
+    if (!result.view())
+        return {motors, cables, devices};
+    const Network& net = *result.net;
+    const Flow& flow = *result.flow;
+    const StudyResults& r = *result.study;
+    for (const auto& facts : result.motors) {
+        const MotorBranch& b = facts.branch;
         const Part& m = *b.motor;
-        auto flc = motorFlc(m, t, false);
+        const auto& flc = facts.flc;
         const Part* cable = b.cables.empty() ? nullptr : b.cables.front();
         const double drop = dropPct(r, net, flow, m);
         motors.rows.push_back(
@@ -83,13 +95,6 @@ std::vector<Schedule> buildSchedules(const Drawing& d, const Tables& t) {
              std::isnan(drop) ? "" : fmt(drop, 2),
              b.scpd ? faultAt(r, flow.lineNode(b.scpd->id)) : faultAt(r, net.nodeOf(m.id, 0))});
     }
-    Schedule cables{"cables",
-                    {"Tag", "Material", "Size", "Sets", "Length ft", "Insulation °C", "Ampacity A",
-                     "Load A", "Drop at load end %", "Fault kA at line end"},
-                    {}};
-    Schedule devices{"devices",
-                     {"Tag", "Kind", "Rating", "Interrupting kA", "Line-side fault kA", "Duty %"},
-                     {}};
     for (const auto& p : d.parts()) {
         auto load = r.loadAmps.find(p.id);
         if (p.kind == PartKind::Cable) {

@@ -2,8 +2,7 @@
 // Schedules panel, CSV export and the Submittal.
 #pragma once
 
-#include "model/drawing.h"
-#include "tables/tables.h"
+#include "check/check.h"
 
 #include <string>
 #include <vector>
@@ -17,8 +16,8 @@ struct Schedule {
     std::vector<std::vector<std::string>> rows;
 };
 
-/// Motor, cable and device schedules of a drawing (runs the studies it needs).
-std::vector<Schedule> buildSchedules(const Drawing& d, const Tables& t);
+/// Motor, cable and device schedules of a drawing, read from its check result.
+std::vector<Schedule> buildSchedules(const CheckResult& result);
 
 /// RFC 4180 CSV: CRLF line ends, fields quoted where they hold a comma, quote or line break.
 std::string toCsv(const Schedule& s);

@@ -15,7 +15,7 @@ struct BranchCheck {
     std::vector<Finding>& out;
 
     /// Adds a finding about `about` (and the motor), starting its trace with the FLC steps.
-    Finding& add(std::string_view rule, const Part& about, std::string message) {
+    Finding& add(RuleId rule, const Part& about, std::string message) {
         std::vector<PartId> parts{about.id};
         if (about.id != b.motor->id)
             parts.push_back(b.motor->id);

@@ -2,6 +2,7 @@
 // cable damage, and selectivity between each device and the one above it.
 #include "curves/path_curves.h"
 #include "rules/rule_catalog.h"
+#include "rules/rule_context.h"
 #include "sizing/motor_sizing.h"
 
 #include <cmath>
@@ -202,7 +203,7 @@ void selectivity(const RuleContext& ctx, const Part& d, const Part* overloadBelo
 
 void checkCurves(const RuleContext& ctx, std::vector<Finding>& out) {
     std::unordered_map<PartId, const Part*> overloadOf; // branch device → its overload relay
-    for (const auto& b : motorBranches(ctx))
+    for (const auto& b : ctx.branches)
         if (b.scpd && b.overload)
             overloadOf[b.scpd->id] = b.overload;
     for (const auto& p : ctx.drawing.parts()) {

@@ -152,7 +152,8 @@ void withstand(const RuleContext& ctx, const Part& cable, std::vector<Finding>& 
         return;
     letThrough(dev, perSet, stated, &devHow); // the explanations only when reporting
     cableI2t(ctx, cable, &cableHow);
-    auto x = makeFinding(stated ? "duty.withstand" : "duty.withstand.assumed", {cable.id, dev.id},
+    auto x = makeFinding(stated ? RuleId("duty.withstand") : RuleId("duty.withstand.assumed"),
+                         {cable.id, dev.id},
                          cable.tag + " takes " + fmt(*limit, 0) + " A²s; " + dev.tag +
                              " lets through " + fmt(*let, 0) + " A²s at " + fmt(f->ikKa, 2) +
                              " kA" + (stated ? "" : " (assumed; enter its let-through I²t)"));

@@ -153,7 +153,7 @@ void checkTransformers(const RuleContext& ctx, const MotorFactMap& motors,
                        std::vector<Finding>& out);
 
 void checkFeeders(const RuleContext& ctx, std::vector<Finding>& out) {
-    const auto branches = motorBranches(ctx);
+    const auto& branches = ctx.branches;
     FeederCheck c{ctx, motorFacts(ctx, branches), {}, out};
     for (const auto& b : branches)
         for (const Part* p : b.chain)

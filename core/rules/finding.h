@@ -3,6 +3,7 @@
 
 #include "model/field.h"
 #include "model/ids.h"
+#include "util/trace.h"
 
 #include <optional>
 #include <string>
@@ -17,12 +18,6 @@ enum class Severity { Note = 0, Caution = 1, Violation = 2 };
 
 std::string_view severityName(Severity s);
 std::optional<Severity> severityFromName(std::string_view s);
-
-/// One named input or intermediate value of a calculation, in the order it was used.
-struct TraceStep {
-    std::string name;
-    std::string value;
-};
 
 /// One change of one rating; the editor applies all changes of a fix as one undoable edit.
 struct FieldChange {

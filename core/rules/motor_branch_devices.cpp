@@ -25,13 +25,13 @@ void overload(BranchCheck& c) {
     if (setting <= lim.maxA + 1e-9)
         return;
     const bool withinC = setting <= lim.maxC + 1e-9;
-    auto& f =
-        c.add(withinC ? "branch.overload.exception" : "branch.overload.setting", *ol,
-              ol->tag + " set at " + fmt(setting) + " A exceeds " + fmt(lim.pctA, 0) +
-                  " % of FLA " + fmt(*fla) + " A = " + fmt(lim.maxA) + " A" +
-                  (withinC ? "; 430.32(C) allows up to " + fmt(lim.maxC) +
-                                 " A only where the lower setting will not let the motor start"
-                           : ""));
+    auto& f = c.add(
+        withinC ? RuleId("branch.overload.exception") : RuleId("branch.overload.setting"), *ol,
+        ol->tag + " set at " + fmt(setting) + " A exceeds " + fmt(lim.pctA, 0) + " % of FLA " +
+            fmt(*fla) + " A = " + fmt(lim.maxA) + " A" +
+            (withinC ? "; 430.32(C) allows up to " + fmt(lim.maxC) +
+                           " A only where the lower setting will not let the motor start"
+                     : ""));
     f.trace = {
         {"nameplate FLA", fmt(*fla) + " A (NEC 430.6(A)(2))"},
         {"basis", lim.basis},

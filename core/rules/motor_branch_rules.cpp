@@ -47,10 +47,11 @@ void ratedDevice(BranchCheck& c, const Part& d, ScpdType type, const ScpdLimit& 
         return;
     const bool withinExc = rating <= lim.excMaxA + 1e-9;
     const bool hard = c.b.motor->flag("hard_to_start");
-    const char* rule = withinExc && hard ? "branch.scpd.exception" : "branch.scpd.rating";
+    const RuleId rule =
+        withinExc && hard ? RuleId("branch.scpd.exception") : RuleId("branch.scpd.rating");
     auto& f =
         c.add(rule, d,
-              std::string(scpdTypeKey(type)) + " " + d.tag + " rated " + fmt(rating, 0) +
+              std::string(scpdTypeName(type)) + " " + d.tag + " rated " + fmt(rating, 0) +
                   " A exceeds " + fmt(lim.maxA, 0) + " A for " + c.motorName() +
                   (withinExc && hard ? "; Exception No. 2 allows up to " + fmt(lim.excMaxA, 0) +
                                            " A for a motor that "
@@ -147,7 +148,7 @@ void scpd(BranchCheck& c) {
 } // namespace
 
 void checkMotorBranches(const RuleContext& ctx, std::vector<Finding>& out) {
-    for (const auto& b : motorBranches(ctx)) {
+    for (const auto& b : ctx.branches) {
         auto flc = motorFlc(*b.motor, ctx.tables, false);
         if (!flc) {
             auto f = makeFinding("branch.flc.unknown", {b.motor->id},

@@ -1,4 +1,4 @@
-// Rule catalogue. Add a row here, a row in docs/rules.md, and the check itself.
+// Rule catalogue look-ups; the rows are in rules/rule_table.h.
 #include "rules/rule_catalog.h"
 
 #include <array>
@@ -26,182 +26,25 @@ std::optional<Severity> severityFromName(std::string_view s) {
     return std::nullopt;
 }
 
-namespace {
-
-constexpr std::array kRules{
-    RuleInfo{
-        "topology.unfed", "part fed by nothing", "common practice", Severity::Violation,
-        "no path of parts and wires joins the part to a source, even with every device closed"},
-    RuleInfo{"topology.deenergized", "part de-energized by an open device", "common practice",
-             Severity::Note, "every path from a source to the part passes an open device"},
-    RuleInfo{"topology.loop", "closed loop", "common practice", Severity::Note,
-             "closed branches > nodes − components (a closed tie or parallel path); the "
-             "studies solve it by nodal analysis"},
-    RuleInfo{"topology.voltage.mismatch", "voltage mismatch", "NEMA MG 1-12.44; NEC 2023 110.3(B)",
-             Severity::Violation,
-             "motor: |V_system − V_rated| ≤ 10 % of V_rated; bus, load, transformer winding: "
-             "|V_system − V_rated| ≤ 5 % of V_rated"},
-    RuleInfo{"topology.motor.no_overload", "motor without overload protection", "NEC 2023 430.32",
-             Severity::Violation,
-             "an overload relay lies in the branch between the motor and its feeding bus"},
-    RuleInfo{"topology.inst_breaker.no_overload",
-             "instantaneous-only breaker without an overload relay in its bucket",
-             "NEC 2023 430.52(C)(3)", Severity::Violation,
-             "the bucket holding the instantaneous-only breaker also holds an overload relay"},
-    RuleInfo{"branch.flc.nameplate", "FLC taken from the nameplate", "NEC 2023 430.6(A)(1)",
-             Severity::Note,
-             "no row in Table 430.248/430.250 for the motor's hp and voltage: the "
-             "nameplate FLA sizes the branch"},
-    RuleInfo{"branch.flc.unknown", "no full-load current", "NEC 2023 430.6(A)(1)",
-             Severity::Caution, "no table row and no nameplate FLA: the branch cannot be sized"},
-    RuleInfo{"branch.conductor.ampacity", "branch conductor too small", "NEC 2023 430.22",
-             Severity::Violation,
-             "ampacity ≥ 1.25 × FLC; ampacity = min(A_ins × k_ambient × k_adjust, "
-             "A_termination) × sets"},
-    RuleInfo{"branch.scpd.missing", "no short-circuit protective device", "NEC 2023 430.52(A)",
-             Severity::Violation, "the motor branch holds a breaker or fuses"},
-    RuleInfo{"branch.scpd.rating", "short-circuit device too large", "NEC 2023 430.52(C)(1)",
-             Severity::Violation,
-             "rating ≤ Table 430.52(C)(1) % × FLC, raised to the next standard "
-             "size (Exception No. 1)"},
-    RuleInfo{"branch.scpd.exception", "short-circuit device under Exception No. 2",
-             "NEC 2023 430.52(C)(1) Exception No. 2", Severity::Caution,
-             "rating above the table value but within the Exception No. 2 maximum, motor marked "
-             "hard to start"},
-    RuleInfo{"branch.inst.setting", "instantaneous setting too high", "NEC 2023 430.52(C)(3)",
-             Severity::Violation,
-             "setting ≤ 800 % × FLC (1100 % Design B premium); up to 1300 % "
-             "(1700 %) where the inrush needs it"},
-    RuleInfo{"branch.inst.inrush", "instantaneous pickup below motor inrush", "common practice",
-             Severity::Caution, "setting × (1 − 0.20) ≥ LRA × asymmetry factor"},
-    RuleInfo{"branch.overload.no_fla", "overload setting cannot be judged", "NEC 2023 430.6(A)(2)",
-             Severity::Caution, "the motor has a nameplate FLA"},
-    RuleInfo{"branch.overload.setting", "overload setting too high", "NEC 2023 430.32(A)(1)",
-             Severity::Violation,
-             "setting ≤ 125 % FLA (SF ≥ 1.15 or rise ≤ 40 °C), else ≤ 115 % FLA"},
-    RuleInfo{"branch.overload.exception", "overload setting under 430.32(C)", "NEC 2023 430.32(C)",
-             Severity::Caution, "setting above 430.32(A)(1) but ≤ 140 % (130 %) FLA"},
-    RuleInfo{"branch.contactor.size", "contactor too small", "NEMA ICS 2 Table 2-4-1",
-             Severity::Violation,
-             "NEMA size hp at the motor voltage ≥ motor hp and continuous A ≥ "
-             "motor current; or AC-3 A ≥ motor current"},
-    RuleInfo{"branch.disconnect.rating", "disconnect ampere rating too low", "NEC 2023 430.110(A)",
-             Severity::Violation, "ampere rating ≥ 1.15 × FLC"},
-    RuleInfo{"branch.disconnect.hp", "disconnect horsepower rating too low",
-             "NEC 2023 430.109(A)(1)", Severity::Violation, "hp rating ≥ motor hp"},
-    RuleInfo{"branch.egc.size", "equipment grounding conductor too small", "NEC 2023 250.122",
-             Severity::Violation,
-             "EGC ≥ Table 250.122 size for the device, increased in proportion "
-             "to the phase conductors (250.122(B))"},
-    RuleInfo{"feeder.conductor.ampacity", "feeder conductor too small",
-             "NEC 2023 430.24; 215.2(A)(1)", Severity::Violation,
-             "ampacity ≥ 1.25 × largest FLC + other FLC + 1.25 × continuous + "
-             "non-continuous"},
-    RuleInfo{"feeder.device.rating", "feeder device too large", "NEC 2023 430.62(A)",
-             Severity::Violation,
-             "rating ≤ largest branch device + other motors' FLC + other loads, "
-             "rounded down to a standard rating"},
-    RuleInfo{"conductor.protection", "conductor not protected at its ampacity", "NEC 2023 240.4",
-             Severity::Violation,
-             "device rating ≤ ampacity, or the next standard rating up to 800 A "
-             "(240.4(B)); small conductors per 240.4(D)"},
-    RuleInfo{"bus.load", "bus rating below its load", "NEC 2023 110.3(B)", Severity::Violation,
-             "continuous rating ≥ calculated load (430.24 method)"},
-    RuleInfo{"transformer.load", "transformer loaded above its rating", "common practice",
-             Severity::Caution, "sum of running currents ≤ rated secondary current"},
-    RuleInfo{"transformer.protection", "transformer protection too large",
-             "NEC 2023 Table 450.3(B)", Severity::Violation,
-             "primary ≤ 125 % (next size) alone, or ≤ 250 % with secondary ≤ 125 % (next size)"},
-    RuleInfo{"check.incomplete", "a family of checks could not run", "common practice",
-             Severity::Violation,
-             "every rule family ran to the end; one that stops on an internal error reports "
-             "this instead of its findings, which are missing"},
-    RuleInfo{"study.cable.no_data", "cable without impedance data", "common practice",
-             Severity::Caution,
-             "the cable's size has a row in NEC Chapter 9 Table 9 (or is a mm² size)"},
-    RuleInfo{"study.loadflow.diverged", "load flow did not settle", "common practice",
-             Severity::Caution,
-             "the fixed-point load flow converges within 200 iterations to 1e−9 per unit"},
-    RuleInfo{"study.solve.failed", "a study could not be solved", "common practice",
-             Severity::Violation,
-             "the network's admittance matrix factorises, so the short-circuit study and the "
-             "load flow have an answer (the checks that need them are otherwise not "
-             "performed)"},
-    RuleInfo{"study.not_finite", "a study result could not be computed", "common practice",
-             Severity::Caution,
-             "every fault current, voltage, running current and starting voltage is a finite "
-             "number"},
-    RuleInfo{"duty.interrupting", "interrupting rating below available fault", "NEC 2023 110.9",
-             Severity::Violation,
-             "interrupting rating ≥ symmetrical fault current at the line side"},
-    RuleInfo{"duty.sccr", "bucket SCCR below available fault", "NEC 2023 110.10; 430.8; 409.22",
-             Severity::Violation,
-             "bucket short-circuit current rating ≥ fault current at its line side"},
-    RuleInfo{"duty.bracing", "bus bracing below available fault", "NEC 2023 110.10",
-             Severity::Violation, "bus bracing ≥ fault current at the bus"},
-    RuleInfo{"duty.withstand", "cable cannot withstand the let-through",
-             "ICEA P-32-382; IEC 60364-4-43", Severity::Violation,
-             "stated let-through I²t (or I² × stated clearing time) ≤ cable I²t = "
-             "0.0297·log10((T2+234)/(T1+234))·A² for copper (0.0125, 228 for aluminium), "
-             "k²S² for mm² sizes"},
-    RuleInfo{"duty.withstand.assumed", "cable withstand not shown", "ICEA P-32-382; IEC 60364-4-43",
-             Severity::Caution,
-             "as duty.withstand with an assumed clearing time: 1.5 cycles in a breaker's "
-             "instantaneous region, half a cycle for a fuse above 20 × rating"},
-    RuleInfo{"voltage.drop.branch", "branch voltage drop above the limit",
-             "NEC 2023 210.19 informational note (setting)", Severity::Caution,
-             "(|V_bus| − |V_load|) / V_nominal ≤ vdrop_branch_pct"},
-    RuleInfo{"voltage.drop.total", "feeder + branch voltage drop above the limit",
-             "NEC 2023 215.2 informational note (setting)", Severity::Caution,
-             "(|V_origin| − |V_load|) / V_nominal ≤ vdrop_total_pct; origin = supplying "
-             "transformer or source"},
-    RuleInfo{"voltage.start.dip", "bus dip while a motor starts", "common practice (setting)",
-             Severity::Caution,
-             "dip at the motor's bus with it at locked rotor, others running ≤ start_dip_pct"},
-    RuleInfo{"voltage.start.terminal", "low motor voltage while starting",
-             "common practice (setting)", Severity::Caution,
-             "terminal voltage at locked rotor ≥ start_terminal_pct of rated"},
-    RuleInfo{"curve.nuisance", "device may trip on motor start", "common practice",
-             Severity::Caution,
-             "device minimum time > 0.1 s at the asymmetrical inrush, > acceleration time at "
-             "locked-rotor "
-             "current, and no trip at running current"},
-    RuleInfo{"curve.overload.stall", "overload relay slower than the motor's stall time",
-             "IEC 60947-4-1; common practice", Severity::Caution,
-             "relay maximum time from hot at locked-rotor current < safe stall time (hot)"},
-    RuleInfo{"curve.overload.start", "overload relay may trip during acceleration",
-             "IEC 60947-4-1; common practice", Severity::Caution,
-             "relay minimum time from cold at locked-rotor current > acceleration time"},
-    RuleInfo{"curve.cable.damage", "protection slower than the cable's damage curve",
-             "NEC 2023 110.10; ICEA P-32-382", Severity::Caution,
-             "combined maximum clearing time < I²t / I² at every current from 2 × ampacity to the "
-             "instantaneous region (below the available fault)"},
-    RuleInfo{"curve.selectivity", "devices not selective", "common practice (setting)",
-             Severity::Caution,
-             "upstream minimum time > downstream maximum time + coordination margin for every "
-             "current up "
-             "to the fault available at the downstream device"},
-    RuleInfo{"drawing.tag.duplicate", "duplicate tag", "common practice", Severity::Caution,
-             "no two parts share a tag"},
-    RuleInfo{"topology.dangling", "unconnected terminal", "common practice", Severity::Caution,
-             "every terminal of a part has at least one wire"},
-};
-
-} // namespace
-
 std::span<const RuleInfo> ruleCatalog() {
-    return kRules;
+    return catalog_data::kRules;
+}
+
+std::optional<RuleId> RuleId::find(std::string_view id) {
+    for (std::size_t i = 0; i < catalog_data::kRules.size(); ++i)
+        if (catalog_data::kRules[i].id == id)
+            return RuleId(i);
+    return std::nullopt;
 }
 
 const RuleInfo& ruleInfo(std::string_view id) {
-    for (const auto& r : kRules)
-        if (r.id == id)
-            return r;
+    if (auto r = RuleId::find(id))
+        return r->info();
     throw std::out_of_range("unknown rule id " + std::string(id));
 }
 
-Finding makeFinding(std::string_view ruleId, std::vector<PartId> parts, std::string message) {
-    const auto& info = ruleInfo(ruleId);
+Finding makeFinding(RuleId rule, std::vector<PartId> parts, std::string message) {
+    const auto& info = rule.info();
     Finding f;
     f.ruleId = std::string(info.id);
     f.severity = info.severity;

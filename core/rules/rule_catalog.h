@@ -2,20 +2,34 @@
 // test keeps the two equal.
 #pragma once
 
-#include "rules/finding.h"
+#include "rules/rule_table.h"
 
+#include <optional>
 #include <span>
 #include <string_view>
 
 namespace lineward {
 
-/// Fixed facts about one rule.
-struct RuleInfo {
-    std::string_view id;      ///< dotted id of our own, e.g. "topology.unfed"
-    std::string_view title;   ///< short title shown in the Findings list
-    std::string_view clause;  ///< code clause or source ("NEC 2023 430.32", "common practice")
-    Severity severity;        ///< severity when the rule is broken
-    std::string_view formula; ///< the test, in words or symbols
+/// A rule of the catalogue, named by its id. Made from a string literal it is checked while
+/// compiling: `makeFinding("topology.unfed", ...)` with a misspelt id does not build.
+class RuleId {
+public:
+    consteval RuleId(const char* id) : m_index(indexOf(id)) {}
+    /// The rule with this id when the id comes from outside (a file, a command line).
+    static std::optional<RuleId> find(std::string_view id);
+    const RuleInfo& info() const { return catalog_data::kRules[m_index]; }
+    std::string_view id() const { return info().id; }
+    friend bool operator==(RuleId, RuleId) = default;
+
+private:
+    explicit constexpr RuleId(std::size_t index) : m_index(index) {}
+    static consteval std::size_t indexOf(std::string_view id) {
+        for (std::size_t i = 0; i < catalog_data::kRules.size(); ++i)
+            if (catalog_data::kRules[i].id == id)
+                return i;
+        throw "unknown rule id: add it to core/rules/rule_table.h"; // a compile error here
+    }
+    std::size_t m_index;
 };
 
 std::span<const RuleInfo> ruleCatalog();
@@ -23,6 +37,6 @@ std::span<const RuleInfo> ruleCatalog();
 const RuleInfo& ruleInfo(std::string_view id);
 
 /// A finding pre-filled from the catalogue.
-Finding makeFinding(std::string_view ruleId, std::vector<PartId> parts, std::string message);
+Finding makeFinding(RuleId rule, std::vector<PartId> parts, std::string message);
 
 } // namespace lineward

@@ -3,8 +3,8 @@
 #pragma once
 
 #include "model/drawing.h"
-#include "rules/finding.h"
 #include "tables/tables.h"
+#include "util/trace.h"
 
 #include <optional>
 #include <string>
@@ -103,7 +103,5 @@ std::optional<EgcSize> egcSize(double deviceA, Material m, const std::string& ph
 /// breakers).
 double egcDeviceRating(const Part& device, ScpdType type, MotorType motor, double flc,
                        const Tables& t);
-
-std::string fmt(double v, int decimals = 1);
 
 } // namespace lineward

@@ -1,8 +1,6 @@
 // Finds non-finite study results, blanks them and says which could not be computed.
 #include "studies/finite_guard.h"
 
-#include "rules/rule_catalog.h"
-
 #include <cmath>
 
 namespace lineward {
@@ -33,10 +31,10 @@ std::string tagOf(const Drawing& d, PartId id) {
 }
 
 void note(StudyResults& r, std::vector<PartId> parts, const std::string& what) {
-    r.notes.push_back(makeFinding(
-        "study.not_finite", std::move(parts),
-        what + " could not be computed: the arithmetic left the range of numbers (an extreme "
-               "rating, or a network that cannot carry its load); it is shown as unknown"));
+    r.issues.push_back(
+        {StudyIssueKind::NotFinite, std::move(parts),
+         what + " could not be computed: the arithmetic left the range of numbers (an extreme "
+                "rating, or a network that cannot carry its load); it is shown as unknown"});
 }
 
 } // namespace
@@ -86,17 +84,6 @@ void guardStudyResults(StudyResults& r, const Network& net) {
         note(r, {it->first}, "the starting voltage of " + tagOf(d, it->first));
         it = r.starts.erase(it);
     }
-}
-
-void guardFindingNumbers(std::vector<Finding>& findings) {
-    for (auto& f : findings)
-        for (auto* v : {&f.computed, &f.limit})
-            if (*v && !std::isfinite(**v)) {
-                f.trace.push_back({v == &f.computed ? "computed" : "limit",
-                                   std::isnan(**v) ? "could not be computed (not a number)"
-                                                   : "unbounded (no finite value)"});
-                v->reset();
-            }
 }
 
 } // namespace lineward

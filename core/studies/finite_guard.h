@@ -1,8 +1,7 @@
-// The last step of the studies and of the check: no result is ever NaN or infinite. A value
-// that could not be computed is removed and a finding says what and why.
+// The last step of the studies: no result is ever NaN or infinite. A value that could not be
+// computed is removed and a study issue says what and why (the rules report it).
 #pragma once
 
-#include "rules/finding.h"
 #include "studies/study.h"
 
 #include <vector>
@@ -10,12 +9,8 @@
 namespace lineward {
 
 /// Replaces every non-finite study result (fault, voltage, current, start) with "unknown" and
-/// adds a `study.not_finite` note naming it. Voltages that are not finite also mark the load
+/// adds a NotFinite study issue naming it. Voltages that are not finite also mark the load
 /// flow as not settled, so voltage checks are skipped rather than judged on garbage.
 void guardStudyResults(StudyResults& r, const Network& net);
-
-/// Drops a finding's computed value or limit where it is not finite (there is no number to
-/// show), keeping the finding and saying so in its trace.
-void guardFindingNumbers(std::vector<Finding>& findings);
 
 } // namespace lineward

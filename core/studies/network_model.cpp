@@ -2,8 +2,6 @@
 // nodes they join become one solve bus; cables and transformers are branches.
 #include "studies/network_model.h"
 
-#include "rules/rule_catalog.h"
-#include "rules/rule_context.h"
 #include "sizing/motor_sizing.h"
 
 #include <cmath>
@@ -110,10 +108,10 @@ void addBranches(NetworkModel& m, const Network& net, const Tables& t) {
         } else if (auto ohms = cableOhms(p, t)) {
             z = *ohms / zBase(m.baseV[static_cast<std::size_t>(a)]);
         } else {
-            auto f = makeFinding("study.cable.no_data", {p.id},
-                                 p.tag + ": no impedance data for " + p.word("size").value_or("?") +
-                                     "; the studies treat it as having none");
-            m.notes.push_back(std::move(f));
+            m.issues.push_back({StudyIssueKind::CableNoData,
+                                {p.id},
+                                p.tag + ": no impedance data for " + p.word("size").value_or("?") +
+                                    "; the studies treat it as having none"});
             z = Complex(1e-9, 1e-9);
         }
         m.branches.push_back({a, b, z, p.id});

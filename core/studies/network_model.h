@@ -2,7 +2,7 @@
 // closed zero-impedance devices), branch impedances in per unit, sources, motors and loads.
 #pragma once
 
-#include "rules/finding.h"
+#include "studies/study_issue.h"
 #include "tables/tables.h"
 #include "topology/network.h"
 
@@ -44,8 +44,8 @@ struct NetworkModel {
     std::vector<double> baseV;  ///< by solve bus: nominal line-to-line volts
     std::vector<ModelBranch> branches;
     std::vector<ModelShunt> sources, motors;
-    std::vector<ModelLoad> loads; ///< motors running and static loads
-    std::vector<Finding> notes;   ///< parts the model could not represent
+    std::vector<ModelLoad> loads;   ///< motors running and static loads
+    std::vector<StudyIssue> issues; ///< parts the model could not represent
     int busCount() const { return static_cast<int>(baseV.size()); }
     /// Base current in amperes at a bus.
     double baseAmps(int bus) const;

@@ -2,8 +2,6 @@
 // same factorised Y) and motor starting (superposition on the load-flow state).
 #include "studies/study.h"
 
-#include "rules/rule_catalog.h"
-#include "rules/rule_context.h"
 #include "sizing/motor_sizing.h"
 #include "studies/admittance.h"
 #include "studies/finite_guard.h"
@@ -42,11 +40,12 @@ void faultStudy(StudyResults& r) {
         if (!y->ok()) {
             r.fault.clear(); // no fault current anywhere: no duty check may pass on a zero
             r.faultSolved = false;
-            r.notes.push_back(makeFinding(
-                "study.solve.failed", {},
-                "the short-circuit study could not be solved: the network's admittance matrix "
-                "did not factorise (singular); no fault current is known, so the interrupting, "
-                "bracing, SCCR and withstand checks were not performed"));
+            r.issues.push_back(
+                {StudyIssueKind::FaultSolveFailed,
+                 {},
+                 "the short-circuit study could not be solved: the network's admittance matrix "
+                 "did not factorise (singular); no fault current is known, so the interrupting, "
+                 "bracing, SCCR and withstand checks were not performed"});
             return;
         }
     }
@@ -220,7 +219,7 @@ void motorStarting(StudyResults& r, const Network& net, const Flow& flow,
 StudyResults runStudies(const Network& net, const Flow& flow, const Tables& t, const Settings& s) {
     StudyResults r;
     r.model = buildNetworkModel(net, t, s);
-    r.notes = r.model.notes;
+    r.issues = r.model.issues;
     if (r.model.busCount() == 0)
         return r;
     faultStudy(r);
@@ -230,22 +229,23 @@ StudyResults runStudies(const Network& net, const Flow& flow, const Tables& t, c
     if (!tree) {
         lu = std::make_unique<Admittance>(r.model, false);
         if (!lu->ok()) {
-            r.notes.push_back(makeFinding(
-                "study.solve.failed", {},
-                "the load flow could not be solved: the network's admittance matrix did not "
-                "factorise (singular); the voltage-drop and motor-starting checks were not "
-                "performed"));
+            r.issues.push_back(
+                {StudyIssueKind::LoadFlowSolveFailed,
+                 {},
+                 "the load flow could not be solved: the network's admittance matrix did not "
+                 "factorise (singular); the voltage-drop and motor-starting checks were not "
+                 "performed"});
             guardStudyResults(r, net);
             return r;
         }
     }
     loadFlow(r, LoadFlowSolver{tree, lu.get()});
     if (!r.loadFlowConverged) {
-        auto f = makeFinding(
-            "study.loadflow.diverged", {},
-            "the load flow did not settle: the network cannot carry its loads at a "
-            "usable voltage (look for long, small feeders); voltage checks are skipped");
-        r.notes.push_back(std::move(f));
+        r.issues.push_back({StudyIssueKind::LoadFlowDiverged,
+                            {},
+                            "the load flow did not settle: the network cannot carry its loads at a "
+                            "usable voltage (look for long, small feeders); voltage checks are "
+                            "skipped"});
     }
     originVoltages(r, net, flow);
     partCurrents(r, net, flow);

@@ -38,7 +38,7 @@ struct StudyResults {
     bool faultSolved = true;
     std::unordered_map<PartId, MotorStart> starts;
     std::unordered_map<PartId, double> loadAmps; ///< steady-state current of each part
-    std::vector<Finding> notes;
+    std::vector<StudyIssue> issues; ///< what could not be computed, for the rules to report
 
     /// Solve bus of a network node, or −1.
     int busOf(NodeIndex n) const;

@@ -157,6 +157,20 @@ std::string_view scpdTypeKey(ScpdType t) {
     return "";
 }
 
+std::string_view scpdTypeName(ScpdType t) {
+    switch (t) {
+    case ScpdType::NonTimeDelayFuse:
+        return "non-time-delay fuse";
+    case ScpdType::TimeDelayFuse:
+        return "time-delay fuse";
+    case ScpdType::InstantaneousBreaker:
+        return "instantaneous-trip breaker";
+    case ScpdType::InverseTimeBreaker:
+        return "inverse-time breaker";
+    }
+    return "";
+}
+
 std::shared_ptr<const Tables> loadTables(std::span<const tables::EmbeddedFile> files) {
     auto tb = std::make_shared<Tables>();
     for (const auto& f : files) {

@@ -22,6 +22,8 @@ enum class ScpdType { NonTimeDelayFuse, TimeDelayFuse, InstantaneousBreaker, Inv
 enum class MotorType { SinglePhase, SquirrelCage, DesignBPremium, Synchronous, WoundRotor };
 
 std::string_view scpdTypeKey(ScpdType t);
+/// The device type in words, as Table 430.52 names it (for messages; the key is for files).
+std::string_view scpdTypeName(ScpdType t);
 
 /// Full-load current table: rows by hp, columns by rated motor voltage.
 struct FlcTable {

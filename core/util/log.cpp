@@ -35,6 +35,8 @@ std::filesystem::path setupLogging(const std::string& name) {
     }
     auto logger = std::make_shared<spdlog::logger>(name, sinks.begin(), sinks.end());
     logger->set_level(spdlog::level::info);
+    // Flush every record: an error logged just before a crash (or a kill) must be in the file.
+    logger->flush_on(spdlog::level::info);
     spdlog::set_default_logger(logger);
     if (file.empty())
         spdlog::warn("cannot open a log file in {}; logging to stderr only",

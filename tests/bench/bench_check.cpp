@@ -1,8 +1,8 @@
 // Google Benchmark: full check, one edit then re-check, file load, and a bare breadth-first
 // walk of the same Boost graph, on generated plants of 500 to 32,000 parts.
+#include "check/check.h"
 #include "io/drawing_file.h"
 #include "plant_generator.h"
-#include "rules/check.h"
 #include "topology/network.h"
 
 #include <algorithm>

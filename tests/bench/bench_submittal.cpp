@@ -18,7 +18,7 @@ void BM_SubmittalPdf(benchmark::State& state) {
     const QString path = QDir::tempPath() + "/lineward-bench-submittal.pdf";
     int pages = 0;
     for (auto _ : state) {
-        auto r = ui::writeSubmittalPdf(path, d, tables, ui::SubmittalOptions{});
+        auto r = ui::writeSubmittalPdf(path, runCheck(d, *tables), tables, ui::SubmittalOptions{});
         pages = r.pages;
         benchmark::DoNotOptimize(pages);
     }

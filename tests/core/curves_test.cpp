@@ -1,6 +1,6 @@
 // Device bands against the points their standards state, and selectivity on analytic cases.
+#include "check/check.h"
 #include "curves/trip_curve.h"
-#include "rules/check.h"
 #include "test_support.h"
 
 #include <cmath>

@@ -1,8 +1,8 @@
 // Keeps the documents true: docs/rules.md matches the rule catalogue, and samples/README.md
 // lists exactly the findings the mistake sample produces.
+#include "check/check.h"
 #include "io/drawing_file.h"
 #include "model/part_kind.h"
-#include "rules/check.h"
 #include "rules/rule_catalog.h"
 #include "test_support.h"
 

@@ -1,8 +1,8 @@
 // Replays every input the fuzzer ever found (tests/fuzz/regressions/) and the hand-made
 // hostile files (tests/data/hostile/) with the fuzz target's own property: a drawing that
 // round-trips and checks to finite numbers, or a located, non-empty, bounded message.
+#include "check/check.h"
 #include "io/drawing_file.h"
-#include "rules/check.h"
 #include "test_support.h"
 
 #include <cmath>

@@ -1,9 +1,10 @@
 // Hostile and huge input: ids of any value, any order, over-size lists refused while parsing,
 // physical ranges, non-finite results guarded, CSV formulas and terminal controls made inert.
+#include "check/check.h"
 #include "io/drawing_file.h"
+#include "report/report_format.h"
 #include "report/schedules.h"
-#include "rules/check.h"
-#include "rules/report_format.h"
+#include "rules/rule_context.h"
 #include "studies/finite_guard.h"
 #include "test_support.h"
 #include "util/safe_text.h"
@@ -214,12 +215,19 @@ TEST(FiniteGuard, NonFiniteStudyResultsBecomeAFinding) {
         EXPECT_TRUE(std::isfinite(a));
     EXPECT_FALSE(r.loadFlowConverged);
     int notes = 0;
-    for (const auto& f : r.notes)
-        if (f.ruleId == "study.not_finite") {
+    for (const auto& f : r.issues)
+        if (f.kind == StudyIssueKind::NotFinite) {
             ++notes;
             EXPECT_NE(f.message.find("could not be computed"), std::string::npos);
         }
     EXPECT_EQ(notes, 3);
+    // The rules, not the studies, make the findings: each issue becomes one study.not_finite.
+    const std::vector<MotorBranch> branches = findMotorBranches(d, net);
+    std::vector<Finding> out;
+    reportStudyIssues(StudyView{d, net, flow, testTables(), r, branches}, out);
+    EXPECT_EQ(std::count_if(out.begin(), out.end(),
+                            [](const Finding& f) { return f.ruleId == "study.not_finite"; }),
+              3);
 }
 
 TEST(FiniteGuard, FindingNumbersAreNeverNonFinite) {
@@ -276,7 +284,7 @@ TEST(CsvSafety, ExportedScheduleOfAHostileTagIsInert) {
     Drawing d = smallLineup();
     d.part(PartId(9))->tag = "=1+2";
     int shown = 0;
-    for (const auto& s : buildSchedules(d, testTables())) {
+    for (const auto& s : buildSchedules(*runCheck(d, testTables()))) {
         const bool holds = std::any_of(s.rows.begin(), s.rows.end(), [](const auto& row) {
             return std::find(row.begin(), row.end(), "=1+2") != row.end();
         });

@@ -1,8 +1,8 @@
 // New parts' voltages follow what they are dropped onto; pasted parts are renumbered with their
 // bucket and land offset.
+#include "check/check.h"
 #include "io/drawing_file.h"
 #include "model/part_defaults.h"
-#include "rules/check.h"
 #include "test_support.h"
 
 #include <algorithm>

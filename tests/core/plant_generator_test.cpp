@@ -1,7 +1,7 @@
 // The generated plants behind the benchmarks are realistic: they check clean and round-trip.
+#include "check/check.h"
 #include "io/drawing_file.h"
 #include "plant_generator.h"
-#include "rules/check.h"
 #include "test_support.h"
 
 #include <gtest/gtest.h>

@@ -1,6 +1,6 @@
 // Each sizing rule with a passing and a failing case, on the small lineup of test_support
 // (25 hp 460 V motor, FLC 34 A by NEC 2023 Table 430.250) and on purpose-built feeders.
-#include "rules/check.h"
+#include "check/check.h"
 #include "sizing/auto_size.h"
 #include "test_support.h"
 

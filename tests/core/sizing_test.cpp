@@ -1,7 +1,7 @@
 // Motor branch sizing: worked examples whose method and numbers come from NEC 2023 Article 430
 // and its tables, and the auto-size proposal.
+#include "check/check.h"
 #include "io/drawing_file.h"
-#include "rules/check.h"
 #include "sizing/auto_size.h"
 #include "sizing/motor_sizing.h"
 #include "test_support.h"

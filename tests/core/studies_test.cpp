@@ -1,11 +1,12 @@
 // Studies against published methods and analytic results: infinite-bus transformer faults,
 // an independent series (point-to-point) calculation, ties, κ, voltage drop, motor starting,
 // and properties on generated radial networks.
+#include "check/check.h"
 #include "curves/path_curves.h"
-#include "rules/check.h"
 #include "sizing/motor_sizing.h"
 #include "studies/admittance.h"
 #include "studies/study.h"
+#include "studies/study_view.h"
 #include "studies/tree_solver.h"
 #include "test_support.h"
 
@@ -373,12 +374,14 @@ TEST(OneAssumption, StudyAndCurvesAssumeTheSameLockedRotorCurrent) {
     const auto flc = motorFlc(*motor, testTables(), false);
     ASSERT_TRUE(flc);
     ASSERT_FALSE(motor->set("fla", 0.85 * flc->amps));
-    Network net(d);
-    Flow flow(net);
-    const StudyResults study = runStudies(net, flow, testTables(), d.settings);
-    const RuleContext ctx{d, net, flow, testTables(), study};
+    // The one check result carries both: the start study and the motor's starting profile.
+    const auto result = runCheck(d, testTables());
+    ASSERT_TRUE(result->study);
+    const StudyResults& study = *result->study;
     ASSERT_TRUE(study.starts.count(motor->id));
-    const auto profile = startProfile(ctx, *motor);
+    const MotorFacts* facts = result->motorFacts(motor->id);
+    ASSERT_NE(facts, nullptr);
+    const auto& profile = facts->start;
     ASSERT_TRUE(profile);
     EXPECT_TRUE(study.starts.at(motor->id).lraAssumed);
     EXPECT_TRUE(profile->lraAssumed);

@@ -1,5 +1,5 @@
 // Topology: nodes from wired terminals, feeding, loops, voltage levels and overload presence.
-#include "rules/check.h"
+#include "check/check.h"
 #include "test_support.h"
 #include "topology/network.h"
 

@@ -1,7 +1,7 @@
 // The voltage.* rules, study.cable.no_data and the starting-curve rules, each seen failing and
 // passing on the small lineup of test_support (13.8 kV source, 75 kVA transformer, one 25 hp
 // motor on 8 AWG copper).
-#include "rules/check.h"
+#include "check/check.h"
 #include "test_support.h"
 
 #include <gtest/gtest.h>

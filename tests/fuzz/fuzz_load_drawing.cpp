@@ -1,8 +1,8 @@
 // libFuzzer target for the .lineward loader: any bytes must give a drawing or a located
 // error, never a crash, and an accepted drawing must round-trip through the writer. Small
 // accepted drawings are also checked: no study or rule may produce a NaN or an infinity.
+#include "check/check.h"
 #include "io/drawing_file.h"
-#include "rules/check.h"
 
 #include <cmath>
 #include <cstdint>

@@ -5,6 +5,7 @@
 #include "main_window.h"
 #include "part_item.h"
 #include "sheet_scene.h"
+#include "studies/study_view.h"
 #include "ui_support.h"
 
 #include <QApplication>
@@ -19,7 +20,7 @@ TEST(CurvesPlot, RendersBandsAndLegendForAMotorPath) {
     MainWindow w(test::sharedTables());
     ASSERT_TRUE(w.openFile(test::samplePath("kestrel-mill-mcc1.lineward"), true).isEmpty());
     const Part* motor = w.document().drawing().partByTag("P-102");
-    const CurveSet set = buildCurveSet(w.document().drawing(), w.document().tables(), motor->id);
+    const CurveSet set = buildCurveSet(*w.document().result().view(), motor->id);
     std::vector<std::string> labels;
     for (const auto& s : set.series)
         labels.push_back(s.label);

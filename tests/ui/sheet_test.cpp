@@ -314,7 +314,7 @@ TEST(Sheet, BucketsAreFramedWithTheirTagAndFollowTheirParts) {
     EXPECT_TRUE(s.w.scene()->selectedItems().isEmpty());
     // The printed one-line shows the frames and tags too.
     const QString svg = test::tempDir("bucket-svg") + "/one-line.svg";
-    ASSERT_TRUE(writeOneLineSvg(svg, d, sharedTables()).isEmpty());
+    ASSERT_TRUE(writeOneLineSvg(svg, runCheck(d, *sharedTables()), sharedTables()).isEmpty());
     EXPECT_NE(test::fileBytes(svg).find(first.tag), std::string::npos);
 }
 

@@ -1,11 +1,11 @@
 // The Submittal as a reviewer receives it: the PDF's text (read back with poppler's pdftotext)
 // holds every tag, every finding's rule and the caution; CSVs equal the study; the SVG is
 // well-formed and names every part; a large one-line tiles with match lines.
+#include "check/check.h"
 #include "io/drawing_file.h"
 #include "plant_generator.h"
+#include "report/report_format.h"
 #include "report/schedules.h"
-#include "rules/check.h"
-#include "rules/report_format.h"
 #include "studies/study.h"
 #include "submittal.h"
 #include "topology/flow.h"
@@ -47,7 +47,8 @@ QString pdfInfo(const QString& pdf) {
 TEST(Submittal, PdfHoldsEveryTagEveryRuleAndTheCaution) {
     const Drawing d = sample("kestrel-mill-mcc1-review.lineward");
     const QString pdf = test::tempDir("submittal") + "/review.pdf";
-    auto r = writeSubmittalPdf(pdf, d, test::sharedTables(), SubmittalOptions{});
+    auto r = writeSubmittalPdf(pdf, runCheck(d, *test::sharedTables()), test::sharedTables(),
+                               SubmittalOptions{});
     ASSERT_TRUE(r.error.isEmpty()) << r.error.toStdString();
     EXPECT_GE(r.pages, 5);
     EXPECT_TRUE(pdfInfo(pdf).contains(QString("Pages: %1").arg(r.pages).simplified()) ||
@@ -81,7 +82,9 @@ TEST(Submittal, PaperSizesAndOrientation) {
         o.paper = *paperByName(paper.name);
         o.curveParts = std::vector<PartId>{}; // keep it short
         const QString pdf = test::tempDir("papers") + "/" + paper.name + ".pdf";
-        ASSERT_TRUE(writeSubmittalPdf(pdf, d, test::sharedTables(), o).error.isEmpty());
+        ASSERT_TRUE(
+            writeSubmittalPdf(pdf, runCheck(d, *test::sharedTables()), test::sharedTables(), o)
+                .error.isEmpty());
         EXPECT_TRUE(pdfInfo(pdf).contains(paper.size)) << paper.name << "\n"
                                                        << pdfInfo(pdf).toStdString();
     }
@@ -91,7 +94,7 @@ TEST(Submittal, PaperSizesAndOrientation) {
 TEST(Submittal, SchedulesCsvEqualsTheStudy) {
     const Drawing d = sample("kestrel-mill-mcc1.lineward");
     const QString dir = test::tempDir("csv");
-    ASSERT_TRUE(writeScheduleCsvs(dir, d, *test::sharedTables()).isEmpty());
+    ASSERT_TRUE(writeScheduleCsvs(dir, *runCheck(d, *test::sharedTables())).isEmpty());
     QFile f(dir + "/cables.csv");
     ASSERT_TRUE(f.open(QIODevice::ReadOnly));
     const QString csv = QString::fromUtf8(f.readAll());
@@ -117,7 +120,8 @@ TEST(Submittal, SchedulesCsvEqualsTheStudy) {
 TEST(Submittal, SvgIsWellFormedAndNamesEveryPart) {
     const Drawing d = sample("kestrel-mill-mcc1.lineward");
     const QString svg = test::tempDir("svg") + "/one-line.svg";
-    ASSERT_TRUE(writeOneLineSvg(svg, d, test::sharedTables()).isEmpty());
+    ASSERT_TRUE(
+        writeOneLineSvg(svg, runCheck(d, *test::sharedTables()), test::sharedTables()).isEmpty());
     QFile f(svg);
     ASSERT_TRUE(f.open(QIODevice::ReadOnly));
     const QByteArray bytes = f.readAll();
@@ -139,14 +143,15 @@ TEST(Submittal, LargeOneLineTilesWithMatchLines) {
     o.paper = QPageSize(QPageSize::Letter);
     o.curveParts = std::vector<PartId>{};
     const QString pdf = test::tempDir("tiles") + "/plant.pdf";
-    auto r = writeSubmittalPdf(pdf, d, test::sharedTables(), o);
+    auto r = writeSubmittalPdf(pdf, runCheck(d, *test::sharedTables()), test::sharedTables(), o);
     ASSERT_TRUE(r.error.isEmpty());
     EXPECT_GT(r.oneLineSheets, 1);
     EXPECT_TRUE(pdfText(pdf).contains("MATCH LINE — SEE SHEET 2"));
     // The sample fits one tabloid sheet: no match lines.
     const QString one = test::tempDir("tiles") + "/sample.pdf";
-    auto s = writeSubmittalPdf(one, sample("kestrel-mill-mcc1.lineward"), test::sharedTables(),
-                               SubmittalOptions{});
+    auto s = writeSubmittalPdf(
+        one, runCheck(sample("kestrel-mill-mcc1.lineward"), *test::sharedTables()),
+        test::sharedTables(), SubmittalOptions{});
     EXPECT_EQ(s.oneLineSheets, 1);
     EXPECT_FALSE(pdfText(one).contains("MATCH LINE"));
 }
@@ -163,7 +168,7 @@ TEST(Submittal, PrintsThroughQPrinterAndListsAcceptedDeviations) {
     printer.setPageOrientation(QPageLayout::Portrait);
     SubmittalOptions o;
     o.curveParts = std::vector<PartId>{d.partByTag("P-101")->id};
-    auto r = paintSubmittal(printer, d, test::sharedTables(), o);
+    auto r = paintSubmittal(printer, runCheck(d, *test::sharedTables()), test::sharedTables(), o);
     ASSERT_TRUE(r.error.isEmpty());
     const QString text = pdfText(pdf);
     EXPECT_TRUE(text.contains("Accepted deviations"));

@@ -1,5 +1,5 @@
 // Report rendering. Text groups findings under the part they are about (their first part).
-#include "rules/report_format.h"
+#include "report/report_format.h"
 
 #include "util/safe_text.h"
 

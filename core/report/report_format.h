@@ -1,8 +1,8 @@
 // Text and JSON renderings of a check report, shared by the command line and the editor.
 #pragma once
 
+#include "check/check.h"
 #include "model/drawing.h"
-#include "rules/check.h"
 
 #include <nlohmann/json.hpp>
 #include <string>

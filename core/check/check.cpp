@@ -1,0 +1,166 @@
+// Builds the check result: network, supply tree, studies, motor facts, then the rule families;
+// marks accepted deviations and orders the findings.
+#include "check/check.h"
+
+#include "curves/path_curves.h"
+#include "rules/drawing_rules.h"
+#include "rules/rule_catalog.h"
+#include "rules/rule_context.h"
+#include "rules/topology_rules.h"
+#include "studies/study.h"
+#include "studies/study_view.h"
+#include "topology/flow.h"
+#include "topology/network.h"
+
+#include <algorithm>
+#include <cmath>
+
+namespace lineward {
+
+bool CheckReport::hasOpenAtLeast(Severity threshold) const {
+    for (int s = static_cast<int>(threshold); s <= 2; ++s)
+        if (openCounts[static_cast<std::size_t>(s)] > 0)
+            return true;
+    return false;
+}
+
+CheckResult::CheckResult() = default;
+CheckResult::~CheckResult() = default;
+
+std::optional<StudyView> CheckResult::view() const {
+    if (!net || !flow || !study)
+        return std::nullopt;
+    return StudyView{*drawing, *net, *flow, *tables, *study, branches};
+}
+
+const MotorFacts* CheckResult::motorFacts(PartId motor) const {
+    for (const auto& m : motors)
+        if (m.branch.motor->id == motor)
+            return &m;
+    return nullptr;
+}
+
+void guardFindingNumbers(std::vector<Finding>& findings) {
+    for (auto& f : findings)
+        for (auto* v : {&f.computed, &f.limit})
+            if (*v && !std::isfinite(**v)) {
+                f.trace.push_back({v == &f.computed ? "computed" : "limit",
+                                   std::isnan(**v) ? "could not be computed (not a number)"
+                                                   : "unbounded (no finite value)"});
+                v->reset();
+            }
+}
+
+namespace {
+
+void markAccepted(const Drawing& d, std::vector<Finding>& findings) {
+    for (auto& f : findings) {
+        for (const auto& a : d.accepted()) {
+            if (a.rule != f.ruleId)
+                continue;
+            // An acceptance names the parts it covers; it applies when it covers the finding's
+            // first part (the part the finding is about).
+            if (!f.parts.empty() &&
+                std::find(a.parts.begin(), a.parts.end(), f.parts.front()) != a.parts.end()) {
+                f.accepted = true;
+                f.acceptedNote = a.note + " (" + a.by + ", " + a.date + ")";
+            }
+        }
+    }
+}
+
+// Runs one stage; an internal error in it becomes a finding instead of ending the check (the
+// editor calls this from a worker thread and a Qt slot, where an exception would end the
+// program and lose the user's work).
+template <typename Fn> void runStage(const char* family, std::vector<Finding>& out, Fn&& fn) {
+    try {
+        fn();
+    } catch (const std::exception& e) {
+        out.push_back(makeFinding("check.incomplete", {},
+                                  std::string("the ") + family +
+                                      " checks stopped on an internal error and their findings "
+                                      "are missing: " +
+                                      e.what()));
+    }
+}
+
+void computeMotorFacts(CheckResult& r, const StudyView& view) {
+    for (const auto& b : r.branches) {
+        MotorFacts m{b, motorFlc(*b.motor, *r.tables, false), startProfile(view, *b.motor),
+                     devicesOnPath(view, b.motor->id)};
+        r.motors.push_back(std::move(m));
+    }
+}
+
+void analyse(CheckResult& r, std::vector<Finding>& out) {
+    const Drawing& drawing = *r.drawing;
+    runStage("drawing", out, [&] { checkDrawingRules(drawing, out); });
+    runStage("topology", out, [&] {
+        auto net = std::make_unique<const Network>(drawing);
+        checkTopology(*net, out);
+        r.net = std::move(net);
+    });
+    if (!r.net)
+        return;
+    runStage("study", out, [&] {
+        r.flow = std::make_unique<const Flow>(*r.net);
+        r.branches = findMotorBranches(drawing, *r.net);
+        r.study = std::make_unique<const StudyResults>(
+            runStudies(*r.net, *r.flow, *r.tables, drawing.settings));
+    });
+    if (!r.study)
+        return;
+    const RuleContext ctx = *r.view();
+    runStage("motor facts", out, [&] { computeMotorFacts(r, ctx); });
+    runStage("motor branch", out, [&] { checkMotorBranches(ctx, out); });
+    runStage("feeder", out, [&] { checkFeeders(ctx, out); });
+    runStage("short-circuit duty", out, [&] { checkDuty(ctx, out); });
+    runStage("voltage", out, [&] { checkVoltage(ctx, out); });
+    runStage("time-current curve", out, [&] { checkCurves(ctx, out); });
+    runStage("study", out, [&] { reportStudyIssues(ctx, out); });
+}
+
+void finishReport(const Drawing& drawing, CheckReport& report) {
+    guardFindingNumbers(report.findings);
+    markAccepted(drawing, report.findings);
+    std::stable_sort(report.findings.begin(), report.findings.end(),
+                     [](const Finding& a, const Finding& b) {
+                         if (a.severity != b.severity)
+                             return a.severity > b.severity;
+                         const auto pa = a.parts.empty() ? 0u : a.parts.front().value;
+                         const auto pb = b.parts.empty() ? 0u : b.parts.front().value;
+                         if (pa != pb)
+                             return pa < pb;
+                         return a.ruleId < b.ruleId;
+                     });
+    for (const auto& f : report.findings) {
+        if (f.accepted)
+            ++report.acceptedCount;
+        else
+            ++report.openCounts[static_cast<std::size_t>(f.severity)];
+    }
+}
+
+} // namespace
+
+std::shared_ptr<const CheckResult> runCheck(std::shared_ptr<const Drawing> drawing,
+                                            const Tables& tables, std::uint64_t generation) {
+    auto r = std::make_shared<CheckResult>();
+    r->drawing = std::move(drawing);
+    r->tables = &tables;
+    r->generation = generation;
+    analyse(*r, r->report.findings);
+    finishReport(*r->drawing, r->report);
+    return r;
+}
+
+std::shared_ptr<const CheckResult> runCheck(const Drawing& drawing, const Tables& tables,
+                                            std::uint64_t generation) {
+    return runCheck(std::make_shared<const Drawing>(drawing), tables, generation);
+}
+
+CheckReport checkDrawing(const Drawing& drawing, const Tables& tables) {
+    return runCheck(drawing, tables)->report;
+}
+
+} // namespace lineward

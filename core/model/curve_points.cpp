@@ -1,0 +1,32 @@
+// Parsing of user curve points ("amps:min_s:max_s; ...").
+#include "model/curve_points.h"
+
+#include <cmath>
+#include <sstream>
+
+namespace lineward {
+
+std::optional<std::string> parseCurvePoints(const std::string& text, std::vector<CurvePoint>& out) {
+    out.clear();
+    std::stringstream all(text);
+    std::string item;
+    while (std::getline(all, item, ';')) {
+        if (item.find_first_not_of(" \t") == std::string::npos)
+            continue;
+        CurvePoint p{};
+        char c1 = 0, c2 = 0;
+        std::stringstream one(item);
+        if (!(one >> p.amps >> c1 >> p.minS >> c2 >> p.maxS) || c1 != ':' || c2 != ':')
+            return "curve point '" + item + "' is not amps:min_s:max_s";
+        if (!(p.amps > 0) || !(p.minS > 0) || !(p.maxS >= p.minS) || !std::isfinite(p.maxS))
+            return "curve point '" + item + "' needs amps > 0 and 0 < min_s ≤ max_s";
+        if (!out.empty() && p.amps <= out.back().amps)
+            return "curve point currents must rise from point to point";
+        out.push_back(p);
+    }
+    if (out.size() == 1)
+        return "a curve needs at least two points";
+    return std::nullopt;
+}
+
+} // namespace lineward
