@@ -378,9 +378,13 @@ private:
             b.tag = optText(j[i], ptr, "tag");
             if (j[i].contains("sccr_ka")) {
                 const double v = number(j[i].at("sccr_ka"), ptr + "/sccr_ka");
-                if (v <= 0 || v > 300)
+                // Listed short-circuit current ratings start at a few kA (common practice); the
+                // editor asks for 1 to 300 kA, and the file holds the same range.
+                if (!(v >= 1 && v <= 300))
                     throw Failure{ptr + "/sccr_ka",
-                                  "sccr_ka " + formatNumber(v) + " kA is outside 0 to 300 kA"};
+                                  "sccr_ka " + formatNumber(v) +
+                                      " kA is outside 1 to 300 kA (a bucket's short-circuit "
+                                      "current rating)"};
                 b.sccrKa = v;
             }
             if (j[i].contains("parts"))

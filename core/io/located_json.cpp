@@ -113,9 +113,14 @@ public:
         if (msg.rfind("parse error", 0) == 0)
             if (auto colon = msg.find(": "); colon != std::string::npos)
                 msg = msg.substr(colon + 2);
+        // The parser quotes the token it stopped at, and a token can be the whole file (a
+        // 60 MB number): keep the message to one readable line.
+        if (msg.size() > kMaxParseMessage)
+            msg = msg.substr(0, kMaxParseMessage) + "… (the rest of the token is not shown)";
         m_err.message = msg;
         return false;
     }
+    static constexpr std::size_t kMaxParseMessage = 160;
 
     bool failed() const { return m_failed; }
 

@@ -217,4 +217,17 @@ TEST(FileFormatBuckets, BucketsAndAcceptedNameExistingParts) {
     EXPECT_EQ(e.line, 9);
     e = mustFail(base + "  \"buckets\": [\n    {\"id\":1,\"sccr_ka\":-3}\n  ]\n}\n");
     EXPECT_NE(e.message.find("sccr_ka -3 kA"), std::string::npos) << e.text();
+    // A denormal rating is no rating: refused with the range, not shown as "SCCR 0 kA".
+    e = mustFail(base + "  \"buckets\": [\n    {\"id\":1,\"sccr_ka\":4.9e-324}\n  ]\n}\n");
+    EXPECT_NE(e.message.find("outside 1 to 300 kA"), std::string::npos) << e.text();
+}
+
+TEST(FileFormatErrors, AHugeBadTokenGivesAShortMessage) {
+    // The parser quotes the token it stopped at; a 100 kB malformed number must still give a
+    // one-line message a dialog can show.
+    const std::string text =
+        std::string(kHeader) + "  \"parts\": [1" + std::string(100000, '9') + "x]\n}\n";
+    const auto e = mustFail(text);
+    EXPECT_LT(e.message.size(), 400u) << e.message.substr(0, 400);
+    EXPECT_EQ(e.line, 4); // the line of "parts", after the three header lines
 }

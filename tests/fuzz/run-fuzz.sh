@@ -14,6 +14,8 @@ cmake --build .build/fuzz --target fuzz_load_drawing
 corpus=.build/fuzz/corpus
 mkdir -p "$corpus" .build/fuzz/artifacts
 cp samples/*.lineward tests/data/hostile/* tests/fuzz/regressions/* "$corpus"/ 2>/dev/null || true
-.build/fuzz/tests/fuzz_load_drawing "$corpus" -dict=tests/fuzz/lineward.dict \
+# An undefined-behaviour report must stop the run and fail CI like a crash does.
+UBSAN_OPTIONS="halt_on_error=1:print_stacktrace=1${UBSAN_OPTIONS:+:$UBSAN_OPTIONS}" \
+  .build/fuzz/tests/fuzz_load_drawing "$corpus" -dict=tests/fuzz/lineward.dict \
   -max_total_time="$seconds" -timeout=10 -rss_limit_mb=2048 -max_len=65536 \
   -artifact_prefix=.build/fuzz/artifacts/ -print_final_stats=1
