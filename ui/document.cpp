@@ -33,6 +33,17 @@ std::shared_ptr<const CheckResult> checkSafely(std::shared_ptr<const Drawing> d,
             makeFinding("check.incomplete", {}, std::string("the check stopped: ") + e.what()));
         r->report.openCounts[static_cast<std::size_t>(Severity::Violation)] = 1;
         return r;
+    } catch (...) {
+        // Not a std::exception: still never let it end a worker thread (std::terminate).
+        spdlog::error("check failed with an unknown exception");
+        auto r = std::make_shared<CheckResult>();
+        r->drawing = std::move(d);
+        r->tables = &tables;
+        r->generation = generation;
+        r->report.findings.push_back(
+            makeFinding("check.incomplete", {}, "the check stopped on an unknown error"));
+        r->report.openCounts[static_cast<std::size_t>(Severity::Violation)] = 1;
+        return r;
     }
 }
 // A drawing's own path is kept absolute: the recovery slot records it, and a recovered drawing

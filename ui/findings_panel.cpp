@@ -1,6 +1,7 @@
 // Findings panel: filters above, the list, the detail pane with the calculation trace.
 #include "findings_panel.h"
 
+#include "guard.h"
 #include "plain_text.h"
 #include "severity_style.h"
 
@@ -69,14 +70,18 @@ FindingsPanel::FindingsPanel(Document& doc, QWidget* parent)
     lay->setContentsMargins(0, 0, 0, 0);
     lay->addLayout(filters);
     lay->addWidget(split);
-    connect(&doc, &Document::reportChanged, this, &FindingsPanel::refresh);
-    connect(m_list, &QTreeWidget::currentItemChanged, this, &FindingsPanel::showDetail);
-    connect(m_severity, &QComboBox::currentIndexChanged, this, &FindingsPanel::refresh);
-    connect(m_rule, &QLineEdit::textChanged, this, &FindingsPanel::refresh);
-    connect(m_apply, &QPushButton::clicked, this, [this] {
-        if (const Finding* f = current())
-            emit applyFixRequested(*f);
-    });
+    // Every slot runs guarded (ui/guard.h): an exception is shown and logged, never fatal.
+    const QString listing = tr("Listing the findings");
+    connect(&doc, &Document::reportChanged, this, guarded(this, listing, [this] { refresh(); }));
+    connect(m_list, &QTreeWidget::currentItemChanged, this,
+            guarded(this, tr("Showing a finding"), [this] { showDetail(); }));
+    connect(m_severity, &QComboBox::currentIndexChanged, this,
+            guarded(this, listing, [this] { refresh(); }));
+    connect(m_rule, &QLineEdit::textChanged, this, guarded(this, listing, [this] { refresh(); }));
+    connect(m_apply, &QPushButton::clicked, this, guarded(this, tr("Apply fix"), [this] {
+                if (const Finding* f = current())
+                    emit applyFixRequested(*f);
+            }));
     refresh();
 }
 

@@ -69,7 +69,7 @@ Inspector::Inspector(Document& doc, QWidget* parent)
     lay->addWidget(m_title);
     lay->addWidget(scroll, 1);
     lay->addWidget(m_message);
-    setMinimumWidth(360);
+    setMinimumWidth(360); // narrower than this the form scrolls sideways
     connect(&doc, &Document::partChanged, this, [this](PartId id) {
         if (m_part && *m_part == id)
             if (const Part* p = current())
@@ -92,7 +92,23 @@ Inspector::~Inspector() {
 }
 
 QSize Inspector::sizeHint() const {
-    return {400, 600};
+    return {neededWidth(), 600};
+}
+
+int Inspector::neededWidth() const {
+    // Wide enough for the longest label of any kind beside an editor that shows its longest
+    // choice ("thermal-magnetic") in full: measured in the font in use, not a fixed pixel count.
+    const QFontMetrics fm(font());
+    int label = 0, choice = fm.horizontalAdvance(QStringLiteral("0000.000 (none)"));
+    for (int k = 0; k < kPartKindCount; ++k)
+        for (const auto& spec : kindInfo(static_cast<PartKind>(k)).fields) {
+            label = std::max(label, fm.horizontalAdvance(peopleName(spec)));
+            for (auto c : spec.choices)
+                choice = std::max(choice, fm.horizontalAdvance(qs(choiceLabel(c))));
+        }
+    const int comboChrome = 48; // arrow, frame and padding of a combo box (common style sizes)
+    const int chrome = 2 * 24 + style()->pixelMetric(QStyle::PM_ScrollBarExtent) + 24;
+    return label + choice + comboChrome + chrome;
 }
 
 const Part* Inspector::current() const {
@@ -184,7 +200,8 @@ QWidget* Inspector::makeTextRow(std::size_t index) {
     edit->setObjectName("field_" + qs(row.spec->key));
     edit->setToolTip(qs(row.spec->help));
     row.edit = edit;
-    connect(edit, &QLineEdit::textEdited, this, [this, index] { onTextEdited(index); });
+    connect(edit, &QLineEdit::textEdited, this,
+            guarded(this, tr("Checking a rating"), [this, index] { onTextEdited(index); }));
     connect(edit, &QLineEdit::editingFinished, this,
             guarded(this, tr("Changing a rating"), [this, index] { onTextCommitted(index); }));
     return edit;
@@ -235,19 +252,21 @@ QWidget* Inspector::makePairRow(std::size_t index) {
     auto* edit = new QLineEdit;
     edit->setObjectName("field_" + name);
     row.edit = edit;
-    connect(box, &QComboBox::activated, this, [this, index](int i) {
-        Row& r = m_rows[index];
-        if (r.pairChoice == i)
-            return;
-        // Switching the quantity asks for its value; the model changes when it is entered,
-        // in one edit that also clears the other.
-        r.pairChoice = i;
-        r.edit->clear();
-        r.edit->setModified(true);
-        r.edit->setPlaceholderText(tr("type the %1").arg(r.pairBox->itemText(i)));
-        r.edit->setFocus(Qt::OtherFocusReason);
-    });
-    connect(edit, &QLineEdit::textEdited, this, [this, index] { onTextEdited(index); });
+    connect(box, &QComboBox::activated, this,
+            guarded(this, tr("Choosing a rating"), [this, index](int i) {
+                Row& r = m_rows[index];
+                if (r.pairChoice == i)
+                    return;
+                // Switching the quantity asks for its value; the model changes when it is entered,
+                // in one edit that also clears the other.
+                r.pairChoice = i;
+                r.edit->clear();
+                r.edit->setModified(true);
+                r.edit->setPlaceholderText(tr("type the %1").arg(r.pairBox->itemText(i)));
+                r.edit->setFocus(Qt::OtherFocusReason);
+            }));
+    connect(edit, &QLineEdit::textEdited, this,
+            guarded(this, tr("Checking a rating"), [this, index] { onTextEdited(index); }));
     connect(edit, &QLineEdit::editingFinished, this,
             guarded(this, tr("Changing a rating"), [this, index] { onTextCommitted(index); }));
     return edit;

@@ -26,6 +26,8 @@ public:
     /// Shows this part (or nothing).
     void showPart(std::optional<PartId> id);
     QSize sizeHint() const override;
+    /// The width at which every label and choice of every kind reads in full.
+    int neededWidth() const;
 
 signals:
     /// An accepted edit: the part as it should become.

@@ -68,7 +68,8 @@ MainWindow::MainWindow(std::shared_ptr<const Tables> tables, QWidget* parent)
     tabifyDockWidget(s, c);
     f->raise();
     resizeDocks({f}, {240}, Qt::Vertical);
-    resizeDocks({inspectorDock}, {400}, Qt::Horizontal); // wide enough to read every value
+    // Wide enough to read every label and value of every kind's form.
+    resizeDocks({inspectorDock}, {m_inspector->neededWidth()}, Qt::Horizontal);
     m_counts->setObjectName("severityCounts");
     statusBar()->addPermanentWidget(m_counts);
 
@@ -267,7 +268,12 @@ void MainWindow::selectionChanged() {
 
 void MainWindow::refreshStatus() {
     const auto& c = m_doc.report().openCounts;
-    m_counts->setText(tr("%1 violations · %2 cautions · %3 notes").arg(c[2]).arg(c[1]).arg(c[0]));
+    auto count = [](int n, const QString& one, const QString& many) {
+        return QString::number(n) + " " + (n == 1 ? one : many);
+    };
+    m_counts->setText(count(c[2], tr("violation"), tr("violations")) + " · " +
+                      count(c[1], tr("caution"), tr("cautions")) + " · " +
+                      count(c[0], tr("note"), tr("notes")));
 }
 
 void MainWindow::refreshTitle() {
@@ -364,7 +370,12 @@ void MainWindow::addRecent(const QString& path) {
 void MainWindow::rebuildRecentMenu() {
     if (!m_recentMenu)
         return;
-    m_recentMenu->clear();
+    // Opening a recent file rebuilds this menu from inside that action's own triggered signal:
+    // the old actions are taken out and deleted later, never while one of them is running.
+    for (QAction* old : m_recentMenu->actions()) {
+        m_recentMenu->removeAction(old);
+        old->deleteLater();
+    }
     for (const QString& path : QSettings().value("recentFiles").toStringList()) {
         auto* a = m_recentMenu->addAction(path);
         connect(a, &QAction::triggered, this, guarded(this, tr("Open"), [this, path] {

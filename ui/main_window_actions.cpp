@@ -50,7 +50,7 @@ void MainWindow::buildActions() {
     buildEditMenu();
     buildViewMenu();
     auto* help = menuBar()->addMenu(tr("&Help"));
-    help->addAction(tr("&About Lineward"), this, &MainWindow::showAbout);
+    menuAction(help, tr("&About Lineward"), QKeySequence(), this, [this] { showAbout(); });
 }
 
 void MainWindow::buildFileMenu() {
@@ -140,16 +140,32 @@ void MainWindow::buildFileMenu() {
 
 void MainWindow::buildEditMenu() {
     auto* edit = menuBar()->addMenu(tr("&Edit"));
-    auto* undo = m_doc.undoStack().createUndoAction(this, tr("&Undo"));
-    undo->setShortcut(QKeySequence::Undo);
-    auto* redo = m_doc.undoStack().createRedoAction(this, tr("&Redo"));
+    // Undo and Redo run guarded like every other action (a command that throws while undoing
+    // is reported, not fatal); their text and enabled state follow the undo stack.
+    QUndoStack& stack = m_doc.undoStack();
+    auto* undo = menuAction(edit, tr("&Undo"), QKeySequence::Undo, this,
+                            [this] { m_doc.undoStack().undo(); });
+    auto* redo =
+        menuAction(edit, tr("&Redo"), QKeySequence(), this, [this] { m_doc.undoStack().redo(); });
     // Every binding the platform has for Redo (Ctrl+Shift+Z and Ctrl+Y on Linux).
     auto redoKeys = QKeySequence::keyBindings(QKeySequence::Redo);
     if (!redoKeys.contains(QKeySequence(tr("Ctrl+Y"))))
         redoKeys << QKeySequence(tr("Ctrl+Y"));
     redo->setShortcuts(redoKeys);
-    edit->addAction(undo);
-    edit->addAction(redo);
+    auto follow = [](QAction* a, const QString& verb, bool can, const QString& what) {
+        a->setEnabled(can);
+        a->setText(what.isEmpty() ? verb : verb + " " + what);
+    };
+    follow(undo, tr("&Undo"), stack.canUndo(), stack.undoText());
+    follow(redo, tr("&Redo"), stack.canRedo(), stack.redoText());
+    connect(&stack, &QUndoStack::indexChanged, undo, [=, &stack] {
+        follow(undo, tr("&Undo"), stack.canUndo(), stack.undoText());
+        follow(redo, tr("&Redo"), stack.canRedo(), stack.redoText());
+    });
+    connect(&stack, &QUndoStack::cleanChanged, undo, [=, &stack] {
+        follow(undo, tr("&Undo"), stack.canUndo(), stack.undoText());
+        follow(redo, tr("&Redo"), stack.canRedo(), stack.redoText());
+    });
     edit->addSeparator();
     menuAction(edit, tr("Cu&t"), QKeySequence::Cut, this, [this] {
         copySelection();

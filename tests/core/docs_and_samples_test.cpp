@@ -126,3 +126,17 @@ TEST(Docs, EveryRuleHasATestThatNamesIt) {
         EXPECT_NE(tests.find("\"" + std::string(r.id) + "\""), std::string::npos)
             << "no test names rule " << r.id;
 }
+
+TEST(Docs, UserGuideStatesTheReviewSampleCounts) {
+    // The guide quotes the status bar for the review sample; it must say what a user sees.
+    const std::string guide = readFile(sourcePath("docs/user-guide.md"));
+    const std::regex counts(R"((\d+) violations · (\d+) cautions · (\d+) notes?)");
+    std::smatch m;
+    ASSERT_TRUE(std::regex_search(guide, m, counts)) << "the guide quotes no counts";
+    auto r = io::loadDrawing(sourcePath("samples/kestrel-mill-mcc1-review.lineward"));
+    ASSERT_TRUE(r);
+    const auto report = checkDrawing(*r.drawing, testTables());
+    EXPECT_EQ(std::stoi(m[1]), report.openCounts[2]);
+    EXPECT_EQ(std::stoi(m[2]), report.openCounts[1]);
+    EXPECT_EQ(std::stoi(m[3]), report.openCounts[0]);
+}

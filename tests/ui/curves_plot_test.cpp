@@ -7,6 +7,7 @@
 #include "sheet_scene.h"
 #include "studies/study_view.h"
 #include "ui_support.h"
+#include "user.h"
 
 #include <QApplication>
 #include <QImage>
@@ -55,9 +56,9 @@ TEST(CurvesPlot, RendersBandsAndLegendForAMotorPath) {
 TEST(CurvesPlot, PanelFollowsTheSelection) {
     MainWindow w(test::sharedTables());
     ASSERT_TRUE(w.openFile(test::samplePath("kestrel-mill-mcc1.lineward"), true).isEmpty());
+    test::User user(w);
     const Part* cb = w.document().drawing().partByTag("CB-107");
-    w.scene()->clearSelection();
-    w.scene()->itemFor(cb->id)->setSelected(true);
+    user.clickPart(cb->id); // a click on the Sheet, as a person selects it
     ASSERT_FALSE(w.curves()->curveSet().series.empty());
     EXPECT_NE(w.curves()->curveSet().title.find("CB-107"), std::string::npos);
 }

@@ -64,7 +64,11 @@ TEST(MainWindow, BrokenFileGivesLocatedMessageAndKeepsDrawing) {
     MainWindow w(sharedTables());
     ASSERT_TRUE(w.openFile(sample("kestrel-mill-mcc1.lineward"), true).isEmpty());
     const auto parts = w.document().drawing().parts().size();
-    const QString why = w.openFile(QString(LINEWARD_SOURCE_DIR) + "/README.md", true);
+    test::User user(w);
+    QString why;
+    user.answerFileDialogWith(QString(LINEWARD_SOURCE_DIR) + "/README.md");
+    test::User::answerMessageBox(QMessageBox::Ok, &why);
+    user.press(Qt::Key_O, Qt::ControlModifier); // File → Open, README.md typed in the dialog
     EXPECT_TRUE(why.contains("README.md:1:")) << why.toStdString();
     EXPECT_EQ(w.document().drawing().parts().size(), parts);
 }

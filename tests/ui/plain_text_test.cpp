@@ -6,6 +6,7 @@
 #include "part_item.h"
 #include "sheet_scene.h"
 #include "ui_support.h"
+#include "user.h"
 
 #include <QApplication>
 #include <QFile>
@@ -67,7 +68,7 @@ TEST(PlainText, CannotOpenBoxShowsMarkupAndLoadsNothing) {
     OpenWatch watch(probe);
     ASSERT_TRUE(watch.armed());
     MainWindow w(test::sharedTables());
-    w.show();
+    test::User user(w);
     Qt::TextFormat format = Qt::RichText;
     QString shown;
     bool sawBox = false;
@@ -86,11 +87,12 @@ TEST(PlainText, CannotOpenBoxShowsMarkupAndLoadsNothing) {
         QTest::keyClick(box, Qt::Key_Escape);
     });
     poll.start();
-    const QString why = w.openFile(bad); // not quiet: the box the user sees
+    user.answerFileDialogWith(bad);
+    user.press(Qt::Key_O, Qt::ControlModifier); // File → Open, the file typed in the dialog
     ASSERT_TRUE(sawBox);
     EXPECT_EQ(format, Qt::PlainText);
     EXPECT_TRUE(shown.contains("<img src=")) << shown.toStdString();
-    EXPECT_TRUE(why.contains("bad.lineward:1:"));
+    EXPECT_TRUE(shown.contains("bad.lineward:1:")) << shown.toStdString();
     EXPECT_FALSE(watch.touched()) << "the <img> in the message was loaded";
 }
 
@@ -117,7 +119,9 @@ TEST(PlainText, TooltipsAndFindingsShowATagLiterally) {
     for (int i = 0; i < list->topLevelItemCount(); ++i)
         EXPECT_FALSE(list->topLevelItem(i)->toolTip(3).contains("<img"));
     // Select its finding with the keyboard; the detail pane shows it and loads nothing.
-    list->setFocus();
+    // A click on the list's first row gives it the keyboard, as a person does.
+    QTest::mouseClick(list->viewport(), Qt::LeftButton, {},
+                      list->visualItemRect(list->topLevelItem(0)).center());
     for (int i = 0; i < list->topLevelItemCount(); ++i) {
         QTest::keyClick(list, i == 0 ? Qt::Key_Home : Qt::Key_Down);
         if (list->currentItem() && list->currentItem()->text(2).contains("P-105"))

@@ -29,6 +29,11 @@ namespace lineward::ui::test {
 User::User(MainWindow& w) : m_w(w) {
     m_w.resize(1400, 900);
     m_w.show();
+    // On a real X server with no window manager nothing activates a new window: wait until it
+    // is mapped, then ask for the focus ourselves (the xcb platform sets the input focus).
+    EXPECT_TRUE(QTest::qWaitForWindowExposed(&m_w));
+    m_w.raise();
+    m_w.activateWindow();
     QApplication::setActiveWindow(&m_w);
     EXPECT_TRUE(QTest::qWaitForWindowActive(&m_w));
     settle();
@@ -186,10 +191,14 @@ void User::choose(const QString& name, const QString& label) {
         return;
     const int index = box->findText(label);
     ASSERT_GE(index, 0) << label.toStdString() << " is not offered in " << name.toStdString();
-    // Focus the closed box and type the entry's words, as a person does with the keyboard.
-    // (Clicking would open the list; offscreen its popup cannot grab the keyboard, so the
-    // box takes focus as by Tab and the words are typed into it.)
-    box->setFocus(Qt::TabFocusReason);
+    // Click the box (it takes the focus and opens its list), close the list with Escape and
+    // type the entry's words into the closed box, as a person does with the keyboard.
+    QTest::mouseClick(box, Qt::LeftButton, {}, box->rect().center());
+    QApplication::processEvents(); // the list opens from the event loop
+    if (QWidget* popup = QApplication::activePopupWidget())
+        QTest::keyClick(popup, Qt::Key_Escape);
+    EXPECT_EQ(QApplication::activePopupWidget(), nullptr)
+        << "the list of " << name.toStdString() << " stayed open";
     QTest::keyClicks(box, label);
     EXPECT_EQ(box->currentIndex(), index) << label.toStdString();
     settle();
