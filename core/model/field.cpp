@@ -9,8 +9,13 @@
 namespace lineward {
 
 std::string formatNumber(double v) {
-    char buf[64];
-    auto res = std::to_chars(buf, buf + sizeof buf, v);
+    // Plain digits where a person reads them as such (300000, not 3e+05); exponent form only
+    // for the very large and very small, where plain digits would run to hundreds.
+    char buf[400];
+    const double a = std::fabs(v);
+    const bool plain = a == 0 || (a >= 1e-6 && a < 1e15);
+    auto res = plain ? std::to_chars(buf, buf + sizeof buf, v, std::chars_format::fixed)
+                     : std::to_chars(buf, buf + sizeof buf, v);
     return std::string(buf, res.ptr);
 }
 

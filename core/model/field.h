@@ -49,7 +49,8 @@ std::string_view choiceLabel(std::string_view choice);
 std::optional<std::string> validateField(const FieldSpec& spec, const FieldValue& value,
                                          FieldNaming naming = FieldNaming::Key);
 
-/// Shortest text that reads back to the same number (used in messages and the file).
+/// Shortest text that reads back to the same number, in plain digits from 1e-6 to 1e15
+/// (messages and the Inspector; the file writer formats its own numbers).
 std::string formatNumber(double v);
 
 /// The value as people read it, with its unit.
