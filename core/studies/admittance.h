@@ -12,8 +12,9 @@ namespace lineward {
 /// Y = branches + chosen shunts to ground, LU-factorised.
 class Admittance {
 public:
-    /// Test seam: while true, every factorisation reports failure (a singular matrix cannot be
-    /// built from physical ratings, but the path that handles one must be tested).
+    /// Test seam: while true, every factorisation reports failure — this LU and the loop
+    /// solver's correction of a meshed network (a singular matrix cannot be built from
+    /// physical ratings, but the path that handles one must be tested).
     static inline bool failForTests = false;
 
     /// `withMotors` adds the motors' fault contribution shunts (fault study); the load flow

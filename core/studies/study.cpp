@@ -1,11 +1,11 @@
 // Fault study (Thevenin impedance from Z = Y⁻¹ at each bus), load flow (fixed-point on the
-// same factorised Y) and motor starting (superposition on the load-flow state).
+// same solver of Y) and motor starting (superposition on the load-flow state).
 #include "studies/study.h"
 
 #include "sizing/motor_sizing.h"
 #include "studies/admittance.h"
 #include "studies/finite_guard.h"
-#include "studies/tree_solver.h"
+#include "studies/loop_solver.h"
 
 #include <cmath>
 
@@ -30,27 +30,44 @@ const FaultAtBus* StudyResults::faultAtNode(NodeIndex n) const {
 
 namespace {
 
-void faultStudy(StudyResults& r) {
-    r.fault.assign(static_cast<std::size_t>(r.model.busCount()), {});
-    // Radial networks: linear-time tree recursion; meshed ones: one sparse LU solve per bus.
-    const auto tree = TreeSolver::build(r.model, true);
-    std::unique_ptr<Admittance> y;
-    if (!tree) {
-        y = std::make_unique<Admittance>(r.model, true);
-        if (!y->ok()) {
-            r.fault.clear(); // no fault current anywhere: no duty check may pass on a zero
-            r.faultSolved = false;
-            r.issues.push_back(
-                {StudyIssueKind::FaultSolveFailed,
-                 {},
-                 "the short-circuit study could not be solved: the network's admittance matrix "
-                 "did not factorise (singular); no fault current is known, so the interrupting, "
-                 "bracing, SCCR and withstand checks were not performed"});
-            return;
+// Z entries from the loop solver (the tree solver corrected for each loop), or from the sparse
+// LU when a tree carries too many loops for the dense correction.
+struct ZSource {
+    std::unique_ptr<LoopSolver> loops;
+    std::unique_ptr<Admittance> lu;
+    bool failed = false; ///< nothing factorised: the study cannot be solved
+
+    ZSource(const NetworkModel& m, bool withMotors) {
+        auto built = LoopSolver::build(m, withMotors);
+        if (built.outcome == LoopSolver::Outcome::Solved) {
+            loops = std::move(built.solver);
+        } else if (built.outcome == LoopSolver::Outcome::Singular) {
+            failed = true;
+        } else {
+            lu = std::make_unique<Admittance>(m, withMotors);
+            failed = !lu->ok();
         }
     }
+};
+
+void faultStudy(StudyResults& r) {
+    r.fault.assign(static_cast<std::size_t>(r.model.busCount()), {});
+    const ZSource z(r.model, true);
+    if (z.failed) {
+        r.fault.clear(); // no fault current anywhere: no duty check may pass on a zero
+        r.faultSolved = false;
+        r.issues.push_back(
+            {StudyIssueKind::FaultSolveFailed,
+             {},
+             "the short-circuit study could not be solved: the network's admittance matrix "
+             "did not factorise (singular); no fault current is known, so the interrupting, "
+             "bracing, SCCR and withstand checks were not performed"});
+        return;
+    }
     for (int k = 0; k < r.model.busCount(); ++k) {
-        const Complex zth = tree ? tree->zth(k) : y->zColumn(k)[k];
+        // The LU path costs one sparse solve per bus (quadratic); only heavily meshed
+        // networks (more than LoopSolver::kMaxChordsPerTree loops in one tree) take it.
+        const Complex zth = z.loops ? z.loops->zth(k) : z.lu->zColumn(k)[k];
         FaultAtBus f;
         f.ikKa = 1.0 / std::abs(zth) * r.model.baseAmps(k) / 1000.0;
         f.xOverR = zth.real() > 0 ? zth.imag() / zth.real() : 1e6;
@@ -67,15 +84,14 @@ Eigen::VectorXcd loadCurrents(const NetworkModel& m, const Eigen::VectorXcd& v) 
     return i;
 }
 
-// Solves Y v = i with the tree recursion when radial, else the sparse LU.
+// Solves Y v = i with the loop solver (linear), else the sparse LU.
 struct LoadFlowSolver {
-    const std::optional<TreeSolver>& tree;
-    const Admittance* lu;
+    const ZSource& z;
     Eigen::VectorXcd solve(const Eigen::VectorXcd& b) const {
-        if (!tree)
-            return lu->solve(b);
+        if (!z.loops)
+            return z.lu->solve(b);
         const std::vector<Complex> in(b.data(), b.data() + b.size());
-        const auto out = tree->solve(in);
+        const auto out = z.loops->solve(in);
         return Eigen::Map<const Eigen::VectorXcd>(out.data(),
                                                   static_cast<Eigen::Index>(out.size()));
     }
@@ -163,9 +179,8 @@ void partCurrents(StudyResults& r, const Network& net, const Flow& flow) {
     }
 }
 
-void motorStarting(StudyResults& r, const Network& net, const Flow& flow,
-                   const std::optional<TreeSolver>& tree, const Admittance* lu, const Tables& t,
-                   const Settings& s) {
+void motorStarting(StudyResults& r, const Network& net, const Flow& flow, const ZSource& z,
+                   const Tables& t, const Settings& s) {
     const Drawing& d = net.drawing();
     for (const auto& l : r.model.loads) {
         const Part& p = *d.part(l.part);
@@ -185,17 +200,14 @@ void motorStarting(StudyResults& r, const Network& net, const Flow& flow,
         auto chain = net.branchChain(p.id);
         const NodeIndex busNode = chain.empty() ? net.nodeOf(p.id, 0) : flow.lineNode(chain.back());
         ms.bus = r.busOf(busNode);
-        // Driving-point and transfer impedances: from the tree when radial, else a Z column.
+        // Driving-point and transfer impedances: from the loop solver, else a Z column.
         std::optional<Complex> zth, zbm;
-        if (tree) {
-            zth = tree->zth(m);
+        if (z.loops) {
+            zth = z.loops->zth(m);
             if (ms.bus >= 0)
-                zbm = tree->transfer(m, ms.bus);
-        }
-        if (!zth || (ms.bus >= 0 && !zbm)) {
-            if (!lu)
-                continue;
-            const Eigen::VectorXcd zcol = lu->zColumn(m);
+                zbm = z.loops->transfer(m, ms.bus);
+        } else {
+            const Eigen::VectorXcd zcol = z.lu->zColumn(m);
             zth = zcol[m];
             if (ms.bus >= 0)
                 zbm = zcol[ms.bus];
@@ -223,23 +235,19 @@ StudyResults runStudies(const Network& net, const Flow& flow, const Tables& t, c
     if (r.model.busCount() == 0)
         return r;
     faultStudy(r);
-    // The load flow and starting use Y without motor shunts; radial networks never factorise.
-    const auto tree = TreeSolver::build(r.model, false);
-    std::unique_ptr<Admittance> lu;
-    if (!tree) {
-        lu = std::make_unique<Admittance>(r.model, false);
-        if (!lu->ok()) {
-            r.issues.push_back(
-                {StudyIssueKind::LoadFlowSolveFailed,
-                 {},
-                 "the load flow could not be solved: the network's admittance matrix did not "
-                 "factorise (singular); the voltage-drop and motor-starting checks were not "
-                 "performed"});
-            guardStudyResults(r, net);
-            return r;
-        }
+    // The load flow and starting use Y without motor shunts.
+    const ZSource z(r.model, false);
+    if (z.failed) {
+        r.issues.push_back(
+            {StudyIssueKind::LoadFlowSolveFailed,
+             {},
+             "the load flow could not be solved: the network's admittance matrix did not "
+             "factorise (singular); the voltage-drop and motor-starting checks were not "
+             "performed"});
+        guardStudyResults(r, net);
+        return r;
     }
-    loadFlow(r, LoadFlowSolver{tree, lu.get()});
+    loadFlow(r, LoadFlowSolver{z});
     if (!r.loadFlowConverged) {
         r.issues.push_back({StudyIssueKind::LoadFlowDiverged,
                             {},
@@ -249,7 +257,7 @@ StudyResults runStudies(const Network& net, const Flow& flow, const Tables& t, c
     }
     originVoltages(r, net, flow);
     partCurrents(r, net, flow);
-    motorStarting(r, net, flow, tree, lu.get(), t, s);
+    motorStarting(r, net, flow, z, t, s);
     guardStudyResults(r, net);
     return r;
 }

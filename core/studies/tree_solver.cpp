@@ -12,125 +12,175 @@ namespace {
 Complex through(Complex z, Complex y) {
     return y / (1.0 + z * y);
 }
+std::size_t at(int i) {
+    return static_cast<std::size_t>(i);
+}
 } // namespace
 
-std::optional<TreeSolver> TreeSolver::build(const NetworkModel& m, bool withMotors) {
-    const int n = m.busCount();
-    std::vector<std::vector<std::pair<int, Complex>>> adj(static_cast<std::size_t>(n));
-    for (const auto& b : m.branches) {
-        if (b.from == b.to)
-            return std::nullopt;
-        adj[static_cast<std::size_t>(b.from)].push_back({b.to, b.z});
-        adj[static_cast<std::size_t>(b.to)].push_back({b.from, b.z});
-    }
-    TreeSolver t;
-    t.m_parent.assign(static_cast<std::size_t>(n), -2);
-    t.m_zParent.assign(static_cast<std::size_t>(n), 0);
-    std::vector<Complex> shunt(static_cast<std::size_t>(n), Complex(1e-12, 0));
+std::vector<Complex> TreeSolver::shunts(const NetworkModel& m, bool withMotors) {
+    std::vector<Complex> shunt(at(m.busCount()), Complex(1e-12, 0));
     for (const auto& s : m.sources)
-        shunt[static_cast<std::size_t>(s.bus)] += 1.0 / s.z;
+        shunt[at(s.bus)] += 1.0 / s.z;
     if (withMotors)
         for (const auto& s : m.motors)
-            shunt[static_cast<std::size_t>(s.bus)] += 1.0 / s.z;
-    std::vector<int> order;
-    order.reserve(static_cast<std::size_t>(n));
-    std::size_t edgesSeen = 0;
+            shunt[at(s.bus)] += 1.0 / s.z;
+    return shunt;
+}
+
+std::optional<TreeSolver> TreeSolver::build(const NetworkModel& m, bool withMotors) {
+    return build(m.branches, shunts(m, withMotors), m.sources);
+}
+
+std::optional<TreeSolver> TreeSolver::build(const std::vector<ModelBranch>& branches,
+                                            std::vector<Complex> shunt,
+                                            const std::vector<ModelShunt>& sources) {
+    const int n = static_cast<int>(shunt.size());
+    std::vector<std::vector<std::pair<int, int>>> adj(at(n)); // (neighbour, branch index)
+    for (std::size_t i = 0; i < branches.size(); ++i) {
+        const auto& b = branches[i];
+        if (b.from == b.to)
+            return std::nullopt;
+        adj[at(b.from)].push_back({b.to, static_cast<int>(i)});
+        adj[at(b.to)].push_back({b.from, static_cast<int>(i)});
+    }
+    TreeSolver t;
+    t.m_parent.assign(at(n), -2);
+    t.m_zParent.assign(at(n), 0);
+    t.m_tree.assign(at(n), -1);
+    t.m_depth.assign(at(n), 0);
+    std::vector<int> via(at(n), -1); // branch to the parent
+    t.m_order.reserve(at(n));
     // Root each tree at a source so "up" means toward the supply.
     std::vector<int> roots;
-    for (const auto& s : m.sources)
+    for (const auto& s : sources)
         roots.push_back(s.bus);
     for (int i = 0; i < n; ++i)
         roots.push_back(i);
     for (int root : roots) {
-        if (t.m_parent[static_cast<std::size_t>(root)] != -2)
+        if (t.m_parent[at(root)] != -2)
             continue;
-        t.m_parent[static_cast<std::size_t>(root)] = -1;
+        t.m_parent[at(root)] = -1;
+        t.m_treeStart.push_back(static_cast<int>(t.m_order.size()));
+        const int tree = static_cast<int>(t.m_treeStart.size()) - 1;
         std::deque<int> queue{root};
         while (!queue.empty()) {
             const int v = queue.front();
             queue.pop_front();
-            order.push_back(v);
-            for (auto [w, z] : adj[static_cast<std::size_t>(v)]) {
-                if (w == t.m_parent[static_cast<std::size_t>(v)] &&
-                    z == t.m_zParent[static_cast<std::size_t>(v)])
-                    continue; // the branch we came by (parallel branches are caught below)
-                if (t.m_parent[static_cast<std::size_t>(w)] != -2)
-                    return std::nullopt; // reached twice: a loop
-                t.m_parent[static_cast<std::size_t>(w)] = v;
-                t.m_zParent[static_cast<std::size_t>(w)] = z;
-                ++edgesSeen;
+            t.m_tree[at(v)] = tree;
+            t.m_order.push_back(v);
+            for (auto [w, bi] : adj[at(v)]) {
+                if (bi == via[at(v)])
+                    continue; // the branch we came by
+                if (t.m_parent[at(w)] != -2)
+                    return std::nullopt; // reached twice: a loop (or parallel branches)
+                t.m_parent[at(w)] = v;
+                t.m_zParent[at(w)] = branches[at(bi)].z;
+                t.m_depth[at(w)] = t.m_depth[at(v)] + 1;
+                via[at(w)] = bi;
                 queue.push_back(w);
             }
         }
     }
-    if (edgesSeen != m.branches.size())
-        return std::nullopt;
-    t.m_order = order;
-    t.m_down = shunt;
-    for (auto it = order.rbegin(); it != order.rend(); ++it) {
-        const int p = t.m_parent[static_cast<std::size_t>(*it)];
+    t.m_treeStart.push_back(n);
+    t.m_pos.assign(at(n), 0);
+    for (int i = 0; i < n; ++i)
+        t.m_pos[at(t.m_order[at(i)])] = i;
+    t.m_down = std::move(shunt);
+    t.sweep();
+    return t;
+}
+
+void TreeSolver::sweep() {
+    for (auto it = m_order.rbegin(); it != m_order.rend(); ++it) {
+        const int p = m_parent[at(*it)];
         if (p >= 0)
-            t.m_down[static_cast<std::size_t>(p)] +=
-                through(t.m_zParent[static_cast<std::size_t>(*it)],
-                        t.m_down[static_cast<std::size_t>(*it)]);
+            m_down[at(p)] += through(m_zParent[at(*it)], m_down[at(*it)]);
     }
-    t.m_up.assign(static_cast<std::size_t>(n), 0);
-    for (int v : order) {
-        const int p = t.m_parent[static_cast<std::size_t>(v)];
+    m_up.assign(m_order.size(), 0);
+    for (int v : m_order) {
+        const int p = m_parent[at(v)];
         if (p < 0)
             continue;
-        const Complex z = t.m_zParent[static_cast<std::size_t>(v)];
-        const Complex rest = t.m_down[static_cast<std::size_t>(p)] +
-                             t.m_up[static_cast<std::size_t>(p)] -
-                             through(z, t.m_down[static_cast<std::size_t>(v)]);
-        t.m_up[static_cast<std::size_t>(v)] = through(z, rest);
+        const Complex z = m_zParent[at(v)];
+        const Complex rest = m_down[at(p)] + m_up[at(p)] - through(z, m_down[at(v)]);
+        m_up[at(v)] = through(z, rest);
     }
-    return t;
+}
+
+Complex TreeSolver::upRatio(int v) const {
+    // Voltage divider from v up to p: everything at p except v's branch, against that branch.
+    const int p = m_parent[at(v)];
+    const Complex zv = m_zParent[at(v)];
+    const Complex rest = m_down[at(p)] + m_up[at(p)] - through(zv, m_down[at(v)]);
+    return 1.0 / (1.0 + zv * rest);
 }
 
 std::optional<Complex> TreeSolver::transfer(int from, int to) const {
     Complex z = zth(from);
-    int v = from;
-    while (v != to) {
-        const int p = m_parent[static_cast<std::size_t>(v)];
-        if (p < 0)
+    for (int v = from; v != to; v = m_parent[at(v)]) {
+        if (m_parent[at(v)] < 0)
             return std::nullopt;
-        // Voltage divider from v up to p: everything at p except v's branch, against that branch.
-        const Complex zv = m_zParent[static_cast<std::size_t>(v)];
-        const Complex rest = m_down[static_cast<std::size_t>(p)] +
-                             m_up[static_cast<std::size_t>(p)] -
-                             through(zv, m_down[static_cast<std::size_t>(v)]);
-        z *= 1.0 / (1.0 + zv * rest);
-        v = p;
+        z *= upRatio(v);
     }
     return z;
 }
 
-} // namespace lineward
+Complex TreeSolver::transferAny(int from, int to) const {
+    if (treeOf(from) != treeOf(to))
+        return 0;
+    // Up from `from`: the divider of each branch; down to `to`, with no injection below, each
+    // branch divides V_child = V_parent / (1 + z·Y_down[child]).
+    Complex up = zth(from), down = 1.0;
+    int a = from, b = to;
+    while (a != b) {
+        if (m_depth[at(a)] >= m_depth[at(b)]) {
+            up *= upRatio(a);
+            a = m_parent[at(a)];
+        } else {
+            down /= 1.0 + m_zParent[at(b)] * m_down[at(b)];
+            b = m_parent[at(b)];
+        }
+    }
+    return up * down;
+}
 
-namespace lineward {
+std::span<const int> TreeSolver::treeBuses(int tree) const {
+    const auto first = at(m_treeStart[at(tree)]);
+    const auto last = at(m_treeStart[at(tree) + 1]);
+    return std::span<const int>(m_order).subspan(first, last - first);
+}
 
-std::vector<Complex> TreeSolver::solve(const std::vector<Complex>& inj) const {
-    const std::size_t n = m_parent.size();
+int TreeSolver::indexInTree(int bus) const {
+    return m_pos[at(bus)] - m_treeStart[at(treeOf(bus))];
+}
+
+void TreeSolver::solveTree(int tree, std::vector<Complex>& current,
+                           std::vector<Complex>& volt) const {
+    const auto buses = treeBuses(tree);
     // Norton current of each subtree as seen at its top: I' = I / (1 + z·Y) through a branch.
-    std::vector<Complex> current(inj.begin(), inj.end());
-    current.resize(n, 0);
-    for (auto it = m_order.rbegin(); it != m_order.rend(); ++it) {
-        const auto v = static_cast<std::size_t>(*it);
+    for (auto it = buses.rbegin(); it != buses.rend(); ++it) {
+        const auto v = at(*it);
         const int p = m_parent[v];
         if (p >= 0)
-            current[static_cast<std::size_t>(p)] += current[v] / (1.0 + m_zParent[v] * m_down[v]);
+            current[at(p)] += current[v] / (1.0 + m_zParent[v] * m_down[v]);
     }
-    std::vector<Complex> volt(n, 0);
-    for (int vi : m_order) {
-        const auto v = static_cast<std::size_t>(vi);
+    for (int vi : buses) {
+        const auto v = at(vi);
         const int p = m_parent[v];
         if (p < 0)
             volt[v] = current[v] / m_down[v];
         else // (V_p − V_v)/z + I_v = Y_v·V_v
-            volt[v] = (volt[static_cast<std::size_t>(p)] + m_zParent[v] * current[v]) /
-                      (1.0 + m_zParent[v] * m_down[v]);
+            volt[v] = (volt[at(p)] + m_zParent[v] * current[v]) / (1.0 + m_zParent[v] * m_down[v]);
     }
+}
+
+std::vector<Complex> TreeSolver::solve(const std::vector<Complex>& inj) const {
+    const std::size_t n = m_parent.size();
+    std::vector<Complex> current(inj.begin(), inj.end());
+    current.resize(n, 0);
+    std::vector<Complex> volt(n, 0);
+    for (int tree = 0; tree + 1 < static_cast<int>(m_treeStart.size()); ++tree)
+        solveTree(tree, current, volt);
     return volt;
 }
 

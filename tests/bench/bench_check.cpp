@@ -1,5 +1,6 @@
 // Google Benchmark: full check, one edit then re-check, file load, and a bare breadth-first
-// walk of the same Boost graph, on generated plants of 500 to 32,000 parts.
+// walk of the same Boost graph, on generated plants of 500 to 32,000 parts; the same plant with
+// its ties open and closed (meshed), and a long chain closed into one loop.
 #include "check/check.h"
 #include "io/drawing_file.h"
 #include "plant_generator.h"
@@ -31,6 +32,17 @@ void BM_FullCheck(benchmark::State& state) {
     state.counters["parts"] = static_cast<double>(d.parts().size());
 }
 BENCHMARK(BM_FullCheck)->Apply(args);
+
+// Arg 1: 0 = ties drawn but open (radial), 1 = ties closed (one loop per lineup pair). The two
+// side by side show what the loops cost.
+void BM_TiesCheck(benchmark::State& state) {
+    const auto ties = state.range(1) ? bench::Ties::Closed : bench::Ties::Open;
+    const Drawing d = bench::makePlant(static_cast<int>(state.range(0)), 12, ties);
+    for (auto _ : state)
+        benchmark::DoNotOptimize(checkDrawing(d, tables()));
+    state.counters["parts"] = static_cast<double>(d.parts().size());
+}
+BENCHMARK(BM_TiesCheck)->ArgsProduct({{2000, 32000}, {0, 1}})->Unit(benchmark::kMillisecond);
 
 void BM_EditThenCheck(benchmark::State& state) {
     Drawing d = bench::makePlant(static_cast<int>(state.range(0)));
@@ -86,8 +98,9 @@ void BM_BareBfs(benchmark::State& state) {
 BENCHMARK(BM_BareBfs)->Apply(args);
 
 // Source, bus, `n` cables in series (every other one a breaker when `mixed`), then a motor;
-// parts (and wires) written in ascending, descending or shuffled id order.
-std::string chainText(int n, bool mixed, int order) {
+// parts (and wires) written in ascending, descending or shuffled id order. `loop` wires the
+// chain's far end back to the bus: one loop through every cable.
+std::string chainText(int n, bool mixed, int order, bool loop = false) {
     std::vector<std::string> parts{
         R"({"id":1,"kind":"source","tag":"U","kv":0.48,"fault_ka":30})",
         R"({"id":2,"kind":"bus","tag":"B","bus_type":"switchboard","volts":480,"amps":1200})"};
@@ -107,6 +120,9 @@ std::string chainText(int n, bool mixed, int order) {
     parts.push_back(R"({"id":)" + m + R"(,"kind":"motor","hp":10,"volts":460})");
     wires.push_back(R"({"id":)" + std::to_string(wires.size() + 1) + R"(,"from":")" + prev +
                     R"(","to":")" + m + R"(.in"})");
+    if (loop)
+        wires.push_back(R"({"id":)" + std::to_string(wires.size() + 1) + R"(,"from":")" + prev +
+                        R"(","to":"2.bar"})");
     for (auto* list : {&parts, &wires}) {
         if (order == 1)
             std::reverse(list->begin(), list->end());
@@ -134,6 +150,17 @@ BENCHMARK(BM_ChainCheck)
     ->Args({2000, 1})
     ->Args({10000, 1})
     ->Args({50000, 1})
+    ->Unit(benchmark::kMillisecond);
+
+void BM_LoopChainCheck(benchmark::State& state) {
+    const auto r =
+        io::parseDrawing(chainText(static_cast<int>(state.range(0)), false, 0, state.range(1)));
+    for (auto _ : state)
+        benchmark::DoNotOptimize(checkDrawing(*r.drawing, tables()));
+}
+// Arg 1: 0 = the open chain, 1 = closed into one loop.
+BENCHMARK(BM_LoopChainCheck)
+    ->ArgsProduct({{2000, 10000, 50000}, {0, 1}})
     ->Unit(benchmark::kMillisecond);
 
 void BM_LoadIdOrder(benchmark::State& state) {

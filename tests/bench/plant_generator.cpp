@@ -43,13 +43,34 @@ private:
     Drawing& m_d;
 };
 
+// Tie breaker and tie cable between two switchboards, rated like a feeder. Through a cable
+// rather than bolted bus to bus: a zero-impedance tie would merge the two switchboards into one
+// solve bus, and the loop would reduce to two transformers in parallel.
+void addTie(Builder& b, const std::string& n, double x0, PartId left, PartId right, bool open) {
+    auto cb = b.add(PartKind::Breaker, "CB-T" + n, x0 - 55, 150,
+                    {{"trip_type", std::string("electronic")},
+                     {"trip_a", 500.0},
+                     {"frame_a", 600.0},
+                     {"interrupting_ka", 65.0},
+                     {"let_through_a2s", 5e6},
+                     {"lt_delay_s", 10.0},
+                     {"st_pickup_x", 8.0},
+                     {"st_delay_s", 0.2},
+                     {"open", open}});
+    auto c = b.add(PartKind::Cable, "C-T" + n, x0 - 30, 150,
+                   {{"size", std::string("250 kcmil")}, {"sets", 2.0}, {"length_ft", 60.0}});
+    b.wire(left, 0, cb, 0);
+    b.wire(cb, 1, c, 0);
+    b.wire(c, 1, right, 0);
+}
+
 } // namespace
 
-Drawing makePlant(int parts, int bucketsPerLineup) {
+Drawing makePlant(int parts, int bucketsPerLineup, Ties ties) {
     Drawing d;
     d.sheet.title = "Generated plant";
     Builder b(d);
-    PartId src;
+    PartId src, prevSwbd;
     for (int l = 0; static_cast<int>(d.parts().size()) < parts; ++l) {
         const std::string n = std::to_string(l + 1);
         const double x0 = l * (bucketsPerLineup + 2) * 110.0;
@@ -88,6 +109,9 @@ Drawing makePlant(int parts, int bucketsPerLineup) {
         b.wire(swbd, 0, feeder, 0);
         b.wire(feeder, 1, fc, 0);
         b.wire(fc, 1, mcc, 0);
+        if (ties != Ties::None && l % 2 == 1) // a double-ended pair under the same service
+            addTie(b, n, x0, prevSwbd, swbd, ties == Ties::Open);
+        prevSwbd = swbd;
         for (int k = 0; k < bucketsPerLineup; ++k) {
             const auto& m = kMotors[static_cast<std::size_t>(k) % kMotors.size()];
             const std::string t = n + "-" + std::to_string(k + 1);

@@ -346,7 +346,8 @@ TEST(FaultStudy, TreeRecursionEqualsSparseLu) {
     // Two sources on one closed tie are still a tree of branches (sources are shunts)...
     Studied closed(doubleEnded(false));
     EXPECT_TRUE(TreeSolver::build(closed.r.model, true).has_value());
-    // ...but two cables in parallel make a loop: the LU path takes over.
+    // ...but two cables in parallel make a loop: the tree alone cannot solve it (the loop
+    // solver corrects for the chord; tests/core/meshed_solver_test.cpp).
     Part twin = *d.part(PartId(8));
     twin.id = d.nextPartId();
     twin.tag = "C-1B";
@@ -390,9 +391,9 @@ TEST(OneAssumption, StudyAndCurvesAssumeTheSameLockedRotorCurrent) {
 }
 
 TEST(FailuresAreResults, AFactorisationThatFailsIsAFindingNotZeros) {
-    // Two cables in parallel make the network meshed, so the studies factorise Y. When that
-    // fails, no fault current is known: the check must say so, and no duty check may pass
-    // against a fault current of zero.
+    // Two cables in parallel make the network meshed, so the studies factorise the loop
+    // correction (or, with many loops, Y itself). When that fails, no fault current is known: the
+    // check must say so, and no duty check may pass against a fault current of zero.
     Drawing d = smallLineup();
     Part twin = *d.part(PartId(8));
     twin.id = d.nextPartId();
@@ -412,7 +413,9 @@ TEST(FailuresAreResults, AFactorisationThatFailsIsAFindingNotZeros) {
     EXPECT_FALSE(failed.r.faultSolved);
     EXPECT_EQ(failed.r.faultAtNode(failed.net->nodeOf(PartId(9), 0)), nullptr);
     EXPECT_EQ(count(report, "study.solve.failed"), 2); // the fault study and the load flow
-    for (const auto& f : report.findings)
-        if (f.ruleId == "study.solve.failed")
+    for (const auto& f : report.findings) {
+        if (f.ruleId == "study.solve.failed") {
             EXPECT_NE(f.message.find("were not performed"), std::string::npos) << f.message;
+        }
+    }
 }
