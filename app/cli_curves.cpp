@@ -54,7 +54,7 @@ void addCurvesCommand(CLI::App& app, const TablesRef& tables, int& exitCode) {
             return;
         const Part* p = loaded->partByTag(a->tag);
         if (!p) {
-            std::cerr << "lineward-cli curves: no part tagged " << a->tag << "\n";
+            std::cerr << "lineward-cli curves: no part tagged " << escapeControls(a->tag) << "\n";
             exitCode = kBadInput;
             return;
         }

@@ -39,7 +39,7 @@ void addTripCommand(CLI::App& app, int& exitCode) {
         if (!curve) {
             std::cerr << "lineward-cli trip: "
                       << (p ? a->tag + " has no trip curve (not a breaker, fuse or overload relay)"
-                            : "no part tagged " + a->tag)
+                            : "no part tagged " + escapeControls(a->tag))
                       << "\n";
             exitCode = kBadInput;
             return;

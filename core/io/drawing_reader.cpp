@@ -104,6 +104,15 @@ private:
             throw Failure{ptr, "expected an object, found " + std::string(typeName(j))};
     }
 
+    // A key as one JSON Pointer token (RFC 6901: ~ as ~0, / as ~1), so the located error finds
+    // the key even when it holds those characters.
+    static std::string pointerToken(const std::string& k) {
+        std::string t;
+        for (char c : k)
+            t += c == '~' ? std::string("~0") : c == '/' ? std::string("~1") : std::string(1, c);
+        return t;
+    }
+
     void checkKeys(const json& j, const std::string& ptr,
                    std::initializer_list<std::string_view> keys) {
         for (const auto& [k, v] : j.items()) {
@@ -111,7 +120,7 @@ private:
             for (auto key : keys)
                 known = known || key == k;
             if (!known)
-                throw Failure{ptr + "/" + k, "unknown key '" + cut(k) + "'"};
+                throw Failure{ptr + "/" + pointerToken(k), "unknown key '" + cut(k) + "'"};
         }
     }
 
@@ -140,8 +149,12 @@ private:
 
     std::uint32_t idValue(const json& j, const std::string& ptr) {
         const double v = number(j, ptr);
-        if (v < 1 || v > 4e9 || v != std::floor(v))
-            throw Failure{ptr, "expected a whole-number id from 1, found " + formatNumber(v)};
+        if (v < 1 || v > 4e9 || v != std::floor(v)) {
+            // Quote a whole number as written (a double would misquote 2^64 − 1).
+            const std::string found =
+                j.is_number_unsigned() ? std::to_string(j.get<std::uint64_t>()) : formatNumber(v);
+            throw Failure{ptr, "expected a whole-number id from 1 to 4000000000, found " + found};
+        }
         return static_cast<std::uint32_t>(v);
     }
 
@@ -240,7 +253,7 @@ private:
             v = {}; // a value absent from the file takes its default below, not twice
         const auto& fields = kindInfo(*kind).fields;
         for (const auto& [k, v] : j.items()) {
-            const std::string fptr = ptr + "/" + k;
+            const std::string fptr = ptr + "/" + pointerToken(k);
             if (k == "id" || k == "kind")
                 continue;
             if (k == "tag")

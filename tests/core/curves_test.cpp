@@ -136,6 +136,15 @@ TEST(UserCurve, PointsReplaceTheGenericBand) {
     EXPECT_TRUE(bad.set("curve_points", std::string("150:100:300; 100:1:2"))); // falling currents
     EXPECT_TRUE(bad.set("curve_points", std::string("150:5:1; 300:1:2")));     // min > max
     EXPECT_TRUE(bad.set("curve_points", std::string("150;300")));
+    // Physical span: a point at 1e-300 A, 4.9e-324 s or 1e308 A is refused with the range.
+    auto why = bad.set("curve_points", std::string("1e-300:1:2; 300:1:2"));
+    ASSERT_TRUE(why);
+    EXPECT_NE(why->find("0.01 to 1000000 A"), std::string::npos) << *why;
+    why = bad.set("curve_points", std::string("150:4.9e-324:1; 300:1:2"));
+    ASSERT_TRUE(why);
+    EXPECT_NE(why->find("0.0005 to 100000 s"), std::string::npos) << *why;
+    EXPECT_TRUE(bad.set("curve_points", std::string("150:1:2; 1e308:0.01:0.02")));
+    EXPECT_FALSE(bad.set("curve_points", std::string("0.01:1000:100000; 1000000:0.0005:0.001")));
 }
 
 namespace {

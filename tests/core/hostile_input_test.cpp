@@ -50,7 +50,30 @@ TEST(HostileIds, HugeIdLoadsWithoutADenseTable) {
     // Ids past the format's limit are refused with the reason, not loaded.
     auto over = io::parseDrawing(partsFile({motorJson(4000000001u)}), "t.lineward");
     ASSERT_FALSE(over);
-    EXPECT_NE(over.error->message.find("whole-number id"), std::string::npos);
+    EXPECT_NE(over.error->message.find("whole-number id from 1 to 4000000000, found 4000000001"),
+              std::string::npos)
+        << over.error->message;
+    // A whole number past 2^53 is quoted as written, not as the nearest double (…616).
+    std::string huge = motorJson(1);
+    huge.replace(huge.find("\"id\":1"), 6, "\"id\":18446744073709551615");
+    auto max64 = io::parseDrawing(partsFile({huge}), "t.lineward");
+    ASSERT_FALSE(max64);
+    EXPECT_NE(max64.error->message.find("found 18446744073709551615"), std::string::npos)
+        << max64.error->message;
+}
+
+TEST(HostileKeys, AnUnknownKeyWithSlashOrTildeIsLocatedAtItself) {
+    // RFC 6901 escapes in the error's path: the key "a/b~c" is found on its own line.
+    const std::string text = partsFile({motorJson(2), motorJson(1, ",\"a/b~c\":1")});
+    auto r = io::parseDrawing(text, "t.lineward");
+    ASSERT_FALSE(r);
+    EXPECT_NE(r.error->message.find("'a/b~c'"), std::string::npos) << r.error->text();
+    // The error points at the key itself, not at the start of its part.
+    const std::size_t at = text.find("\"a/b~c\"");
+    const std::size_t lineStart = text.rfind('\n', at) + 1;
+    EXPECT_EQ(r.error->line, 1 + std::count(text.begin(), text.begin() + at, '\n'))
+        << r.error->text();
+    EXPECT_EQ(r.error->column, at - lineStart + 1) << r.error->text();
 }
 
 TEST(HostileIds, AnyIdOrderGivesTheSameDrawing) {

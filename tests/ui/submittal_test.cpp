@@ -176,3 +176,22 @@ TEST(Submittal, PrintsThroughQPrinterAndListsAcceptedDeviations) {
     EXPECT_TRUE(text.contains("0.8 diversity"));
     EXPECT_TRUE(pdfInfo(pdf).contains("842 x 1191")); // A3 portrait
 }
+
+TEST(Submittal, MarkupInAFileIsPrintedAsText) {
+    // A tag and a title that look like rich text reach every page as the characters typed:
+    // the one-line, the findings summary, the schedules, the curve sheet and the title block.
+    Drawing d = sample("kestrel-mill-mcc1-review.lineward");
+    Part* motor = d.part(d.partByTag("P-105")->id);
+    motor->tag = "<b>P-105</b>";
+    d.sheet.title = "<i>MCC-1</i> one-line";
+    const QString pdf = test::tempDir("submittal-markup") + "/markup.pdf";
+    SubmittalOptions o;
+    o.curveParts = std::vector<PartId>{motor->id};
+    auto r = writeSubmittalPdf(pdf, runCheck(d, *test::sharedTables()), test::sharedTables(), o);
+    ASSERT_TRUE(r.error.isEmpty()) << r.error.toStdString();
+    const QString text = pdfText(pdf);
+    ASSERT_FALSE(text.isEmpty()) << "pdftotext (poppler-utils) is needed";
+    // On the one-line, in the schedules, the findings and the curve sheet's title: many times.
+    EXPECT_GE(text.count("<b>P-105</b>"), 3) << text.left(2000).toStdString();
+    EXPECT_TRUE(text.contains("<i>MCC-1</i> one-line"));
+}
