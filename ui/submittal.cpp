@@ -12,7 +12,6 @@
 #include "sheet_scene.h"
 #include "studies/study_view.h"
 
-#include <QBuffer>
 #include <QDate>
 #include <QDir>
 #include <QFile>
@@ -28,6 +27,17 @@ namespace {
 
 constexpr double kTitleH = 92; // title block height in device units at 72 dpi equivalents
 
+QRectF pageRect(const QPaintDevice& dev) {
+    return QRectF(18, 18, dev.width() - 36, dev.height() - 36);
+}
+
+// The drawing area of a page: inside the border, above the title block.
+QRectF bodyRect(const QPaintDevice& dev) {
+    QRectF r = pageRect(dev);
+    r.setBottom(r.bottom() - kTitleH - 6);
+    return r.adjusted(8, 8, -8, -8);
+}
+
 struct PageCtx {
     QPainter& p;
     QPagedPaintDevice& dev;
@@ -35,12 +45,8 @@ struct PageCtx {
     int pageNo = 0;
     int pageCount = 0;
     QString date;
-    QRectF page() const { return QRectF(18, 18, dev.width() - 36, dev.height() - 36); }
-    QRectF body() const {
-        QRectF r = page();
-        r.setBottom(r.bottom() - kTitleH - 6);
-        return r.adjusted(8, 8, -8, -8);
-    }
+    QRectF page() const { return pageRect(dev); }
+    QRectF body() const { return bodyRect(dev); }
 };
 
 QString qs(const std::string& s) {
@@ -97,45 +103,93 @@ bool nextPage(PageCtx& c) {
     return true;
 }
 
-// Rows of text laid out over as many pages as they need.
+// A table's layout, measured on the output device exactly as painting measures it: the height
+// of each row (cells word-wrapped in their columns) and the first row of each page. Counting
+// pages and painting them share it, so the Submittal is painted once, with "sheet n of m".
+struct TableLayout {
+    std::vector<double> rowH;
+    std::vector<std::size_t> pageStarts; ///< at least one page, even for no rows
+};
+
+QFont tableFont(const QFont& base, bool header) {
+    QFont f = base;
+    f.setPointSizeF(8);
+    f.setBold(header);
+    return f;
+}
+
+QString cellText(const QStringList& row, int k, bool header) {
+    QString cell = row[k];
+    if (k == 0 && header)
+        cell.remove(0, 1); // the header mark
+    return cell;
+}
+
+TableLayout layoutTable(const QPaintDevice& dev, const QFont& base, const QRectF& body,
+                        const std::vector<QStringList>& rows, const std::vector<double>& widths) {
+    TableLayout t;
+    t.pageStarts.push_back(0);
+    double y = body.top() + 20; // below the table's title
+    for (std::size_t i = 0; i < rows.size(); ++i) {
+        if (!(y + 24 < body.bottom())) {
+            t.pageStarts.push_back(i);
+            y = body.top() + 20;
+        }
+        const bool header = rows[i].value(0).startsWith(QChar(1));
+        const QFontMetricsF fm(tableFont(base, header), &dev);
+        double h = 12, x = body.left();
+        for (int k = 0; k < rows[i].size() && k < static_cast<int>(widths.size()); ++k) {
+            const double w = widths[static_cast<std::size_t>(k)] * body.width();
+            const QRectF cellR(x, y, w - 4, 60);
+            h = std::max(
+                h, fm.boundingRect(cellR, Qt::TextWordWrap, cellText(rows[i], k, header)).height() +
+                       1);
+            x += w;
+        }
+        t.rowH.push_back(h);
+        y += h;
+    }
+    return t;
+}
+
+// Rows of text over the pages their layout gives.
 void textPages(PageCtx& c, const QString& title, const std::vector<QStringList>& rows,
                const std::vector<double>& widths) {
-    QFont f = c.p.font();
-    f.setPointSizeF(8);
-    std::size_t i = 0;
-    do {
+    const TableLayout t = layoutTable(c.dev, QFont(), c.body(), rows, widths);
+    for (std::size_t page = 0; page < t.pageStarts.size(); ++page) {
         nextPage(c);
         titleBlock(c, title);
-        QRectF b = c.body();
-        c.p.setFont(f);
-        double y = b.top();
-        QFont head = f;
-        head.setBold(true);
+        const QRectF b = c.body();
+        QFont head = tableFont(QFont(), true);
         head.setPointSizeF(10);
         c.p.setFont(head);
-        c.p.drawText(QRectF(b.left(), y, b.width(), 16), title);
-        y += 20;
-        c.p.setFont(f);
-        for (; i < rows.size() && y + 24 < b.bottom(); ++i) {
-            double x = b.left();
+        c.p.drawText(QRectF(b.left(), b.top(), b.width(), 16), title);
+        double y = b.top() + 20;
+        const std::size_t end =
+            page + 1 < t.pageStarts.size() ? t.pageStarts[page + 1] : rows.size();
+        for (std::size_t i = t.pageStarts[page]; i < end; ++i) {
             const bool header = rows[i].value(0).startsWith(QChar(1));
-            QFont rf = f;
-            rf.setBold(header);
-            c.p.setFont(rf);
-            double h = 12;
+            c.p.setFont(tableFont(QFont(), header));
+            double x = b.left();
             for (int k = 0; k < rows[i].size() && k < static_cast<int>(widths.size()); ++k) {
-                QString cell = rows[i][k];
-                if (k == 0 && header)
-                    cell.remove(0, 1);
-                const QRectF cellR(x, y, widths[static_cast<std::size_t>(k)] * b.width() - 4, 60);
-                const QRectF used = c.p.boundingRect(cellR, Qt::TextWordWrap, cell);
-                c.p.drawText(cellR, Qt::TextWordWrap, cell);
-                h = std::max(h, used.height() + 1);
-                x += widths[static_cast<std::size_t>(k)] * b.width();
+                const double w = widths[static_cast<std::size_t>(k)] * b.width();
+                c.p.drawText(QRectF(x, y, w - 4, 60), Qt::TextWordWrap,
+                             cellText(rows[i], k, header));
+                x += w;
             }
-            y += h;
+            y += t.rowH[i];
         }
-    } while (i < rows.size());
+    }
+}
+
+// How many sheets the one-line takes: one when it fits at the readable scale, else its tiles.
+int oneLineSheetCount(const QRectF& src, const QRectF& body, const SubmittalOptions& o) {
+    const double fit = std::min(body.width() / src.width(), body.height() / src.height());
+    if (fit >= o.minScale)
+        return 1;
+    const QSizeF tile = body.size() / o.minScale;
+    return static_cast<int>(std::ceil(src.width() / tile.width())) *
+           static_cast<int>(std::ceil(src.height() / tile.height()));
 }
 
 // The one-line scaled to the page, or tiled over several pages with match lines where fitting
@@ -257,14 +311,56 @@ std::optional<QPageSize> paperByName(const QString& name) {
 
 namespace {
 
+// One table of the Submittal: its title, rows (a header row marked with \x01) and column widths
+// as fractions of the page body.
+struct TextTable {
+    QString title;
+    std::vector<QStringList> rows;
+    std::vector<double> widths;
+};
+
 struct SubmittalData {
     const Drawing& d;
     const StudyView* view; ///< nothing where no study could run (no curve sheets then)
     SheetScene& scene;
     std::vector<PartId> curveParts;
-    std::vector<std::vector<QStringList>> findings;
-    std::vector<Schedule> schedules;
+    std::vector<TextTable> tables; ///< findings, accepted deviations, schedules
 };
+
+std::vector<TextTable> submittalTables(const std::vector<std::vector<QStringList>>& findings,
+                                       const std::vector<Schedule>& schedules) {
+    std::vector<TextTable> out;
+    out.push_back({"Findings summary", findings[0], {0.09, 0.17, 0.15, 0.11, 0.12, 0.36}});
+    if (!findings[1].empty())
+        out.push_back({"Accepted deviations", findings[1], {0.16, 0.16, 0.12, 0.10, 0.46}});
+    for (const auto& sch : schedules) {
+        TextTable t{"Schedule — " + qs(sch.name), {}, {}};
+        QStringList head;
+        for (const auto& h : sch.headers)
+            head << qs(h);
+        head[0].prepend("\x01");
+        t.rows.push_back(head);
+        for (const auto& r : sch.rows) {
+            QStringList row;
+            for (const auto& cell : r)
+                row << qs(cell);
+            t.rows.push_back(row);
+        }
+        t.widths.assign(sch.headers.size(), 1.0 / static_cast<double>(sch.headers.size()));
+        out.push_back(std::move(t));
+    }
+    return out;
+}
+
+// The number of pages paintPages will paint, from the same layout functions it uses.
+int countPages(const QPaintDevice& dev, const SubmittalData& s, const SubmittalOptions& o) {
+    const QRectF src = s.scene.itemsBoundingRect().adjusted(-30, -30, 30, 30);
+    int pages = oneLineSheetCount(src, bodyRect(dev), o);
+    for (const auto& t : s.tables)
+        pages += static_cast<int>(
+            layoutTable(dev, QFont(), bodyRect(dev), t.rows, t.widths).pageStarts.size());
+    return pages + static_cast<int>(s.curveParts.size());
+}
 
 // Lays out and paints every page; returns the page count (and one-line sheet count).
 int paintPages(QPagedPaintDevice& dev, const SubmittalData& s, const SubmittalOptions& o,
@@ -276,26 +372,8 @@ int paintPages(QPagedPaintDevice& dev, const SubmittalData& s, const SubmittalOp
     }
     PageCtx c{painter, dev, s.d, 0, pageCount, date};
     paintOneLine(c, s.scene, oneLineSheets, o);
-    textPages(c, "Findings summary", s.findings[0], {0.09, 0.17, 0.15, 0.11, 0.12, 0.36});
-    if (!s.findings[1].empty())
-        textPages(c, "Accepted deviations", s.findings[1], {0.16, 0.16, 0.12, 0.10, 0.46});
-    for (const auto& sch : s.schedules) {
-        std::vector<QStringList> rows;
-        QStringList head;
-        for (const auto& h : sch.headers)
-            head << qs(h);
-        head[0].prepend("\x01");
-        rows.push_back(head);
-        for (const auto& r : sch.rows) {
-            QStringList row;
-            for (const auto& cell : r)
-                row << qs(cell);
-            rows.push_back(row);
-        }
-        textPages(
-            c, "Schedule — " + qs(sch.name), rows,
-            std::vector<double>(sch.headers.size(), 1.0 / static_cast<double>(sch.headers.size())));
-    }
+    for (const auto& t : s.tables)
+        textPages(c, t.title, t.rows, t.widths);
     for (auto id : s.curveParts) {
         nextPage(c);
         titleBlock(c, "Curves " + qs(s.d.part(id)->tag));
@@ -326,25 +404,24 @@ SubmittalResult paintSubmittal(QPagedPaintDevice& dev, std::shared_ptr<const Che
     scene.routeWires();
     const Drawing& d = *result->drawing;
     const auto view = result->view();
-    SubmittalData data{d,  view ? &*view : nullptr,        scene,
-                       {}, findingRows(d, result->report), buildSchedules(*result)};
+    SubmittalData data{d,
+                       view ? &*view : nullptr,
+                       scene,
+                       {},
+                       submittalTables(findingRows(d, result->report), buildSchedules(*result))};
     if (o.curveParts)
         data.curveParts = *o.curveParts;
     else
         for (const auto& m : result->motors)
             data.curveParts.push_back(m.branch.motor->id);
     const QString date = o.date.isEmpty() ? QDate::currentDate().toString(Qt::ISODate) : o.date;
-    // "Sheet n of m" needs m first: lay the pages out once on a scratch PDF of the same size.
-    QBuffer scratch;
-    scratch.open(QIODevice::WriteOnly);
-    QPdfWriter counter(&scratch);
-    counter.setPageLayout(dev.pageLayout());
-    counter.setResolution(dev.logicalDpiX());
-    int sheets = 0;
-    const int pages = paintPages(counter, data, o, date, 0, sheets, res.error);
-    if (!res.error.isEmpty())
-        return res;
+    // "Sheet n of m" needs m first: the layout counts the pages without painting them, then
+    // each page is painted once.
+    const int pages = countPages(dev, data, o);
     res.pages = paintPages(dev, data, o, date, pages, res.oneLineSheets, res.error);
+    if (res.error.isEmpty() && res.pages != pages)
+        res.error =
+            QString("the Submittal laid out %1 pages but painted %2").arg(pages).arg(res.pages);
     return res;
 }
 

@@ -62,6 +62,10 @@ TEST(Submittal, PdfHoldsEveryTagEveryRuleAndTheCaution) {
             EXPECT_TRUE(text.contains(QString::fromStdString(f.ruleId))) << f.ruleId;
     EXPECT_TRUE(text.contains(QString::fromUtf8(kSafetyCaution).simplified().left(80)));
     EXPECT_TRUE(text.contains(QString("SHEET 1 OF %1").arg(r.pages)));
+    // Counted before painting, the total is right on the last page too, and the PDF holds
+    // exactly that many pages (each painted once).
+    EXPECT_TRUE(text.contains(QString("SHEET %1 OF %1").arg(r.pages)));
+    EXPECT_FALSE(text.contains(QString("SHEET %1 OF").arg(r.pages + 1)));
     EXPECT_TRUE(text.contains("Findings summary"));
     EXPECT_TRUE(text.contains("Schedule — motors"));
     EXPECT_TRUE(text.contains("Curves P-101"));
