@@ -26,9 +26,22 @@ void addTripCommand(CLI::App& app, int& exitCode) {
                 "Exit 0, or 2 on a bad file, tag or current.");
     cmd->add_option("file", a->file, "drawing (.lineward)")->required()->check(CLI::ExistingFile);
     cmd->add_option("--part", a->tag, "tag of a breaker, fuse or overload relay")->required();
-    cmd->add_option("--amps", a->amps, "current in amperes")
+    // A finite current a curve is drawn for (NaN passes a "positive number" check).
+    cmd->add_option("--amps", a->amps, "current in amperes, 0.01 to 1000000")
         ->required()
-        ->check(CLI::PositiveNumber);
+        ->check(CLI::Validator(
+            [](std::string& v) -> std::string {
+                double x = 0;
+                try {
+                    x = std::stod(v);
+                } catch (const std::exception&) {
+                    return "--amps must be a number of amperes";
+                }
+                return std::isfinite(x) && x >= 0.01 && x <= 1e6
+                           ? std::string()
+                           : "--amps must be a current from 0.01 to 1000000 A";
+            },
+            "AMPS"));
     cmd->add_flag("--json", a->json, "print one JSON object");
     cmd->callback([a, &exitCode] {
         auto loaded = loadForVerb(a->file, exitCode);

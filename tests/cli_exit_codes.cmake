@@ -102,6 +102,9 @@ if(NOT ttype STREQUAL "NUMBER" OR tmax GREATER 100)
 endif()
 expect_exit(2 ${CLI} trip ${SAMPLES}/kestrel-mill-mcc1.lineward --part NOPE --amps 10)
 expect_exit(2 ${CLI} trip ${SAMPLES}/kestrel-mill-mcc1.lineward --part C-101 --amps 10)
+# A current that is not a finite number of amperes is refused, not answered with "nan s".
+expect_exit(2 ${CLI} trip ${SAMPLES}/kestrel-mill-mcc1.lineward --part CB-101 --amps nan)
+expect_exit(2 ${CLI} trip ${SAMPLES}/kestrel-mill-mcc1.lineward --part CB-101 --amps 1e400)
 
 # Hostile text: control characters in a drawing are printed escaped, never sent raw, and a
 # refusal stays on one line (tests/data/hostile/).

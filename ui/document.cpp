@@ -238,6 +238,7 @@ void Document::startCheck() {
     const quint64 gen = ++m_generation;
     auto copy = std::make_shared<const Drawing>(m_drawing);
     if (m_drawing.parts().size() < kBackgroundParts) {
+        m_lastOffThread = false;
         finishCheck(gen, checkSafely(std::move(copy), *m_tables, gen));
         return;
     }
@@ -246,7 +247,12 @@ void Document::startCheck() {
     std::thread([this, copy, tables, gen] {
         auto r = checkSafely(copy, *tables, gen);
         QMetaObject::invokeMethod(
-            this, [this, gen, r = std::move(r)]() mutable { finishCheck(gen, std::move(r)); },
+            this,
+            [this, gen, r = std::move(r)]() mutable {
+                if (gen == m_generation)
+                    m_lastOffThread = true;
+                finishCheck(gen, std::move(r));
+            },
             Qt::QueuedConnection);
         --m_running;
     }).detach();

@@ -69,6 +69,8 @@ public:
 
     /// Blocks until the newest check has finished (tests; large drawings check off-thread).
     void waitForCheck();
+    /// True when the newest check result was made on a worker thread, not the GUI thread.
+    bool lastCheckOffGuiThread() const { return m_lastOffThread; }
     /// Drawings at least this large are checked on a worker thread.
     static constexpr std::size_t kBackgroundParts = 600;
 
@@ -99,6 +101,7 @@ private:
     QUndoStack m_undo;
     quint64 m_generation = 0;
     std::atomic<int> m_running{0};
+    bool m_lastOffThread = false;
 };
 
 } // namespace lineward::ui

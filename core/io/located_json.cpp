@@ -93,9 +93,9 @@ public:
             return fail("a key is longer than " + std::to_string(m_limits.maxKeyBytes) + " bytes");
         if (obj->contains(k))
             return fail("duplicate key '" + k + "'");
-        // The cursor sits just past the closing quote; step back to the opening quote.
-        const std::size_t end = here();
-        const std::size_t start = end >= k.size() + 2 ? end - k.size() - 2 : 0;
+        // The cursor sits just past the closing quote; step back over the key as written (its
+        // escapes make it longer than the decoded key) to the opening quote.
+        const std::size_t start = openingQuote(here());
         m_key = k;
         if (m_limits.recordOffsets)
             record(m_paths.back() + "/" + escape(k), start);
@@ -126,6 +126,23 @@ public:
 
 private:
     std::size_t here() const { return static_cast<std::size_t>(*m_cursor - m_base); }
+
+    // Offset of the quote that opens the string whose closing quote ends just before `end`: the
+    // nearest quote not escaped (an even run of backslashes before it). Linear in the key.
+    std::size_t openingQuote(std::size_t end) const {
+        if (end < 2)
+            return 0;
+        for (std::size_t i = end - 1; i-- > 0;) {
+            if (m_base[i] != '"')
+                continue;
+            std::size_t slashes = 0;
+            while (slashes < i && m_base[i - 1 - slashes] == '\\')
+                ++slashes;
+            if (slashes % 2 == 0)
+                return i;
+        }
+        return 0;
+    }
 
     static std::string escape(const std::string& k) {
         std::string out;

@@ -16,7 +16,8 @@ std::optional<std::string> parseCurvePoints(const std::string& text, std::vector
         CurvePoint p{};
         char c1 = 0, c2 = 0;
         std::stringstream one(item);
-        if (!(one >> p.amps >> c1 >> p.minS >> c2 >> p.maxS) || c1 != ':' || c2 != ':')
+        if (!(one >> p.amps >> c1 >> p.minS >> c2 >> p.maxS) || c1 != ':' || c2 != ':' ||
+            !(one >> std::ws).eof())
             return "curve point '" + item + "' is not amps:min_s:max_s";
         if (!(p.amps > 0) || !(p.minS > 0) || !(p.maxS >= p.minS) || !std::isfinite(p.maxS))
             return "curve point '" + item + "' needs amps > 0 and 0 < min_s ≤ max_s";

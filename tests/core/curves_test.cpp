@@ -59,17 +59,21 @@ TEST(BreakerCurve, InstantaneousToleranceEdges) {
     // trip from 800 A, must clear within 1.5 cycles from 1200 A.
     const auto tm = *TripCurve::of(device(
         PartKind::Breaker, {{"trip_a", 100.0}, {"interrupting_ka", 65.0}, {"inst_x", 10.0}}));
+    // "Instantaneous" means no intentional delay: above the band the breaker may open within
+    // the first cycle and has cleared within 1.5 cycles at 60 Hz (common practice).
+    const double cycle = 1.0 / 60.0;
     EXPECT_GT(tm.minTime(799), 0.1); // thermal region only
-    EXPECT_DOUBLE_EQ(tm.minTime(801), 0.008);
+    EXPECT_GT(tm.minTime(801), 0.0);
+    EXPECT_LE(tm.minTime(801), cycle);
     EXPECT_GT(tm.maxTime(1199), 0.1);
-    EXPECT_DOUBLE_EQ(tm.maxTime(1201), 0.025);
+    EXPECT_LE(tm.maxTime(1201), 1.5 * cycle);
     // Instantaneous-only breaker set at 300 A, same tolerance.
     const auto mcp = *TripCurve::of(device(
         PartKind::InstBreaker, {{"amps", 50.0}, {"pickup_a", 300.0}, {"interrupting_ka", 65.0}}));
     EXPECT_TRUE(std::isinf(mcp.minTime(239)));
-    EXPECT_DOUBLE_EQ(mcp.minTime(241), 0.008);
+    EXPECT_LE(mcp.minTime(241), cycle);
     EXPECT_TRUE(std::isinf(mcp.maxTime(359)));
-    EXPECT_DOUBLE_EQ(mcp.maxTime(361), 0.025);
+    EXPECT_LE(mcp.maxTime(361), 1.5 * cycle);
 }
 
 TEST(BreakerCurve, ElectronicLongShortInstantaneous) {
@@ -81,15 +85,21 @@ TEST(BreakerCurve, ElectronicLongShortInstantaneous) {
                                                   {"st_pickup_x", 6.0},
                                                   {"st_delay_s", 0.3},
                                                   {"inst_x", 12.0}}));
-    // Long time: I²t through 10 s at 6 × Ir, ±20 % (common practice); at 4 × below the
-    // short-time pickup: 0.8 × 10 × 36 / 16 = 18 s.
-    EXPECT_NEAR(c.minTime(4 * 400), 18.0, 1e-9);
-    EXPECT_NEAR(c.maxTime(4 * 400), 1.2 * 10 * 36 / 16, 1e-9);
-    // Short time: flat 0.3 s from 6 × Ir ±10 %.
-    EXPECT_DOUBLE_EQ(c.minTime(2400 * 0.95), 0.3);
-    EXPECT_DOUBLE_EQ(c.maxTime(2400 * 1.15), 0.35);
-    // Instantaneous at 12 × In ±10 %.
-    EXPECT_DOUBLE_EQ(c.maxTime(4800 * 1.15), 0.05);
+    // Long time: the delay band is stated at 6 × Ir and follows I²t = constant (common
+    // practice for electronic trips): at 4 × the nominal time is 10 s × (6/4)² = 22.5 s, and the
+    // band brackets it within the ±20 % a trip unit's tolerance allows.
+    const double nominal = 10.0 * (6.0 / 4.0) * (6.0 / 4.0);
+    EXPECT_LE(c.minTime(4 * 400), nominal);
+    EXPECT_GE(c.minTime(4 * 400), 0.8 * nominal - 1e-9);
+    EXPECT_GE(c.maxTime(4 * 400), nominal);
+    EXPECT_LE(c.maxTime(4 * 400), 1.2 * nominal + 1e-9);
+    // Short time: the set delay is the least time it waits; it has cleared within the band
+    // width a trip unit states above it (at most 0.1 s, common practice).
+    EXPECT_GE(c.minTime(2400 * 1.15), 0.3 - 1e-9);
+    EXPECT_LE(c.maxTime(2400 * 1.15), 0.3 + 0.1);
+    EXPECT_GT(c.minTime(2400 * 0.85), 1.0); // below the pickup tolerance: long time only
+    // Instantaneous at 12 × In: cleared within 3 cycles above its tolerance (common practice).
+    EXPECT_LE(c.maxTime(4800 * 1.15), 3.0 / 60.0);
 }
 
 TEST(BreakerCurve, ShortTimeI2tRamp) {
@@ -136,6 +146,7 @@ TEST(UserCurve, PointsReplaceTheGenericBand) {
     EXPECT_TRUE(bad.set("curve_points", std::string("150:100:300; 100:1:2"))); // falling currents
     EXPECT_TRUE(bad.set("curve_points", std::string("150:5:1; 300:1:2")));     // min > max
     EXPECT_TRUE(bad.set("curve_points", std::string("150;300")));
+    EXPECT_TRUE(bad.set("curve_points", std::string("150:1:2x; 300:0.1:0.2"))); // trailing text
     // Physical span: a point at 1e-300 A, 4.9e-324 s or 1e308 A is refused with the range.
     auto why = bad.set("curve_points", std::string("1e-300:1:2; 300:1:2"));
     ASSERT_TRUE(why);

@@ -62,6 +62,17 @@ TEST(HostileIds, HugeIdLoadsWithoutADenseTable) {
         << max64.error->message;
 }
 
+TEST(HostileKeys, AKeyWrittenWithEscapesIsLocatedAtItsOpeningQuote) {
+    // "\u0041bc" decodes to "Abc" (3 bytes) but takes 10 in the file: the error must point at
+    // the quote that opens it, not 7 columns to the right.
+    const std::string text = partsFile({motorJson(1, ",\"\\u0041bc\":1")});
+    auto r = io::parseDrawing(text, "t.lineward");
+    ASSERT_FALSE(r);
+    const std::size_t at = text.find("\"\\u0041bc\"");
+    const std::size_t lineStart = text.rfind('\n', at) + 1;
+    EXPECT_EQ(r.error->column, at - lineStart + 1) << r.error->text();
+}
+
 TEST(HostileKeys, AnUnknownKeyWithSlashOrTildeIsLocatedAtItself) {
     // RFC 6901 escapes in the error's path: the key "a/b~c" is found on its own line.
     const std::string text = partsFile({motorJson(2), motorJson(1, ",\"a/b~c\":1")});

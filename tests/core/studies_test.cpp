@@ -133,8 +133,13 @@ TEST(FaultStudy, ClosedTieDoublesOpenTieSeparates) {
 }
 
 TEST(FaultStudy, PeakFactorByIec60909) {
-    // IEC 60909-0, κ = 1.02 + 0.98·e^(−3R/X)
-    EXPECT_NEAR(peakFactor(1.0), 1.02 + 0.98 * std::exp(-3.0), 1e-12); // 1.0688
+    // κ read from the curve of κ against R/X in IEC 60909-0 (Figure 8 of the 2016 edition),
+    // to the two decimals a reading gives (from memory): R/X 0.1 → 1.75, 0.2 → 1.56,
+    // 0.3 → 1.42, 0.5 → 1.24, 1.0 → 1.07; κ tends to 2 as R → 0 and to 1.02 for large R/X.
+    const std::pair<double, double> readings[] = {
+        {0.1, 1.75}, {0.2, 1.56}, {0.3, 1.42}, {0.5, 1.24}, {1.0, 1.07}};
+    for (const auto& [rOverX, kappa] : readings)
+        EXPECT_NEAR(peakFactor(1.0 / rOverX), kappa, 0.01) << "R/X " << rOverX;
     EXPECT_NEAR(peakFactor(10.0), 1.746, 1e-3);
     EXPECT_NEAR(peakFactor(1e9), 2.0, 1e-6);
     EXPECT_NEAR(peakFactor(0.1), 1.02, 1e-6);

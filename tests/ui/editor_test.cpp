@@ -256,7 +256,12 @@ TEST(Editor, LargePlantIsCheckedOffTheGuiThread) {
     user.clickPart(w.document().drawing().partByTag("C-1-4")->id);
     user.type("size", "14 AWG", Commit::Enter);
     w.document().waitForCheck();
+    EXPECT_TRUE(w.document().lastCheckOffGuiThread()); // the window stayed free meanwhile
     EXPECT_NE(test::findingOf(w, "branch.conductor.ampacity"), nullptr);
+    // A small drawing is checked at once on the GUI thread (no hand-over worth its cost).
+    MainWindow small(sharedTables());
+    ASSERT_TRUE(small.openFile(test::samplePath("kestrel-mill-mcc1.lineward"), true).isEmpty());
+    EXPECT_FALSE(small.document().lastCheckOffGuiThread());
 }
 
 TEST(Editor, AutosaveWritesARecoveryCopyWithoutTouchingTheDocument) {

@@ -14,6 +14,7 @@
 #include <QFile>
 #include <QPrinter>
 #include <QProcess>
+#include <complex>
 #include <QXmlStreamReader>
 #include <gtest/gtest.h>
 #include <regex>
@@ -95,27 +96,50 @@ TEST(Submittal, PaperSizesAndOrientation) {
     EXPECT_FALSE(paperByName("b5").has_value());
 }
 
-TEST(Submittal, SchedulesCsvEqualsTheStudy) {
-    const Drawing d = sample("kestrel-mill-mcc1.lineward");
+TEST(Submittal, SchedulesCsvGivesTheHandCalculatedFault) {
+    // A 1000 kVA, 5.75 % transformer on a 100,000 MVA source: the fault at the cable's line end
+    // (the switchboard) by hand, in per unit on 100 MVA, compared with the exported CSV.
+    const std::string text = R"({
+  "format": "lineward",
+  "version": 1,
+  "parts": [
+    {"id":1,"kind":"source","tag":"U","kv":13.8,"fault_mva":100000,"x_over_r":15},
+    {"id":2,"kind":"transformer","tag":"T","kva":1000,"pri_v":13800,"sec_v":480,"z_pct":5.75,"x_over_r":6},
+    {"id":3,"kind":"bus","tag":"SB","bus_type":"switchboard","volts":480,"amps":1600,"bracing_ka":65,"phases":3},
+    {"id":4,"kind":"breaker","tag":"CB","trip_type":"thermal_magnetic","frame_a":100,"trip_a":60,"interrupting_ka":65},
+    {"id":5,"kind":"cable","tag":"C-1","material":"cu","size":"6 AWG","length_ft":100},
+    {"id":6,"kind":"load","tag":"L","kw":30,"pf":0.9,"volts":480,"phases":3}
+  ],
+  "wires": [
+    {"id":1,"from":"1.out","to":"2.pri"}, {"id":2,"from":"2.sec","to":"3.bar"},
+    {"id":3,"from":"3.bar","to":"4.line"}, {"id":4,"from":"4.load","to":"5.line"},
+    {"id":5,"from":"5.load","to":"6.in"}
+  ]
+}
+)";
+    auto loaded = io::parseDrawing(text, "hand.lineward");
+    ASSERT_TRUE(loaded) << loaded.error->text();
     const QString dir = test::tempDir("csv");
-    ASSERT_TRUE(writeScheduleCsvs(dir, *runCheck(d, *test::sharedTables())).isEmpty());
+    ASSERT_TRUE(writeScheduleCsvs(dir, *runCheck(*loaded.drawing, *test::sharedTables())).isEmpty());
     QFile f(dir + "/cables.csv");
     ASSERT_TRUE(f.open(QIODevice::ReadOnly));
     const QString csv = QString::fromUtf8(f.readAll());
     EXPECT_TRUE(csv.startsWith("Tag,Material,Size,Sets,Length ft"));
     EXPECT_TRUE(csv.contains("\r\n")); // RFC 4180 line ends
-    // The fault current at C-101's line end, from the study itself.
-    Network net(d);
-    Flow flow(net);
-    const auto study = runStudies(net, flow, *test::sharedTables(), d.settings);
-    const auto* fault = study.faultAtNode(flow.lineNode(d.partByTag("C-101")->id));
-    ASSERT_NE(fault, nullptr);
+    // By hand (the per-unit method of any short-circuit handbook): Z = |Z|∠atan(X/R) on 100 MVA.
+    auto z = [](double pu, double xr) { return std::polar(pu, std::atan(xr)); };
+    const std::complex<double> zSource = z(100.0 / 100000.0, 15);
+    const std::complex<double> zTx = z(0.0575 * 100.0 / 1.0, 6);
+    const double baseA = 100e6 / (std::sqrt(3.0) * 480.0);
+    // 20.92 kA on an infinite bus (1000 kVA / (√3 · 0.48 kV · 0.0575)); 20.91 with the source.
+    const double handKa = baseA / std::abs(zSource + zTx) / 1000.0;
+    ASSERT_NEAR(handKa, 20.915, 0.001);
     QString row;
     for (const auto& line : csv.split("\r\n"))
-        if (line.startsWith("C-101,"))
+        if (line.startsWith("C-1,"))
             row = line;
     ASSERT_FALSE(row.isEmpty());
-    EXPECT_DOUBLE_EQ(row.split(',').last().toDouble(), std::round(fault->ikKa * 100) / 100);
+    EXPECT_NEAR(row.split(',').last().toDouble(), handKa, 0.006); // printed to 0.01 kA
     // Quoting: a field with a comma is quoted and its quotes doubled.
     Schedule s{"t", {"a", "b"}, {{"x,y", "say \"hi\""}}};
     EXPECT_EQ(toCsv(s), "a,b\r\n\"x,y\",\"say \"\"hi\"\"\"\r\n");
