@@ -85,14 +85,6 @@ FindingsPanel::FindingsPanel(Document& doc, QWidget* parent)
     refresh();
 }
 
-void FindingsPanel::setSeverityFilter(std::optional<Severity> s) {
-    m_severity->setCurrentIndex(!s ? 0 : *s == Severity::Violation ? 1 : 2);
-}
-
-void FindingsPanel::setRuleFilter(const QString& text) {
-    m_rule->setText(text);
-}
-
 const Finding* FindingsPanel::current() const {
     auto* item = m_list->currentItem();
     if (!item)

@@ -21,9 +21,6 @@ public:
     QTreeWidget* list() const { return m_list; }
     /// The finding shown in the selected row, if any.
     const Finding* current() const;
-    /// Shows only findings at or above this severity (nothing: all).
-    void setSeverityFilter(std::optional<Severity> s);
-    void setRuleFilter(const QString& text);
 
 signals:
     void locatePart(lineward::PartId id);

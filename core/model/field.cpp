@@ -154,14 +154,4 @@ std::optional<std::string> validateField(const FieldSpec& spec, const FieldValue
     return std::nullopt;
 }
 
-std::string describeValue(const FieldSpec& spec, const FieldValue& value) {
-    if (auto d = std::get_if<double>(&value))
-        return withUnit(spec, *d);
-    if (auto b = std::get_if<bool>(&value))
-        return *b ? "yes" : "no";
-    if (auto s = std::get_if<std::string>(&value))
-        return *s;
-    return "(none)";
-}
-
 } // namespace lineward

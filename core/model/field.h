@@ -53,7 +53,5 @@ std::optional<std::string> validateField(const FieldSpec& spec, const FieldValue
 /// (messages and the Inspector; the file writer formats its own numbers).
 std::string formatNumber(double v);
 
-/// The value as people read it, with its unit.
-std::string describeValue(const FieldSpec& spec, const FieldValue& value);
 
 } // namespace lineward

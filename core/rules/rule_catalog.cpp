@@ -37,12 +37,6 @@ std::optional<RuleId> RuleId::find(std::string_view id) {
     return std::nullopt;
 }
 
-const RuleInfo& ruleInfo(std::string_view id) {
-    if (auto r = RuleId::find(id))
-        return r->info();
-    throw std::out_of_range("unknown rule id " + std::string(id));
-}
-
 Finding makeFinding(RuleId rule, std::vector<PartId> parts, std::string message) {
     const auto& info = rule.info();
     Finding f;

@@ -33,8 +33,6 @@ private:
 };
 
 std::span<const RuleInfo> ruleCatalog();
-/// The rule with this id; throws std::out_of_range for an unknown id.
-const RuleInfo& ruleInfo(std::string_view id);
 
 /// A finding pre-filled from the catalogue.
 Finding makeFinding(RuleId rule, std::vector<PartId> parts, std::string message);
