@@ -19,33 +19,32 @@ namespace lineward::ui {
 namespace {
 // The check never ends the program, on the GUI thread or a worker: an exception that escapes
 // the core (which already turns a failing rule family into a finding) becomes a finding too.
+// A result holding only the finding that says the check stopped, and why.
+std::shared_ptr<const CheckResult> stoppedCheck(std::shared_ptr<const Drawing> d,
+                                                const Tables& tables, quint64 generation,
+                                                const std::string& why) {
+    spdlog::error("check failed: {}", why);
+    auto r = std::make_shared<CheckResult>();
+    r->drawing = std::move(d);
+    r->tables = &tables;
+    r->generation = generation;
+    r->report.findings.push_back(makeFinding("check.incomplete", {}, "the check stopped: " + why));
+    r->report.openCounts[static_cast<std::size_t>(Severity::Violation)] = 1;
+    return r;
+}
+
 std::shared_ptr<const CheckResult> checkSafely(std::shared_ptr<const Drawing> d,
                                                const Tables& tables, quint64 generation) {
     try {
         return runCheck(d, tables, generation);
     } catch (const std::exception& e) {
-        spdlog::error("check failed: {}", e.what());
-        auto r = std::make_shared<CheckResult>();
-        r->drawing = std::move(d);
-        r->tables = &tables;
-        r->generation = generation;
-        r->report.findings.push_back(
-            makeFinding("check.incomplete", {}, std::string("the check stopped: ") + e.what()));
-        r->report.openCounts[static_cast<std::size_t>(Severity::Violation)] = 1;
-        return r;
+        return stoppedCheck(std::move(d), tables, generation, e.what());
     } catch (...) {
         // Not a std::exception: still never let it end a worker thread (std::terminate).
-        spdlog::error("check failed with an unknown exception");
-        auto r = std::make_shared<CheckResult>();
-        r->drawing = std::move(d);
-        r->tables = &tables;
-        r->generation = generation;
-        r->report.findings.push_back(
-            makeFinding("check.incomplete", {}, "the check stopped on an unknown error"));
-        r->report.openCounts[static_cast<std::size_t>(Severity::Violation)] = 1;
-        return r;
+        return stoppedCheck(std::move(d), tables, generation, "an unknown error");
     }
 }
+
 // A drawing's own path is kept absolute: the recovery slot records it, and a recovered drawing
 // opened from another folder must save to the file it came from, not to a namesake there.
 QString absolute(const QString& path) {

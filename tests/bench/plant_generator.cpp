@@ -4,6 +4,7 @@
 
 #include <array>
 #include <string>
+#include <vector>
 
 namespace lineward::bench {
 
@@ -25,8 +26,8 @@ constexpr std::array<MotorRow, 6> kMotors{{{5, 7.6, 20, "0", "12 AWG"},
 class Builder {
 public:
     explicit Builder(Drawing& d) : m_d(d) {}
-    PartId add(PartKind k, std::string tag, double x, double y,
-               std::initializer_list<std::pair<const char*, FieldValue>> v) {
+    using Ratings = std::vector<std::pair<const char*, FieldValue>>;
+    PartId add(PartKind k, std::string tag, double x, double y, const Ratings& v) {
         Part p = Part::make(k, m_d.nextPartId(), std::move(tag));
         p.x = x;
         p.y = y;
@@ -43,20 +44,25 @@ private:
     Drawing& m_d;
 };
 
+// A 500 A electronic-trip feeder breaker (the tie breaker is rated the same).
+Builder::Ratings feederBreaker() {
+    return {{"trip_type", std::string("electronic")},
+            {"trip_a", 500.0},
+            {"frame_a", 600.0},
+            {"interrupting_ka", 65.0},
+            {"let_through_a2s", 5e6},
+            {"lt_delay_s", 10.0},
+            {"st_pickup_x", 8.0},
+            {"st_delay_s", 0.2}};
+}
+
 // Tie breaker and tie cable between two switchboards, rated like a feeder. Through a cable
 // rather than bolted bus to bus: a zero-impedance tie would merge the two switchboards into one
 // solve bus, and the loop would reduce to two transformers in parallel.
 void addTie(Builder& b, const std::string& n, double x0, PartId left, PartId right, bool open) {
-    auto cb = b.add(PartKind::Breaker, "CB-T" + n, x0 - 55, 150,
-                    {{"trip_type", std::string("electronic")},
-                     {"trip_a", 500.0},
-                     {"frame_a", 600.0},
-                     {"interrupting_ka", 65.0},
-                     {"let_through_a2s", 5e6},
-                     {"lt_delay_s", 10.0},
-                     {"st_pickup_x", 8.0},
-                     {"st_delay_s", 0.2},
-                     {"open", open}});
+    Builder::Ratings tie = feederBreaker();
+    tie.push_back({"open", open});
+    auto cb = b.add(PartKind::Breaker, "CB-T" + n, x0 - 55, 150, tie);
     auto c = b.add(PartKind::Cable, "C-T" + n, x0 - 30, 150,
                    {{"size", std::string("250 kcmil")}, {"sets", 2.0}, {"length_ft", 60.0}});
     b.wire(left, 0, cb, 0);
@@ -90,15 +96,7 @@ Drawing makePlant(int parts, int bucketsPerLineup, Ties ties) {
                            {"st_delay_s", 0.4}});
         auto swbd = b.add(PartKind::Bus, "SWBD-" + n, x0, 150,
                           {{"volts", 480.0}, {"amps", 800.0}, {"bracing_ka", 65.0}});
-        auto feeder = b.add(PartKind::Breaker, "CB-F" + n, x0, 210,
-                            {{"trip_type", std::string("electronic")},
-                             {"trip_a", 500.0},
-                             {"frame_a", 600.0},
-                             {"interrupting_ka", 65.0},
-                             {"let_through_a2s", 5e6},
-                             {"lt_delay_s", 10.0},
-                             {"st_pickup_x", 8.0},
-                             {"st_delay_s", 0.2}});
+        auto feeder = b.add(PartKind::Breaker, "CB-F" + n, x0, 210, feederBreaker());
         auto fc = b.add(PartKind::Cable, "C-F" + n, x0, 260,
                         {{"size", std::string("250 kcmil")}, {"sets", 2.0}, {"length_ft", 100.0}});
         auto mcc = b.add(PartKind::Bus, "MCC-" + n, x0, 320,
