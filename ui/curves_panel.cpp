@@ -22,7 +22,20 @@ void CurvesPanel::showPart(std::optional<PartId> id) {
     refresh();
 }
 
+void CurvesPanel::showEvent(QShowEvent* e) {
+    QWidget::showEvent(e);
+    if (m_stale)
+        runGuarded(this, tr("Drawing the curves"), [this] { rebuild(); });
+}
+
 void CurvesPanel::refresh() {
+    m_stale = true;
+    if (isVisible())
+        rebuild();
+}
+
+void CurvesPanel::rebuild() {
+    m_stale = false;
     // Read from the newest check result (its own drawing: a part added since is not in it yet).
     const CheckResult& result = m_doc.result();
     const auto view = result.view();

@@ -18,9 +18,13 @@ public:
 
 protected:
     void paintEvent(QPaintEvent* e) override;
+    void showEvent(QShowEvent* e) override;
 
 private:
+    /// Builds the curve set when the panel is shown; while hidden, only notes it is stale.
     void refresh();
+    void rebuild();
+    bool m_stale = true;
     Document& m_doc;
     std::optional<PartId> m_part;
     CurveSet m_set;

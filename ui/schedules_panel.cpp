@@ -1,4 +1,4 @@
-// SchedulesPanel: rebuilt from the core's schedules after each check.
+// SchedulesPanel: rebuilt from the check result's schedules after each check, when shown.
 #include "schedules_panel.h"
 
 #include "guard.h"
@@ -16,7 +16,20 @@ SchedulesPanel::SchedulesPanel(Document& doc, QWidget* parent) : QTabWidget(pare
     refresh();
 }
 
+void SchedulesPanel::showEvent(QShowEvent* e) {
+    QTabWidget::showEvent(e);
+    if (m_stale)
+        runGuarded(this, tr("Building the schedules"), [this] { rebuild(); });
+}
+
 void SchedulesPanel::refresh() {
+    m_stale = true;
+    if (isVisible())
+        rebuild();
+}
+
+void SchedulesPanel::rebuild() {
+    m_stale = false;
     const int current = currentIndex();
     while (count() > 0) {
         QWidget* w = widget(0);

@@ -12,9 +12,16 @@ class SchedulesPanel : public QTabWidget {
 public:
     explicit SchedulesPanel(Document& doc, QWidget* parent = nullptr);
 
+protected:
+    void showEvent(QShowEvent* e) override;
+
 private:
+    /// Rebuilds the tables when the panel is shown; while hidden, only notes they are stale
+    /// (a hidden tab costs nothing per edit).
     void refresh();
+    void rebuild();
     Document& m_doc;
+    bool m_stale = true;
 };
 
 } // namespace lineward::ui

@@ -59,6 +59,7 @@ TEST(CurvesPlot, PanelFollowsTheSelection) {
     test::User user(w);
     const Part* cb = w.document().drawing().partByTag("CB-107");
     user.clickPart(cb->id); // a click on the Sheet, as a person selects it
+    user.showPanel("Curves");
     ASSERT_FALSE(w.curves()->curveSet().series.empty());
     EXPECT_NE(w.curves()->curveSet().title.find("CB-107"), std::string::npos);
 }

@@ -10,6 +10,7 @@
 #include <QApplication>
 #include <QGraphicsView>
 #include <QLabel>
+#include <QTableWidget>
 #include <QTreeWidget>
 #include <gtest/gtest.h>
 
@@ -71,4 +72,23 @@ TEST(MainWindow, BrokenFileGivesLocatedMessageAndKeepsDrawing) {
     user.press(Qt::Key_O, Qt::ControlModifier); // File → Open, README.md typed in the dialog
     EXPECT_TRUE(why.contains("README.md:1:")) << why.toStdString();
     EXPECT_EQ(w.document().drawing().parts().size(), parts);
+}
+
+TEST(MainWindow, SchedulesShownAfterEditsHoldTheNewValues) {
+    // While its tab is hidden the Schedules panel does no work per edit; brought up, it shows
+    // the newest check's values.
+    MainWindow w(sharedTables());
+    ASSERT_TRUE(w.openFile(sample("kestrel-mill-mcc1.lineward"), true).isEmpty());
+    test::User user(w);
+    user.clickPart(w.document().drawing().partByTag("OL-101")->id);
+    user.type("setting_a", "33.5", test::Commit::Enter);
+    user.showPanel("Schedules");
+    auto* motors = w.findChild<QTableWidget*>("schedule_motors");
+    ASSERT_NE(motors, nullptr);
+    ASSERT_TRUE(motors->isVisible());
+    bool shown = false;
+    for (int r = 0; r < motors->rowCount(); ++r)
+        if (motors->item(r, 0)->text() == "P-101")
+            shown = motors->item(r, 7)->text() == "33.5"; // the Overload A column
+    EXPECT_TRUE(shown);
 }

@@ -18,6 +18,7 @@
 #include <QLineEdit>
 #include <QMimeData>
 #include <QPushButton>
+#include <QTabBar>
 #include <QTest>
 #include <QTimer>
 #include <QTreeWidget>
@@ -229,6 +230,17 @@ void User::clickApplyFix() {
     ASSERT_TRUE(button->isEnabled());
     QTest::mouseClick(button, Qt::LeftButton);
     settle();
+}
+
+void User::showPanel(const QString& title) {
+    for (auto* bar : m_w.findChildren<QTabBar*>())
+        for (int i = 0; i < bar->count(); ++i)
+            if (bar->tabText(i).remove('&') == title) {
+                QTest::mouseClick(bar, Qt::LeftButton, {}, bar->tabRect(i).center());
+                settle();
+                return;
+            }
+    ADD_FAILURE() << "no panel tab " << title.toStdString();
 }
 
 void User::press(Qt::Key key, Qt::KeyboardModifiers mods) {

@@ -45,6 +45,8 @@ public:
     /// What the Inspector's message line shows.
     QString inspectorMessage() const;
 
+    /// Clicks the tab of a docked panel ("Findings", "Schedules", "Curves") to bring it up.
+    void showPanel(const QString& title);
     /// Clicks the first row of the Findings list whose rule column is `rule`; false if none.
     bool clickFinding(const QString& rule);
     /// Clicks the Findings panel's Apply fix button.
