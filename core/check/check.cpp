@@ -86,8 +86,7 @@ template <typename Fn> void runStage(const char* family, std::vector<Finding>& o
 
 void computeMotorFacts(CheckResult& r, const StudyView& view) {
     for (const auto& b : r.branches) {
-        MotorFacts m{b, motorFlc(*b.motor, *r.tables, false), startProfile(view, *b.motor),
-                     devicesOnPath(view, b.motor->id)};
+        MotorFacts m{b, motorFlc(*b.motor, *r.tables, false), startProfile(view, *b.motor)};
         r.motors.push_back(std::move(m));
     }
 }

@@ -37,12 +37,11 @@ struct CheckReport {
 };
 
 /// What the check computed for one motor, once: its branch, full-load current (NEC Table
-/// 430.250/430.248, no trace text), starting profile and the protective devices on its path.
+/// 430.250/430.248, no trace text) and starting profile.
 struct MotorFacts {
     MotorBranch branch;
     std::optional<MotorFlc> flc;
     std::optional<StartProfile> start;
-    std::vector<PathDevice> devices; ///< nearest the motor first, to the source
 };
 
 /// One analysis of one drawing: immutable once made, shared read-only by every consumer. Each

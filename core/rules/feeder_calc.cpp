@@ -5,11 +5,11 @@
 
 namespace lineward {
 
-MotorFactMap motorFacts(const RuleContext& ctx, const std::vector<MotorBranch>& branches) {
-    MotorFactMap m;
+FeederMotorMap feederMotors(const RuleContext& ctx, const std::vector<MotorBranch>& branches) {
+    FeederMotorMap m;
     for (const auto& b : branches)
         if (auto flc = motorFlc(*b.motor, ctx.tables, false))
-            m[b.motor->id] = MotorFacts{flc->amps, b.scpd};
+            m[b.motor->id] = FeederMotor{flc->amps, b.scpd};
     return m;
 }
 
@@ -21,7 +21,7 @@ double voltageRatio(const RuleContext& ctx, PartId load, NodeIndex from) {
 }
 } // namespace
 
-FeederLoad feederLoad(const RuleContext& ctx, const MotorFactMap& motors, NodeIndex from) {
+FeederLoad feederLoad(const RuleContext& ctx, const FeederMotorMap& motors, NodeIndex from) {
     FeederLoad l;
     std::vector<std::pair<double, PartId>> flcs;
     for (auto id : ctx.flow.loadsBelow(from)) {
@@ -66,7 +66,7 @@ std::vector<TraceStep> FeederLoad::trace(const RuleContext& ctx) const {
     return t;
 }
 
-FeederDeviceLimit feederDeviceLimit(const RuleContext& ctx, const MotorFactMap& motors,
+FeederDeviceLimit feederDeviceLimit(const RuleContext& ctx, const FeederMotorMap& motors,
                                     NodeIndex from, ScpdType feederType) {
     FeederDeviceLimit r;
     double sumFlc = 0, bestExtra = 0, bestRating = -1, other = 0;

@@ -23,15 +23,15 @@ struct FeederLoad {
     std::vector<TraceStep> trace(const RuleContext& ctx) const;
 };
 
-/// Per-motor facts the feeder rules need.
-struct MotorFacts {
+/// Per-motor values the feeder rules sum (named apart from the check result's MotorFacts).
+struct FeederMotor {
     double flc = 0;
     const Part* scpd = nullptr;
 };
-using MotorFactMap = std::unordered_map<PartId, MotorFacts>;
-MotorFactMap motorFacts(const RuleContext& ctx, const std::vector<MotorBranch>& branches);
+using FeederMotorMap = std::unordered_map<PartId, FeederMotor>;
+FeederMotorMap feederMotors(const RuleContext& ctx, const std::vector<MotorBranch>& branches);
 
-FeederLoad feederLoad(const RuleContext& ctx, const MotorFactMap& motors, NodeIndex from);
+FeederLoad feederLoad(const RuleContext& ctx, const FeederMotorMap& motors, NodeIndex from);
 
 /// 430.62(A) (with 430.63 for other loads): largest branch device + other motors' FLC + other
 /// loads, rounded down to a standard rating. Instantaneous breakers count at the Table 430.52
@@ -40,7 +40,7 @@ struct FeederDeviceLimit {
     double rawA = 0, maxA = 0;
     std::vector<TraceStep> trace;
 };
-FeederDeviceLimit feederDeviceLimit(const RuleContext& ctx, const MotorFactMap& motors,
+FeederDeviceLimit feederDeviceLimit(const RuleContext& ctx, const FeederMotorMap& motors,
                                     NodeIndex from, ScpdType feederType);
 
 } // namespace lineward

@@ -12,7 +12,7 @@ namespace {
 
 struct FeederCheck {
     const RuleContext& ctx;
-    MotorFactMap motors;
+    FeederMotorMap motors;
     std::unordered_set<PartId> branchParts; // parts inside a motor branch (Article 430 applies)
     std::vector<Finding>& out;
 };
@@ -149,12 +149,12 @@ void busLoad(FeederCheck& c, const Part& bus) {
 
 } // namespace
 
-void checkTransformers(const RuleContext& ctx, const MotorFactMap& motors,
+void checkTransformers(const RuleContext& ctx, const FeederMotorMap& motors,
                        std::vector<Finding>& out);
 
 void checkFeeders(const RuleContext& ctx, std::vector<Finding>& out) {
     const auto& branches = ctx.branches;
-    FeederCheck c{ctx, motorFacts(ctx, branches), {}, out};
+    FeederCheck c{ctx, feederMotors(ctx, branches), {}, out};
     for (const auto& b : branches)
         for (const Part* p : b.chain)
             c.branchParts.insert(p->id);

@@ -95,7 +95,7 @@ void protection(const RuleContext& ctx, const Part& tx, std::vector<Finding>& ou
     out.push_back(std::move(f));
 }
 
-void loading(const RuleContext& ctx, const MotorFactMap& motors, const Part& tx,
+void loading(const RuleContext& ctx, const FeederMotorMap& motors, const Part& tx,
              std::vector<Finding>& out) {
     const double kva = tx.number("kva").value_or(0), sv = tx.number("sec_v").value_or(0);
     const double rated = kva * 1000.0 / (std::sqrt(3.0) * sv);
@@ -118,7 +118,7 @@ void loading(const RuleContext& ctx, const MotorFactMap& motors, const Part& tx,
 
 } // namespace
 
-void checkTransformers(const RuleContext& ctx, const MotorFactMap& motors,
+void checkTransformers(const RuleContext& ctx, const FeederMotorMap& motors,
                        std::vector<Finding>& out) {
     for (const auto& p : ctx.drawing.parts()) {
         if (p.kind != PartKind::Transformer || !ctx.net.partEnergized(p.id))
