@@ -13,8 +13,8 @@ namespace lineward::cli {
 namespace {
 
 struct SizeArgs {
-    std::optional<double> hp, kw, fla, ambientC, accelS;
-    double volts = 0, sf = 1.0;
+    std::optional<double> hp, kw, fla, ambientC, accelS, sf; // sf: the motor's field default
+    double volts = 0;
     int phases = 3, conductors = 3, insulationC = 90;
     std::optional<int> terminationC;
     std::string design = "B", codeLetter, material = "cu", device = "itb", rotor = "squirrel_cage";
@@ -34,20 +34,20 @@ ScpdType deviceFrom(const std::string& s) {
 // Builds the motor through the same validation as the file and the Inspector.
 std::optional<Part> motorFrom(const SizeArgs& a, std::string& why) {
     Part m = Part::make(PartKind::Motor, PartId(1), "M");
-    std::vector<std::pair<const char*, FieldValue>> sets{
-        {"volts", a.volts}, {"phases", static_cast<double>(a.phases)},
-        {"sf", a.sf},       {"design", a.design},
-        {"rotor", a.rotor}, {"premium_eff", a.premium}};
-    if (a.accelS)
-        sets.push_back({"accel_s", *a.accelS});
-    if (a.hp)
-        sets.push_back({"hp", *a.hp});
-    if (a.kw)
-        sets.push_back({"kw", *a.kw});
-    if (a.fla)
-        sets.push_back({"fla", *a.fla});
+    using R = MotorRatings;
+    std::vector<std::pair<std::string_view, FieldValue>> sets{
+        {R::kVolts, a.volts},
+        {R::kPhases, static_cast<double>(a.phases)},
+        {R::kDesign, a.design},
+        {R::kRotor, a.rotor},
+        {R::kPremiumEff, a.premium}};
+    for (const auto& [key, value] :
+         {std::pair{R::kSf, a.sf}, std::pair{R::kAccelS, a.accelS}, std::pair{R::kHp, a.hp},
+          std::pair{R::kKw, a.kw}, std::pair{R::kFla, a.fla}})
+        if (value)
+            sets.push_back({key, *value});
     if (!a.codeLetter.empty())
-        sets.push_back({"code_letter", a.codeLetter});
+        sets.push_back({R::kCodeLetter, a.codeLetter});
     for (auto& [k, v] : sets)
         if (auto err = m.set(k, v)) {
             why = *err;
@@ -133,9 +133,12 @@ void addSizeCommand(CLI::App& app, const TablesRef& tables, int& exitCode) {
     cmd->add_option("--phases", a->phases, "1 or 3 (default 3)")->check(CLI::IsMember({1, 3}));
     cmd->add_option("--fla", a->fla,
                     "nameplate full-load current (A); sizes the overload relay (430.6(A)(2))");
+    const double sfDefault =
+        std::get<double>(findField(PartKind::Motor, MotorRatings::kSf)->defaultValue);
     cmd->add_option("--sf", a->sf,
-                    "service factor (default 1.0: the 115 % overload limit of 430.32(A)(1) "
-                    "unless 1.15 or more is given)");
+                    "service factor (default " + formatNumber(sfDefault) +
+                        ", as for a motor drawn on the Sheet; below 1.15 the overload limit of "
+                        "430.32(A)(1) is 115 %, else 125 %)");
     cmd->add_option("--design", a->design, "NEMA design letter A-E (default B)");
     cmd->add_option("--rotor", a->rotor, "squirrel_cage (default), wound_rotor or synchronous")
         ->check(CLI::IsMember({"squirrel_cage", "wound_rotor", "synchronous"}));

@@ -49,6 +49,17 @@ if(NOT flc EQUAL 34 OR NOT size STREQUAL "8 AWG" OR NOT itb EQUAL 90 OR NOT inst
    OR NOT tdf EQUAL 60 OR NOT ntdf EQUAL 110 OR NOT nema STREQUAL "2")
   message(FATAL_ERROR "size --hp 25 --volts 460 gave unexpected values:\n${LAST_OUT}")
 endif()
+# The service factor not given is the motor's own default (the field table's 1.15, as on the
+# Sheet): 430.32(A)(1) allows 125 % × 32 A = 40 A; --sf 1.0 gives 115 % = 36.8 A.
+string(JSON olmax GET "${LAST_OUT}" overload_max_a)
+if(NOT olmax MATCHES "^40(\\.0*)?$")
+  message(FATAL_ERROR "size without --sf: overload_max_a ${olmax}, expected 40")
+endif()
+expect_exit(0 ${CLI} size --hp 25 --volts 460 --fla 32 --sf 1.0 --json)
+string(JSON olmax GET "${LAST_OUT}" overload_max_a)
+if(NOT olmax MATCHES "^36\\.(8|79999)")
+  message(FATAL_ERROR "size --sf 1.0: overload_max_a ${olmax}, expected 36.8")
+endif()
 expect_exit(0 ${CLI} size --kw 15 --volts 460)
 # 400 V is no column of Table 430.250: the nameplate current is needed, else exit 2.
 expect_exit(2 ${CLI} size --kw 11 --volts 400)

@@ -3,6 +3,7 @@
 // square for a breaker, a rectangle for a fuse, a heater loop for a thermal overload.
 #include "part_item.h"
 
+#include "model/ratings.h"
 #include "plain_text.h"
 #include "severity_style.h"
 
@@ -52,9 +53,11 @@ QFont labelFont(bool bold) {
     return f;
 }
 
-QString num(const Part& p, const char* key, const char* unit) {
-    auto v = p.number(key);
+QString num(std::optional<double> v, const char* unit) {
     return v ? QString::fromStdString(formatNumber(*v)) + unit : QString();
+}
+QString text(const std::string& s) {
+    return QString::fromStdString(s);
 }
 } // namespace
 
@@ -212,40 +215,62 @@ QRectF PartItem::footprintSceneRect() const {
 }
 
 QString PartItem::ratingText() const {
-    const Part& p = m_part;
+    try {
+        return ratingTextOf(m_part);
+    } catch (const std::logic_error&) {
+        return QStringLiteral("?"); // a value no file or edit can make; never throw from paint
+    }
+}
+
+QString PartItem::ratingTextOf(const Part& p) {
     switch (p.kind) {
-    case PartKind::Source:
-        return num(p, "kv", " kV") + "  " +
-               (p.number("fault_ka") ? num(p, "fault_ka", " kA") : num(p, "fault_mva", " MVA"));
-    case PartKind::Transformer:
-        return num(p, "kva", " kVA") + "  " + num(p, "z_pct", " %Z");
-    case PartKind::Bus:
-        return num(p, "volts", " V") + "  " + num(p, "amps", " A") + "  " +
-               num(p, "bracing_ka", " kA");
-    case PartKind::Breaker:
-        return num(p, "trip_a", " AT") + "  " + num(p, "interrupting_ka", " kA");
-    case PartKind::InstBreaker:
-        return num(p, "amps", " A") + "  " + num(p, "pickup_a", " A inst");
-    case PartKind::Fuse:
-        return num(p, "amps", " A") + "  " +
-               QString::fromStdString(p.word("fuse_type").value_or("")).replace('_', '-');
+    case PartKind::Source: {
+        const auto r = SourceRatings::of(p);
+        return num(r.kv, " kV") + "  " +
+               (r.faultKa ? num(r.faultKa, " kA") : num(r.faultMva, " MVA"));
+    }
+    case PartKind::Transformer: {
+        const auto r = TransformerRatings::of(p);
+        return num(r.kva, " kVA") + "  " + num(r.zPct, " %Z");
+    }
+    case PartKind::Bus: {
+        const auto r = BusRatings::of(p);
+        return num(r.volts, " V") + "  " + num(r.amps, " A") + "  " + num(r.bracingKa, " kA");
+    }
+    case PartKind::Breaker: {
+        const auto r = BreakerRatings::of(p);
+        return num(r.tripA, " AT") + "  " + num(r.interruptingKa, " kA");
+    }
+    case PartKind::InstBreaker: {
+        const auto r = InstBreakerRatings::of(p);
+        return num(r.amps, " A") + "  " + num(r.pickupA, " A inst");
+    }
+    case PartKind::Fuse: {
+        const auto r = FuseRatings::of(p);
+        return num(r.amps, " A") + "  " + (r.type == FuseType::Fast ? "fast" : "time-delay");
+    }
     case PartKind::Disconnect:
-        return num(p, "amps", " A");
-    case PartKind::Contactor:
-        return p.word("nema_size") ? "NEMA " + QString::fromStdString(*p.word("nema_size"))
-                                   : num(p, "ac3_a", " A AC-3");
-    case PartKind::Overload:
-        return num(p, "setting_a", " A") + "  cl " +
-               QString::fromStdString(p.word("trip_class").value_or(""));
-    case PartKind::Cable:
-        return QString::fromStdString(p.word("size").value_or("")) + "  " +
-               num(p, "length_ft", " ft");
-    case PartKind::Motor:
-        return (p.number("hp") ? num(p, "hp", " hp") : num(p, "kw", " kW")) + "  " +
-               num(p, "volts", " V");
-    case PartKind::Load:
-        return (p.number("kva") ? num(p, "kva", " kVA") : num(p, "kw", " kW")) + "  " +
-               num(p, "volts", " V");
+        return num(DisconnectRatings::of(p).amps, " A");
+    case PartKind::Contactor: {
+        const auto r = ContactorRatings::of(p);
+        return r.nemaSize ? "NEMA " + text(*r.nemaSize) : num(r.ac3A, " A AC-3");
+    }
+    case PartKind::Overload: {
+        const auto r = OverloadRatings::of(p);
+        return num(r.settingA, " A") + "  cl " + text(r.tripClass);
+    }
+    case PartKind::Cable: {
+        const auto r = CableRatings::of(p);
+        return text(r.size) + "  " + num(r.lengthFt, " ft");
+    }
+    case PartKind::Motor: {
+        const auto r = MotorRatings::of(p);
+        return (r.hp ? num(r.hp, " hp") : num(r.kw, " kW")) + "  " + num(r.volts, " V");
+    }
+    case PartKind::Load: {
+        const auto r = LoadRatings::of(p);
+        return (r.kva ? num(r.kva, " kVA") : num(r.kw, " kW")) + "  " + num(r.volts, " V");
+    }
     }
     return {};
 }

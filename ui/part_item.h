@@ -55,6 +55,7 @@ protected:
 
 private:
     QString ratingText() const;
+    static QString ratingTextOf(const Part& p);
     void paintSymbol(QPainter* p) const;
     void paintLabel(QPainter* p) const;
     void paintBadge(QPainter* p) const;

@@ -2,6 +2,7 @@
 #include "curves/curve_set.h"
 
 #include "curves/path_curves.h"
+#include "model/ratings.h"
 
 #include <algorithm>
 #include <cmath>
@@ -79,8 +80,9 @@ void addMotorSeries(CurveSet& set, const Part& motor, const StartProfile& prof) 
     // The motor's safe stall times at locked-rotor current, as markers.
     PlotSeries stall{
         PlotSeries::Kind::StallPoints, motor.tag + " safe stall (hot, cold)", {}, {}, {}};
-    for (const char* key : {"stall_hot_s", "stall_cold_s"})
-        if (auto t = motor.number(key)) {
+    const auto m = MotorRatings::of(motor);
+    for (const auto& stallS : {m.stallHotS, m.stallColdS})
+        if (auto t = stallS) {
             stall.amps.push_back(prof.lockedRotorA);
             stall.minS.push_back(*t);
             stall.maxS.push_back(*t);
@@ -101,7 +103,7 @@ void addDamageCurve(CurveSet& set, const StudyView& ctx, const Part& part) {
         const double v = *i2t;
         set.series.push_back(sampled(
             set, PlotSeries::Kind::DamageCurve,
-            cable->tag + " damage (" + cable->word("size").value_or("") + ")", [&](double a) {
+            cable->tag + " damage (" + CableRatings::of(*cable).size + ")", [&](double a) {
                 const double tt = v / (a * a);
                 return tt > 10 || tt < 0.01 ? std::pair{kNoTrip, kNoTrip} : std::pair{tt, tt};
             }));

@@ -1,6 +1,7 @@
 // Path collection walks the supply tree upward; profiles come from sizing and the studies.
 #include "curves/path_curves.h"
 
+#include "model/ratings.h"
 #include "sizing/motor_sizing.h"
 
 #include <cmath>
@@ -43,7 +44,8 @@ std::vector<PathDevice> devicesOnPath(const StudyView& ctx, PartId id, PathExten
 
 std::optional<StartProfile> startProfile(const StudyView& ctx, const Part& m) {
     auto flc = motorFlc(m, ctx.tables, false);
-    const double running = m.number("fla").value_or(flc ? flc->amps : 0);
+    const auto motor = MotorRatings::of(m);
+    const double running = motor.fla ? *motor.fla : flc ? flc->amps : 0; // 0: nothing to run on
     if (running <= 0)
         return std::nullopt;
     StartProfile s;
@@ -54,14 +56,15 @@ std::optional<StartProfile> startProfile(const StudyView& ctx, const Part& m) {
     s.lraAssumed = lr->assumed;
     s.lockedRotorA = lr->amps;
     s.asymA = lr->amps * ctx.settings().asymmetryFactor;
-    s.accelS = m.number("accel_s").value_or(5);
+    s.accelS = motor.accelS;
     return s;
 }
 
-std::optional<double> cableDamageI2t(const StudyView& ctx, const Part& c) {
-    const auto size = c.word("size").value_or("");
-    const double ins = c.number("insulation_c").value_or(90), sets = c.number("sets").value_or(1);
-    const bool al = c.word("material").value_or("cu") == "al";
+std::optional<double> cableDamageI2t(const StudyView& ctx, const Part& cable) {
+    const auto c = CableRatings::of(cable);
+    const std::string& size = c.size;
+    const double ins = c.insulationC, sets = c.sets;
+    const bool al = c.material == Material::Al;
     double perSet = 0;
     if (size.ends_with(" mm2")) {
         const double k =

@@ -3,6 +3,7 @@
 #include "curves/trip_curve.h"
 
 #include "model/field.h"
+#include "model/ratings.h"
 
 #include <algorithm>
 #include <cmath>
@@ -46,41 +47,49 @@ double TripCurve::thermalTime200(double ratingA) {
 
 TripCurve TripCurve::ofBreaker(const Part& p) {
     TripCurve c;
-    c.m_ratingA = p.number("trip_a").value_or(100);
-    if (p.word("trip_type").value_or("") == "electronic") {
+    const auto b = BreakerRatings::of(p);
+    c.m_ratingA = b.tripA;
+    const auto assumed = [](bool given) { return given ? "" : " (assumed)"; };
+    if (b.tripType == TripType::Electronic) {
         c.m_model = Model::Electronic;
-        const double ir = c.m_ratingA * p.number("lt_pickup_x").value_or(1.0);
+        // A long-time pickup not given is the trip rating itself (1.0 ×); no short-time or
+        // instantaneous element where none is given.
+        const double ir = c.m_ratingA * b.ltPickupX.value_or(1.0);
         c.m_a = ir;
-        c.m_b = p.number("lt_delay_s").value_or(10.0);
-        c.m_c = p.number("st_pickup_x").value_or(0) * ir;
-        c.m_d = p.number("inst_x").value_or(0) * c.m_ratingA;
+        c.m_b = b.ltDelayS.value_or(kAssumedLongTimeDelayS);
+        c.m_c = b.stPickupX ? *b.stPickupX * ir : 0;
+        c.m_d = b.instX ? *b.instX * c.m_ratingA : 0;
         c.m_pickupA = 1.05 * ir;
         c.m_label = p.tag + " " + num(c.m_ratingA) + " A LSI, LT " + num(c.m_b) + " s" +
+                    assumed(b.ltDelayS.has_value()) +
                     (c.m_c > 0 ? ", ST " + num(c.m_c) + " A " +
-                                     num(p.number("st_delay_s").value_or(0.1)) + " s"
+                                     num(b.stDelayS.value_or(kAssumedShortTimeDelayS)) + " s" +
+                                     assumed(b.stDelayS.has_value())
                                : "") +
                     (c.m_d > 0 ? ", I " + num(c.m_d) + " A" : "");
     } else {
         c.m_model = Model::ThermalMagnetic;
         c.m_a = thermalTime200(c.m_ratingA);
-        c.m_d = p.number("inst_x").value_or(10) * c.m_ratingA;
+        c.m_d = b.instX.value_or(kAssumedThermalMagneticInstX) * c.m_ratingA;
         c.m_pickupA = 1.05 * c.m_ratingA;
-        c.m_label = p.tag + " " + num(c.m_ratingA) + " A TM, inst " + num(c.m_d) + " A";
+        c.m_label = p.tag + " " + num(c.m_ratingA) + " A TM, inst " + num(c.m_d) + " A" +
+                    assumed(b.instX.has_value());
     }
-    c.m_stDelayS = p.number("st_delay_s").value_or(0.1);
-    c.m_stI2t = p.flag("st_i2t");
+    c.m_stDelayS = b.stDelayS.value_or(kAssumedShortTimeDelayS);
+    c.m_stI2t = b.stI2t;
     return c;
 }
 
 TripCurve TripCurve::ofOverload(const Part& p) {
     TripCurve c;
     c.m_model = Model::Overload;
-    c.m_ratingA = p.number("setting_a").value_or(10);
+    const auto ol = OverloadRatings::of(p);
+    c.m_ratingA = ol.settingA;
     // IEC 60947-4-1 Table 3 (from memory): trip time at 7.2 × setting from cold, by class;
     // Table 2: no trip at 1.05 ×, trip within 2 h at 1.2 ×, within the class limit at 1.5 ×
     // from hot. τ_min puts the fastest trip at 7.2 × on the class minimum; τ_max puts the
     // slowest on the class maximum, or lower where the 1.5 × hot limit demands it.
-    const auto cls = p.word("trip_class").value_or("10");
+    const std::string& cls = ol.tripClass;
     const double tpMin = cls == "10A" ? 2 : cls == "10" ? 4 : cls == "20" ? 6 : 9;
     const double tpMax = cls == "10A" ? 10 : cls == "10" ? 10 : cls == "20" ? 20 : 30;
     const double hot15 = (cls == "10A" ? 2 : cls == "10" ? 4 : cls == "20" ? 8 : 12) * 60.0;
@@ -95,10 +104,9 @@ TripCurve TripCurve::ofOverload(const Part& p) {
 
 std::optional<TripCurve> TripCurve::of(const Part& p) {
     TripCurve c;
-    if (!fieldIndex(p.kind, "curve_points"))
-        return std::nullopt; // not a protective part
-    if (auto pts = p.word("curve_points"); pts && !pts->empty()) {
-        if (parseCurvePoints(*pts, c.m_points))
+    const std::string pts = userCurvePoints(p);
+    if (!pts.empty()) {
+        if (parseCurvePoints(pts, c.m_points))
             return std::nullopt;
         c.m_model = Model::Points;
         c.m_pickupA = c.m_points.front().amps;
@@ -110,19 +118,20 @@ std::optional<TripCurve> TripCurve::of(const Part& p) {
         return ofBreaker(p);
     case PartKind::InstBreaker:
         c.m_model = Model::Instantaneous;
-        c.m_ratingA = p.number("pickup_a").value_or(100);
+        c.m_ratingA = InstBreakerRatings::of(p).pickupA;
         c.m_pickupA = 0.8 * c.m_ratingA;
         c.m_label = p.tag + " inst " + num(c.m_ratingA) + " A";
         return c;
-    case PartKind::Fuse:
-        c.m_model = p.word("fuse_type").value_or("time_delay") == "fast" ? Model::FastFuse
-                                                                         : Model::TimeDelayFuse;
-        c.m_ratingA = p.number("amps").value_or(30);
+    case PartKind::Fuse: {
+        const auto fuse = FuseRatings::of(p);
+        c.m_model = fuse.type == FuseType::Fast ? Model::FastFuse : Model::TimeDelayFuse;
+        c.m_ratingA = fuse.amps;
         c.m_a = c.m_ratingA <= 30 ? 120 : 240; // UL 248 opening limit at 200 % (from memory)
         c.m_pickupA = 1.1 * c.m_ratingA;
         c.m_label = p.tag + " " + num(c.m_ratingA) + " A " +
                     (c.m_model == Model::FastFuse ? "fast" : "time-delay") + " fuse";
         return c;
+    }
     case PartKind::Overload:
         return ofOverload(p);
     default:

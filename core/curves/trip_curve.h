@@ -14,6 +14,15 @@ namespace lineward {
 
 inline constexpr double kNoTrip = std::numeric_limits<double>::infinity();
 
+/// Settings assumed where a breaker's data leaves them blank; each curve label says "(assumed)"
+/// where one was used. A thermal-magnetic molded-case breaker's instantaneous pickup of 10 ×
+/// its trip rating (common practice: the usual fixed or lowest adjustable setting); an
+/// electronic trip unit's long-time band of 10 s at 6 × pickup and short-time band of 0.1 s
+/// (common practice: middle settings of the usual ranges).
+inline constexpr double kAssumedThermalMagneticInstX = 10.0;
+inline constexpr double kAssumedLongTimeDelayS = 10.0;
+inline constexpr double kAssumedShortTimeDelayS = 0.1;
+
 /// A protective part's band. Built from its ratings, or from its user points when it has them.
 class TripCurve {
 public:

@@ -1,6 +1,7 @@
 // Schedules are views of the core's results; every number comes from sizing or the studies.
 #include "report/schedules.h"
 
+#include "model/ratings.h"
 #include "sizing/motor_sizing.h"
 #include "studies/study.h"
 #include "studies/study_view.h"
@@ -21,12 +22,14 @@ std::string deviceText(const Part* d) {
         return "";
     switch (d->kind) {
     case PartKind::Breaker:
-        return "breaker " + num(d->number("trip_a"), 0) + " A";
+        return "breaker " + fmt(BreakerRatings::of(*d).tripA, 0) + " A";
     case PartKind::InstBreaker:
-        return "inst. breaker " + num(d->number("pickup_a"), 0) + " A setting";
-    case PartKind::Fuse:
-        return std::string(d->word("fuse_type").value_or("") == "fast" ? "fuse " : "TD fuse ") +
-               num(d->number("amps"), 0) + " A";
+        return "inst. breaker " + fmt(InstBreakerRatings::of(*d).pickupA, 0) + " A setting";
+    case PartKind::Fuse: {
+        const auto fuse = FuseRatings::of(*d);
+        return std::string(fuse.type == FuseType::Fast ? "fuse " : "TD fuse ") + fmt(fuse.amps, 0) +
+               " A";
+    }
     default:
         return "";
     }
@@ -75,41 +78,36 @@ std::vector<Schedule> buildSchedules(const CheckResult& result) {
         const auto& flc = facts.flc;
         const Part* cable = b.cables.empty() ? nullptr : b.cables.front();
         const double drop = dropPct(r, net, flow, m);
+        const auto mr = MotorRatings::of(m);
+        const auto cr = cable ? std::optional(CableRatings::of(*cable)) : std::nullopt;
+        const auto kr =
+            b.contactor ? std::optional(ContactorRatings::of(*b.contactor)) : std::nullopt;
+        const auto ol = b.overload ? std::optional(OverloadRatings::of(*b.overload)) : std::nullopt;
         motors.rows.push_back(
-            {m.tag,
-             m.number("hp") ? num(m.number("hp"), 2) + " hp" : num(m.number("kw"), 2) + " kW",
-             num(m.number("volts"), 0), flc ? fmt(flc->amps) : "", num(m.number("fla")),
-             deviceText(b.scpd),
-             b.contactor ? (b.contactor->word("nema_size")
-                                ? "NEMA " + *b.contactor->word("nema_size")
-                                : num(b.contactor->number("ac3_a"), 0) + " A AC-3")
-                         : "",
-             b.overload ? num(b.overload->number("setting_a")) : "",
-             b.overload ? b.overload->word("trip_class").value_or("") : "",
-             cable ? (cable->number("sets").value_or(1) > 1 ? num(cable->number("sets"), 0) + " × "
-                                                            : "") +
-                         cable->word("size").value_or("")
-                   : "",
-             cable ? num(cable->number("length_ft"), 0) : "",
-             cable ? cable->word("egc_size").value_or("") : "",
+            {m.tag, mr.hp ? fmt(*mr.hp, 2) + " hp" : num(mr.kw, 2) + " kW", fmt(mr.volts, 0),
+             flc ? fmt(flc->amps) : "", num(mr.fla), deviceText(b.scpd),
+             kr ? (kr->nemaSize ? "NEMA " + *kr->nemaSize : num(kr->ac3A, 0) + " A AC-3") : "",
+             ol ? fmt(ol->settingA) : "", ol ? ol->tripClass : "",
+             cr ? (cr->sets > 1 ? std::to_string(cr->sets) + " × " : "") + cr->size : "",
+             cr ? fmt(cr->lengthFt, 0) : "", cr ? cr->egcSize : "",
              std::isnan(drop) ? "" : fmt(drop, 2),
              b.scpd ? faultAt(r, flow.lineNode(b.scpd->id)) : faultAt(r, net.nodeOf(m.id, 0))});
     }
     for (const auto& p : d.parts()) {
         auto load = r.loadAmps.find(p.id);
         if (p.kind == PartKind::Cable) {
-            auto amp =
-                cableAmpacity(p.word("size").value_or(""), conditionsOf(p, d.settings), t, false);
+            const auto cr = CableRatings::of(p);
+            auto amp = cableAmpacity(cr.size, conditionsOf(p, d.settings), t, false);
             const double drop = dropPct(r, net, flow, p);
             cables.rows.push_back(
-                {p.tag, p.word("material").value_or("cu") == "al" ? "Al" : "Cu",
-                 p.word("size").value_or(""), num(p.number("sets"), 0),
-                 num(p.number("length_ft"), 0), num(p.number("insulation_c"), 0),
-                 amp ? fmt(amp->amps) : "", load == r.loadAmps.end() ? "" : fmt(load->second),
+                {p.tag, cr.material == Material::Al ? "Al" : "Cu", cr.size, std::to_string(cr.sets),
+                 fmt(cr.lengthFt, 0), std::to_string(cr.insulationC), amp ? fmt(amp->amps) : "",
+                 load == r.loadAmps.end() ? "" : fmt(load->second),
                  std::isnan(drop) ? "" : fmt(drop, 2), faultAt(r, flow.lineNode(p.id))});
         } else if (kindInfo(p.kind).protective) {
             const auto* f = r.faultAtNode(flow.lineNode(p.id));
-            const auto ic = p.number("interrupting_ka");
+            const auto data = protectiveDataOf(p);
+            const auto ic = data ? std::optional(data->interruptingKa) : std::nullopt;
             devices.rows.push_back({p.tag, std::string(kindInfo(p.kind).name), deviceText(&p),
                                     num(ic), f ? fmt(f->ikKa, 2) : "",
                                     f && ic ? fmt(f->ikKa / *ic * 100, 0) : ""});

@@ -1,6 +1,7 @@
 // One motor branch under check: shared by the two files of the branch.* family.
 #pragma once
 
+#include "model/ratings.h"
 #include "rules/rule_catalog.h"
 #include "rules/rule_context.h"
 #include "sizing/motor_sizing.h"
@@ -25,7 +26,7 @@ struct BranchCheck {
     }
     std::string motorName() const {
         return b.motor->tag + " (" + fmt(motorHp(*b.motor), 2) + " hp, " +
-               fmt(b.motor->number("volts").value_or(0), 0) + " V)";
+               fmt(MotorRatings::of(*b.motor).volts, 0) + " V)";
     }
 };
 

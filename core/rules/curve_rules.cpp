@@ -1,6 +1,7 @@
 // The curve.* rules: nuisance tripping on start, overload relay against stall and start,
 // cable damage, and selectivity between each device and the one above it.
 #include "curves/path_curves.h"
+#include "model/ratings.h"
 #include "rules/rule_catalog.h"
 #include "rules/rule_context.h"
 #include "sizing/motor_sizing.h"
@@ -28,7 +29,7 @@ void motorChecks(const RuleContext& ctx, const Part& m, std::vector<Finding>& ou
         if (d.part->kind == PartKind::Overload) {
             const double hot = d.curve.maxTimeHot(prof->lockedRotorA),
                          cold = d.curve.minTime(prof->lockedRotorA);
-            if (auto stall = m.number("stall_hot_s"); stall && hot > *stall) {
+            if (auto stall = MotorRatings::of(m).stallHotS; stall && hot > *stall) {
                 auto f = makeFinding("curve.overload.stall", {d.part->id, m.id},
                                      d.part->tag + " may take " + secs(hot) +
                                          " hot at locked rotor (" + fmt(prof->lockedRotorA, 0) +
@@ -90,8 +91,8 @@ void motorChecks(const RuleContext& ctx, const Part& m, std::vector<Finding>& ou
 void cableDamage(const RuleContext& ctx, const Part& c, std::vector<Finding>& out) {
     auto i2t = cableDamageI2t(ctx, c);
     const double fault = availableFaultA(ctx, c);
-    auto amp = cableAmpacity(c.word("size").value_or(""), conditionsOf(c, ctx.settings()),
-                             ctx.tables, false);
+    auto amp =
+        cableAmpacity(CableRatings::of(c).size, conditionsOf(c, ctx.settings()), ctx.tables, false);
     if (!i2t || fault <= 0 || !amp)
         return;
     // The cable is judged against its own protection: the device at its supply end (with the

@@ -1,6 +1,8 @@
 // The duty.* rules: interrupting ratings (110.9), SCCR and bracing (110.10, 430.8, 409.22),
 // and conductor short-circuit withstand (ICEA P-32-382 / IEC adiabatic).
+#include "curves/trip_curve.h"
 #include "model/conductor.h"
+#include "model/ratings.h"
 #include "rules/rule_catalog.h"
 #include "rules/rule_context.h"
 #include "sizing/motor_sizing.h"
@@ -13,27 +15,30 @@ namespace {
 
 void interrupting(const RuleContext& ctx, const Part& d, std::vector<Finding>& out) {
     const auto* f = ctx.study.faultAtNode(ctx.flow.lineNode(d.id));
-    const auto rating = d.number("interrupting_ka");
-    if (!f || !rating || *rating >= f->ikKa - 1e-9)
+    const auto data = protectiveDataOf(d);
+    if (!f || !data)
+        return;
+    const double rating = data->interruptingKa;
+    if (rating >= f->ikKa - 1e-9)
         return;
     auto x = makeFinding("duty.interrupting", {d.id},
-                         d.tag + " interrupting rating " + fmt(*rating) + " kA is below the " +
+                         d.tag + " interrupting rating " + fmt(rating) + " kA is below the " +
                              fmt(f->ikKa, 2) + " kA available at its line side");
     x.computed = f->ikKa;
-    x.limit = *rating;
+    x.limit = rating;
     x.unit = "kA";
     x.trace = {
         {"available fault current", fmt(f->ikKa, 2) + " kA symmetrical, X/R " + fmt(f->xOverR, 1)},
-        {"interrupting rating", fmt(*rating) + " kA"}};
+        {"interrupting rating", fmt(rating) + " kA"}};
     const double next = std::ceil(f->ikKa / 5.0) * 5.0 < 10 ? 10 : std::ceil(f->ikKa / 5.0) * 5.0;
     x.fix = Fix{"use a device rated " + fmt(next, 0) + " kA or more (or series-rated, listed)",
-                {{d.id, "interrupting_ka", next}}};
+                {{d.id, ProtectiveData::kInterruptingKa, next}}};
     out.push_back(std::move(x));
 }
 
 void bracing(const RuleContext& ctx, const Part& bus, std::vector<Finding>& out) {
     const auto* f = ctx.study.faultAtNode(ctx.net.nodeOf(bus.id, 0));
-    const auto rating = bus.number("bracing_ka");
+    const auto rating = BusRatings::of(bus).bracingKa;
     if (!f || !rating || *rating >= f->ikKa - 1e-9)
         return;
     auto x = makeFinding("duty.bracing", {bus.id},
@@ -45,7 +50,8 @@ void bracing(const RuleContext& ctx, const Part& bus, std::vector<Finding>& out)
     x.trace = {{"available fault current",
                 fmt(f->ikKa, 2) + " kA symmetrical, peak " + fmt(f->peakKa, 2) + " kA"}};
     const double next = std::ceil(f->ikKa / 5.0) * 5.0;
-    x.fix = Fix{"brace the bus for " + fmt(next, 0) + " kA", {{bus.id, "bracing_ka", next}}};
+    x.fix =
+        Fix{"brace the bus for " + fmt(next, 0) + " kA", {{bus.id, BusRatings::kBracingKa, next}}};
     out.push_back(std::move(x));
 }
 
@@ -80,27 +86,32 @@ void sccr(const RuleContext& ctx, const Bucket& b, std::vector<Finding>& out) {
 // current falls in an inverse-time region.
 std::optional<double> clearingTime(const Part& d, double amps) {
     if (d.kind == PartKind::InstBreaker)
-        return amps >= d.number("pickup_a").value_or(1e12) ? std::optional(0.025) : std::nullopt;
+        return amps >= InstBreakerRatings::of(d).pickupA ? std::optional(0.025) : std::nullopt;
     if (d.kind == PartKind::Fuse)
-        return amps >= 20 * d.number("amps").value_or(1e12) ? std::optional(0.008) : std::nullopt;
-    const double trip = d.number("trip_a").value_or(0);
-    if (auto inst = d.number("inst_x"); inst && amps >= *inst * trip)
+        return amps >= 20 * FuseRatings::of(d).amps ? std::optional(0.008) : std::nullopt;
+    if (d.kind != PartKind::Breaker)
+        return std::nullopt;
+    const auto b = BreakerRatings::of(d);
+    if (b.instX && amps >= *b.instX * b.tripA)
         return 0.025;
-    if (auto st = d.number("st_pickup_x"); st && amps >= *st * trip)
-        return d.number("st_delay_s").value_or(0.1) + 0.05;
+    if (b.stPickupX && amps >= *b.stPickupX * b.tripA)
+        return b.stDelayS.value_or(kAssumedShortTimeDelayS) + 0.05;
     return std::nullopt;
 }
 
 // What the device lets through at the fault: the stated I²t, else the stated clearing time,
 // else the assumed clearing time; `stated` tells which.
 std::optional<double> letThrough(const Part& d, double amps, bool& stated, std::string* how) {
-    if (auto i2t = d.number("let_through_a2s")) {
+    const auto data = protectiveDataOf(d);
+    if (!data)
+        return std::nullopt;
+    if (auto i2t = data->letThroughA2s) {
         stated = true;
         if (how)
             *how = fmt(*i2t, 0) + " A²s (stated let-through)";
         return *i2t;
     }
-    auto t = d.number("clear_s");
+    auto t = data->clearS;
     stated = t.has_value();
     if (!t)
         t = clearingTime(d, amps);
@@ -114,9 +125,10 @@ std::optional<double> letThrough(const Part& d, double amps, bool& stated, std::
 
 // I²t the cable takes: ICEA P-32-382 for AWG/kcmil, IEC adiabatic k²S² for mm² (per set).
 std::optional<double> cableI2t(const RuleContext& ctx, const Part& cable, std::string* how) {
-    const auto size = cable.word("size").value_or("");
-    const double ins = cable.number("insulation_c").value_or(90);
-    const bool al = cable.word("material").value_or("cu") == "al";
+    const auto c = CableRatings::of(cable);
+    const std::string& size = c.size;
+    const double ins = c.insulationC;
+    const bool al = c.material == Material::Al;
     if (size.ends_with(" mm2")) {
         const double k =
             ins >= 90 ? (al ? 94 : 143) : (al ? 76 : 115); // IEC 60364-4-43 Table 43A (from memory)
@@ -142,7 +154,7 @@ void withstand(const RuleContext& ctx, const Part& cable, std::vector<Finding>& 
     if (!f || !devId)
         return;
     const Part& dev = *ctx.drawing.part(*devId);
-    const double sets = cable.number("sets").value_or(1);
+    const double sets = CableRatings::of(cable).sets;
     const double perSet = f->ikKa * 1000.0 / sets;
     bool stated = false;
     std::string devHow, cableHow;
@@ -164,11 +176,12 @@ void withstand(const RuleContext& ctx, const Part& cable, std::vector<Finding>& 
                 fmt(f->ikKa, 2) + " kA" + (sets > 1 ? ", per set " + fmt(perSet, 0) + " A" : "")},
                {"cable withstand", cableHow + " = " + fmt(*limit, 0) + " A²s"},
                {"let-through of " + dev.tag, devHow + " = " + fmt(*let, 0) + " A²s"}};
-    auto cur = ctx.tables.areaCmil(cable.word("size").value_or(""));
+    auto cur = ctx.tables.areaCmil(CableRatings::of(cable).size);
     for (auto s2 : awgSizes()) {
         auto a = ctx.tables.areaCmil(std::string(s2));
         if (cur && a && *a > *cur && *a >= *cur * std::sqrt(*let / *limit)) {
-            x.fix = Fix{"use " + std::string(s2), {{cable.id, "size", std::string(s2)}}};
+            x.fix =
+                Fix{"use " + std::string(s2), {{cable.id, CableRatings::kSize, std::string(s2)}}};
             break;
         }
     }

@@ -1,6 +1,7 @@
 // Feeder sums. Motors without a table or nameplate FLC are left out (branch.flc.unknown says so).
 #include "rules/feeder_calc.h"
 
+#include "model/ratings.h"
 #include "sizing/motor_sizing.h"
 
 namespace lineward {
@@ -34,7 +35,8 @@ FeederLoad feederLoad(const RuleContext& ctx, const FeederMotorMap& motors, Node
                 continue;
             flcs.push_back({it->second.flc * ratio, id});
         } else {
-            (p.flag("continuous") ? l.continuousA : l.nonContinuousA) += loadAmps(p) * ratio;
+            (LoadRatings::of(p).continuous ? l.continuousA : l.nonContinuousA) +=
+                loadAmps(p) * ratio;
             ++l.loads;
         }
     }
@@ -75,7 +77,7 @@ FeederDeviceLimit feederDeviceLimit(const RuleContext& ctx, const FeederMotorMap
         const Part& p = *ctx.drawing.part(id);
         const double ratio = voltageRatio(ctx, id, from);
         if (p.kind != PartKind::Motor) {
-            other += (p.flag("continuous") ? 1.25 : 1.0) * loadAmps(p) * ratio;
+            other += (LoadRatings::of(p).continuous ? 1.25 : 1.0) * loadAmps(p) * ratio;
             continue;
         }
         auto it = motors.find(id);
@@ -89,8 +91,7 @@ FeederDeviceLimit feederDeviceLimit(const RuleContext& ctx, const FeederMotorMap
             if (type == ScpdType::InstantaneousBreaker)
                 rating = scpdLimit(feederType, motorTypeOf(p), flc, ctx.tables).rawA;
             else
-                rating = d->number(d->kind == PartKind::Breaker ? "trip_a" : "amps").value_or(flc) *
-                         ratio;
+                rating = ampereRatingA(*d) * ratio;
         }
         // The largest-rated branch device counts in full (ties: the one adding most).
         if (rating > bestRating + 1e-9 ||

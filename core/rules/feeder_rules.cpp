@@ -1,4 +1,5 @@
 // The feeder.*, conductor.*, bus.* and transformer.* rules of docs/rules.md.
+#include "model/ratings.h"
 #include "rules/feeder_calc.h"
 #include "rules/rule_catalog.h"
 #include "sizing/motor_sizing.h"
@@ -17,11 +18,10 @@ struct FeederCheck {
     std::vector<Finding>& out;
 };
 
+// The 240.6 rating of a feeder's breaker or fuse; nothing for other devices.
 std::optional<double> deviceRating(const Part& d) {
-    if (d.kind == PartKind::Breaker)
-        return d.number("trip_a");
-    if (d.kind == PartKind::Fuse)
-        return d.number("amps");
+    if (d.kind == PartKind::Breaker || d.kind == PartKind::Fuse)
+        return ampereRatingA(d);
     return std::nullopt;
 }
 
@@ -29,7 +29,7 @@ void feederConductor(FeederCheck& c, const Part& cable) {
     const auto load = feederLoad(c.ctx, c.motors, c.ctx.flow.loadNode(cable.id));
     if (load.motors + load.loads == 0)
         return;
-    const auto size = cable.word("size").value_or("");
+    const std::string size = CableRatings::of(cable).size;
     const auto cond = conditionsOf(cable, c.ctx.settings());
     auto amp = cableAmpacity(size, cond, c.ctx.tables, false);
     const double need = load.required();
@@ -49,7 +49,7 @@ void feederConductor(FeederCheck& c, const Part& cable) {
     if (auto next = smallestCable(need / cond.sets, perSet, c.ctx.tables, size))
         f.fix = Fix{"use " + next->first +
                         (cond.sets > 1 ? " in each of " + std::to_string(cond.sets) + " sets" : ""),
-                    {{cable.id, "size", next->first}}};
+                    {{cable.id, CableRatings::kSize, next->first}}};
     c.out.push_back(std::move(f));
 }
 
@@ -63,7 +63,7 @@ void conductorProtection(FeederCheck& c, const Part& cable) {
         return;
     const Part& d = *c.ctx.drawing.part(*dev);
     auto rating = deviceRating(d);
-    const auto size = cable.word("size").value_or("");
+    const std::string size = CableRatings::of(cable).size;
     const auto cond = conditionsOf(cable, c.ctx.settings());
     auto amp = cableAmpacity(size, cond, c.ctx.tables, false);
     if (!rating || !amp)
@@ -98,10 +98,10 @@ void conductorProtection(FeederCheck& c, const Part& cable) {
     auto next = smallestCable(*rating / cond.sets, perSet, c.ctx.tables, size);
     if (next && (!c.ctx.tables.smallConductorLimit(next->first, cond.material) ||
                  *c.ctx.tables.smallConductorLimit(next->first, cond.material) >= *rating))
-        f.fix = Fix{"use " + next->first, {{cable.id, "size", next->first}}};
+        f.fix = Fix{"use " + next->first, {{cable.id, CableRatings::kSize, next->first}}};
     else if (auto lower = c.ctx.tables.standardAtOrBelow(limit))
         f.fix = Fix{"set " + d.tag + " to " + fmt(*lower, 0) + " A",
-                    {{d.id, d.kind == PartKind::Breaker ? "trip_a" : "amps", *lower}}};
+                    {{d.id, ampereRatingKey(d.kind), *lower}}};
     c.out.push_back(std::move(f));
 }
 
@@ -124,13 +124,13 @@ void feederDevice(FeederCheck& c, const Part& d) {
     f.unit = "A";
     f.trace = lim.trace;
     f.fix = Fix{"set " + d.tag + " to " + fmt(lim.maxA, 0) + " A",
-                {{d.id, d.kind == PartKind::Breaker ? "trip_a" : "amps", lim.maxA}}};
+                {{d.id, ampereRatingKey(d.kind), lim.maxA}}};
     c.out.push_back(std::move(f));
 }
 
 void busLoad(FeederCheck& c, const Part& bus) {
     const auto load = feederLoad(c.ctx, c.motors, c.ctx.net.nodeOf(bus.id, 0));
-    const double rating = bus.number("amps").value_or(0), need = load.required();
+    const double rating = BusRatings::of(bus).amps, need = load.required();
     if (need <= rating + 1e-9)
         return;
     auto f = makeFinding("bus.load", {bus.id},
@@ -140,10 +140,10 @@ void busLoad(FeederCheck& c, const Part& bus) {
     f.limit = rating;
     f.unit = "A";
     f.trace = load.trace(c.ctx);
-    f.fix =
-        Fix{"use a bus rated " + fmt(c.ctx.tables.nextStandardAtOrAbove(need).value_or(need), 0) +
-                " A or more",
-            {{bus.id, "amps", c.ctx.tables.nextStandardAtOrAbove(need).value_or(std::ceil(need))}}};
+    f.fix = Fix{"use a bus rated " +
+                    fmt(c.ctx.tables.nextStandardAtOrAbove(need).value_or(need), 0) + " A or more",
+                {{bus.id, BusRatings::kAmps,
+                  c.ctx.tables.nextStandardAtOrAbove(need).value_or(std::ceil(need))}}};
     c.out.push_back(std::move(f));
 }
 

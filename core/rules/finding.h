@@ -22,7 +22,7 @@ std::optional<Severity> severityFromName(std::string_view s);
 /// One change of one rating; the editor applies all changes of a fix as one undoable edit.
 struct FieldChange {
     PartId part;
-    std::string field;
+    std::string_view field; ///< a key constant of model/ratings.h (static storage)
     FieldValue value;
 };
 

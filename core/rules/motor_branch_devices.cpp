@@ -12,7 +12,7 @@ void overload(BranchCheck& c) {
     const Part* ol = c.b.overload;
     if (!ol)
         return; // topology.motor.no_overload reports it
-    auto fla = c.b.motor->number("fla");
+    const auto fla = MotorRatings::of(*c.b.motor).fla;
     if (!fla) {
         auto& f = c.add("branch.overload.no_fla", *ol,
                         c.motorName() + " has no nameplate FLA; the setting of " + ol->tag +
@@ -21,7 +21,8 @@ void overload(BranchCheck& c) {
         return;
     }
     const auto lim = overloadLimit(*c.b.motor, *fla);
-    const double setting = ol->number("setting_a").value_or(0);
+    const auto relay = OverloadRatings::of(*ol);
+    const double setting = relay.settingA;
     if (setting <= lim.maxA + 1e-9)
         return;
     const bool withinC = setting <= lim.maxC + 1e-9;
@@ -41,8 +42,9 @@ void overload(BranchCheck& c) {
     f.limit = withinC ? lim.maxC : lim.maxA;
     f.unit = "A";
     const double fixTo = std::floor(lim.maxA * 10.0) / 10.0;
-    if (fixTo >= ol->number("range_min_a").value_or(0))
-        f.fix = Fix{"set " + ol->tag + " to " + fmt(fixTo) + " A", {{ol->id, "setting_a", fixTo}}};
+    if (!relay.rangeMinA || fixTo >= *relay.rangeMinA)
+        f.fix = Fix{"set " + ol->tag + " to " + fmt(fixTo) + " A",
+                    {{ol->id, OverloadRatings::kSettingA, fixTo}}};
     else
         f.fix = Fix{"choose a relay whose range reaches " + fmt(fixTo) + " A", {}};
 }
@@ -51,10 +53,13 @@ void contactor(BranchCheck& c) {
     const Part* k = c.b.contactor;
     if (!k)
         return;
-    const double hp = motorHp(*c.b.motor), v = c.b.motor->number("volts").value_or(0);
-    const int ph = static_cast<int>(c.b.motor->number("phases").value_or(3));
-    const double amps = std::max(c.flc.amps, c.b.motor->number("fla").value_or(0));
-    if (auto ac3 = k->number("ac3_a")) {
+    const auto motor = MotorRatings::of(*c.b.motor);
+    const auto kr = ContactorRatings::of(*k);
+    const double hp = motorHp(*c.b.motor), v = motor.volts;
+    const int ph = motor.phases;
+    // The contactor carries the larger of the table FLC and the nameplate current.
+    const double amps = std::max(c.flc.amps, motor.fla.value_or(c.flc.amps));
+    if (auto ac3 = kr.ac3A) {
         if (*ac3 >= amps - 1e-9)
             return;
         auto& f = c.add("branch.contactor.size", *k,
@@ -64,10 +69,10 @@ void contactor(BranchCheck& c) {
         f.limit = amps;
         f.unit = "A";
         f.fix = Fix{"use a contactor rated at least " + fmt(amps) + " A AC-3",
-                    {{k->id, "ac3_a", std::ceil(amps)}}};
+                    {{k->id, ContactorRatings::kAc3A, std::ceil(amps)}}};
         return;
     }
-    const auto size = k->word("nema_size").value_or("");
+    const std::string size = kr.nemaSize.value_or(""); // none: no NEMA row matches
     const NemaRow* row = c.ctx.tables.nemaRow(size);
     auto rated = row ? c.ctx.tables.nemaHp(*row, v, ph) : std::nullopt;
     if (row && rated && *rated >= hp - 1e-9 && row->continuousA >= amps - 1e-9)
@@ -78,13 +83,14 @@ void contactor(BranchCheck& c) {
                   (rated ? fmt(*rated, 2) + " hp" : std::string("no hp")) + " at " + fmt(v, 0) +
                   " V and " + (row ? fmt(row->continuousA, 0) : std::string("?")) + " A; " +
                   c.motorName() + " needs " + fmt(hp, 2) + " hp and " + fmt(amps) + " A");
-    f.computed = rated.value_or(0);
+    if (rated)
+        f.computed = *rated;
     f.limit = hp;
     f.unit = "hp";
     f.trace.push_back(
         {"NEMA ICS 2 size " + size, row ? fmt(row->continuousA, 0) + " A continuous" : "unknown"});
     if (auto next = smallestNemaSize(hp, v, ph, amps, c.ctx.tables))
-        f.fix = Fix{"use NEMA size " + *next, {{k->id, "nema_size", *next}}};
+        f.fix = Fix{"use NEMA size " + *next, {{k->id, ContactorRatings::kNemaSize, *next}}};
 }
 
 // Disconnect ratings sold as standard (common practice).
@@ -94,7 +100,8 @@ void disconnect(BranchCheck& c) {
     const Part* ds = c.b.disconnect;
     if (!ds)
         return;
-    const double need = 1.15 * c.flc.amps, amps = ds->number("amps").value_or(0);
+    const auto sw = DisconnectRatings::of(*ds);
+    const double need = 1.15 * c.flc.amps, amps = sw.amps;
     if (amps < need - 1e-9) {
         auto& f = c.add("branch.disconnect.rating", *ds,
                         ds->tag + " rated " + fmt(amps, 0) +
@@ -105,12 +112,13 @@ void disconnect(BranchCheck& c) {
         f.trace.push_back({"430.110(A)", "1.15 × " + fmt(c.flc.amps) + " A = " + fmt(need) + " A"});
         for (double s : kDisconnectSizes)
             if (s >= need) {
-                f.fix = Fix{"use a " + fmt(s, 0) + " A switch", {{ds->id, "amps", s}}};
+                f.fix = Fix{"use a " + fmt(s, 0) + " A switch",
+                            {{ds->id, DisconnectRatings::kAmps, s}}};
                 break;
             }
     }
     const double hp = motorHp(*c.b.motor);
-    const auto hpRating = ds->number("hp_rating");
+    const auto hpRating = sw.hpRating;
     if (hpRating && *hpRating >= hp - 1e-9)
         return;
     auto& f =
@@ -119,10 +127,12 @@ void disconnect(BranchCheck& c) {
                   (hpRating ? " is rated " + fmt(*hpRating, 2) + " hp"
                             : std::string(" has no hp rating")) +
                   "; " + c.motorName() + " needs a switch rated at least " + fmt(hp, 2) + " hp");
-    f.computed = hpRating.value_or(0);
+    if (hpRating)
+        f.computed = *hpRating;
     f.limit = hp;
     f.unit = "hp";
-    f.fix = Fix{"use a switch rated " + fmt(hp, 2) + " hp or more", {{ds->id, "hp_rating", hp}}};
+    f.fix = Fix{"use a switch rated " + fmt(hp, 2) + " hp or more",
+                {{ds->id, DisconnectRatings::kHpRating, hp}}};
 }
 
 void groundingConductor(BranchCheck& c) {
@@ -132,8 +142,9 @@ void groundingConductor(BranchCheck& c) {
     const double deviceA =
         egcDeviceRating(*c.b.scpd, type, motorTypeOf(*c.b.motor), c.flc.amps, c.ctx.tables);
     for (const Part* cable : c.b.cables) {
-        const auto given = cable->word("egc_size").value_or("");
-        const auto phase = cable->word("size").value_or("");
+        const auto cr = CableRatings::of(*cable);
+        const std::string& given = cr.egcSize;
+        const std::string& phase = cr.size;
         if (given.empty())
             continue; // the raceway is the EGC (250.118)
         const auto cond = conditionsOf(*cable, c.ctx.settings());
@@ -158,7 +169,7 @@ void groundingConductor(BranchCheck& c) {
                                                    ? " (time-delay fuse maximum, 250.122(D)(1))"
                                                    : "")});
         f.trace.insert(f.trace.end(), need->trace.begin(), need->trace.end());
-        f.fix = Fix{"use " + need->size, {{cable->id, "egc_size", need->size}}};
+        f.fix = Fix{"use " + need->size, {{cable->id, CableRatings::kEgcSize, need->size}}};
     }
 }
 

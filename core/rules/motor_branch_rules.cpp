@@ -1,4 +1,5 @@
 // The branch.* rules of docs/rules.md: NEC 2023 Article 430 checks of each motor's branch.
+#include "model/ratings.h"
 #include "rules/branch_check.h"
 
 #include <cmath>
@@ -10,7 +11,7 @@ namespace {
 void conductor(BranchCheck& c) {
     const double need = 1.25 * c.flc.amps;
     for (const Part* cable : c.b.cables) {
-        const auto size = cable->word("size").value_or("");
+        const std::string size = CableRatings::of(*cable).size;
         const auto cond = conditionsOf(*cable, c.ctx.settings());
         auto amp = cableAmpacity(size, cond, c.ctx.tables, false);
         if (!amp || amp->amps >= need - 1e-9)
@@ -31,22 +32,16 @@ void conductor(BranchCheck& c) {
         CableConditions perSet = cond;
         if (auto next = smallestCable(need, perSet, c.ctx.tables, size))
             f.fix = Fix{"use " + next->first + " (" + fmt(next->second.amps) + " A)",
-                        {{cable->id, "size", next->first}}};
+                        {{cable->id, CableRatings::kSize, next->first}}};
     }
 }
 
-std::string deviceField(const Part& d) {
-    return d.kind == PartKind::Breaker       ? "trip_a"
-           : d.kind == PartKind::InstBreaker ? "pickup_a"
-                                             : "amps";
-}
-
 void ratedDevice(BranchCheck& c, const Part& d, ScpdType type, const ScpdLimit& lim) {
-    const double rating = d.number(deviceField(d)).value_or(0);
+    const double rating = branchSettingA(d);
     if (rating <= lim.maxA + 1e-9)
         return;
     const bool withinExc = rating <= lim.excMaxA + 1e-9;
-    const bool hard = c.b.motor->flag("hard_to_start");
+    const bool hard = MotorRatings::of(*c.b.motor).hardToStart;
     const RuleId rule =
         withinExc && hard ? RuleId("branch.scpd.exception") : RuleId("branch.scpd.rating");
     auto& f =
@@ -70,11 +65,12 @@ void ratedDevice(BranchCheck& c, const Part& d, ScpdType type, const ScpdLimit& 
         f.trace.push_back({"hard-to-start flag", "not set on the motor"});
     if (!(withinExc && hard))
         f.fix = Fix{"set " + d.tag + " to " + fmt(lim.maxA, 0) + " A",
-                    {{d.id, deviceField(d), lim.maxA}}};
+                    {{d.id, branchSettingKey(d.kind), lim.maxA}}};
 }
 
 void instantaneous(BranchCheck& c, const Part& d, const ScpdLimit& lim) {
-    const double setting = d.number("pickup_a").value_or(0);
+    const auto mcp = InstBreakerRatings::of(d);
+    const double setting = mcp.pickupA;
     std::vector<TraceStep> inrushTrace;
     auto lra = lockedRotorA(*c.b.motor, c.ctx.tables, &inrushTrace);
     const double asym = c.ctx.settings().asymmetryFactor;
@@ -99,7 +95,7 @@ void instantaneous(BranchCheck& c, const Part& d, const ScpdLimit& lim) {
                                : "not justified: the table setting "
                                  "carries the start"});
         f.fix = Fix{"set " + d.tag + " to " + fmt(std::floor(allowed), 0) + " A",
-                    {{d.id, "pickup_a", std::floor(allowed)}}};
+                    {{d.id, InstBreakerRatings::kPickupA, std::floor(allowed)}}};
     }
     if (!lra)
         return;
@@ -121,8 +117,9 @@ void instantaneous(BranchCheck& c, const Part& d, const ScpdLimit& lim) {
         {"lowest pickup", fmt(setting, 0) + " A × (1 − " + fmt(kInstantaneousTolerance, 2) +
                               " tolerance, common practice) = " + fmt(lowEdge, 0) + " A"});
     const double fixTo = std::ceil(needSetting / 5.0) * 5.0;
-    if (fixTo <= lim.excMaxA && fixTo <= d.number("pickup_max_a").value_or(1e9))
-        f.fix = Fix{"set " + d.tag + " to " + fmt(fixTo, 0) + " A", {{d.id, "pickup_a", fixTo}}};
+    if (fixTo <= lim.excMaxA && (!mcp.pickupMaxA || fixTo <= *mcp.pickupMaxA))
+        f.fix = Fix{"set " + d.tag + " to " + fmt(fixTo, 0) + " A",
+                    {{d.id, InstBreakerRatings::kPickupA, fixTo}}};
     else
         f.fix = Fix{"no setting within 430.52(C)(3) clears the inrush: review the motor data or "
                     "starting method",
@@ -154,7 +151,7 @@ void checkMotorBranches(const RuleContext& ctx, std::vector<Finding>& out) {
             auto f = makeFinding("branch.flc.unknown", {b.motor->id},
                                  b.motor->tag + ": no table full-load current for " +
                                      fmt(motorHp(*b.motor), 2) + " hp at " +
-                                     fmt(b.motor->number("volts").value_or(0), 0) +
+                                     fmt(MotorRatings::of(*b.motor).volts, 0) +
                                      " V and no nameplate FLA; the branch cannot be sized");
             f.fix = Fix{"enter the nameplate full-load current (fla)", {}};
             out.push_back(std::move(f));

@@ -1,16 +1,17 @@
 // Shared helpers of the sizing rule families.
 #include "rules/rule_context.h"
 
+#include "model/ratings.h"
+
 #include <cmath>
 
 namespace lineward {
 
-double loadAmps(const Part& l) {
-    const double kva =
-        l.number("kva").value_or(l.number("kw").value_or(0) / l.number("pf").value());
-    const double v = l.number("volts").value_or(1);
-    const bool one = l.number("phases").value_or(3) == 1;
-    return kva * 1000.0 / (one ? v : std::sqrt(3.0) * v);
+double loadAmps(const Part& load) {
+    const auto l = LoadRatings::of(load);
+    if (l.volts <= 0)
+        return 0; // a required rating: only a part built in code lacks it
+    return l.apparentKva() * 1000.0 / (l.phases == 1 ? l.volts : std::sqrt(3.0) * l.volts);
 }
 
 } // namespace lineward

@@ -1,4 +1,5 @@
 // transformer.load and transformer.protection (NEC 2023 Table 450.3(B), 1000 V and less).
+#include "model/ratings.h"
 #include "rules/feeder_calc.h"
 #include "rules/rule_catalog.h"
 #include "sizing/motor_sizing.h"
@@ -33,10 +34,6 @@ const Part* protectionBelow(const RuleContext& ctx, NodeIndex n, PartId from) {
     return nullptr;
 }
 
-double ratingOf(const Part& d) {
-    return d.number(d.kind == PartKind::Breaker ? "trip_a" : "amps").value_or(0);
-}
-
 // Largest rating Table 450.3(B) permits for one side and method.
 double limitFor(const Tables& t, bool primaryOnly, bool primarySide, double ratedA,
                 std::string& why) {
@@ -55,8 +52,8 @@ double limitFor(const Tables& t, bool primaryOnly, bool primarySide, double rate
 }
 
 void protection(const RuleContext& ctx, const Part& tx, std::vector<Finding>& out) {
-    const double kva = tx.number("kva").value_or(0), pv = tx.number("pri_v").value_or(0),
-                 sv = tx.number("sec_v").value_or(0);
+    const auto r = TransformerRatings::of(tx);
+    const double kva = r.kva, pv = r.priV, sv = r.secV;
     if (pv > 1000 || sv > 1000)
         return; // Table 450.3(A) governs; not checked here
     const double ip = kva * 1000.0 / (std::sqrt(3.0) * pv),
@@ -66,21 +63,22 @@ void protection(const RuleContext& ctx, const Part& tx, std::vector<Finding>& ou
     const Part* sec = protectionBelow(ctx, ctx.flow.loadNode(tx.id), tx.id);
     std::string secWhy, priWhy;
     const double secLim = limitFor(ctx.tables, false, false, is, secWhy);
-    const bool secOk = sec && ratingOf(*sec) <= secLim + 1e-9;
+    const bool secOk = sec && ampereRatingA(*sec) <= secLim + 1e-9;
     const double priLim = limitFor(ctx.tables, !secOk, true, ip, priWhy);
-    if (pri && ratingOf(*pri) <= priLim + 1e-9)
+    if (pri && ampereRatingA(*pri) <= priLim + 1e-9)
         return;
-    auto f = makeFinding("transformer.protection", {tx.id},
-                         pri ? tx.tag + " primary device " + pri->tag + " at " +
-                                   fmt(ratingOf(*pri), 0) + " A exceeds " + fmt(priLim, 0) + " A"
-                             : tx.tag + " has no primary overcurrent device");
+    auto f =
+        makeFinding("transformer.protection", {tx.id},
+                    pri ? tx.tag + " primary device " + pri->tag + " at " +
+                              fmt(ampereRatingA(*pri), 0) + " A exceeds " + fmt(priLim, 0) + " A"
+                        : tx.tag + " has no primary overcurrent device");
     if (pri)
         f.parts.push_back(pri->id);
-    f.computed = pri ? ratingOf(*pri) : 0;
+    f.computed = pri ? ampereRatingA(*pri) : 0;
     f.limit = priLim;
     f.unit = "A";
     f.trace = {{"rated currents", "primary " + fmt(ip) + " A, secondary " + fmt(is) + " A"},
-               {"secondary device", sec ? sec->tag + " " + fmt(ratingOf(*sec), 0) + " A" +
+               {"secondary device", sec ? sec->tag + " " + fmt(ampereRatingA(*sec), 0) + " A" +
                                               (secOk ? " within " : " above ") + secWhy
                                         : "none"},
                {"method", secOk ? "primary and secondary protection" : "primary protection only"},
@@ -88,7 +86,7 @@ void protection(const RuleContext& ctx, const Part& tx, std::vector<Finding>& ou
     if (pri)
         f.fix = Fix{"set " + pri->tag + " to " +
                         fmt(ctx.tables.standardAtOrBelow(priLim).value_or(priLim), 0) + " A",
-                    {{pri->id, pri->kind == PartKind::Breaker ? "trip_a" : "amps",
+                    {{pri->id, ampereRatingKey(pri->kind),
                       ctx.tables.standardAtOrBelow(priLim).value_or(priLim)}}};
     else
         f.fix = Fix{"add a primary breaker or fuses", {}};
@@ -97,7 +95,8 @@ void protection(const RuleContext& ctx, const Part& tx, std::vector<Finding>& ou
 
 void loading(const RuleContext& ctx, const FeederMotorMap& motors, const Part& tx,
              std::vector<Finding>& out) {
-    const double kva = tx.number("kva").value_or(0), sv = tx.number("sec_v").value_or(0);
+    const auto r = TransformerRatings::of(tx);
+    const double kva = r.kva, sv = r.secV;
     const double rated = kva * 1000.0 / (std::sqrt(3.0) * sv);
     const auto load = feederLoad(ctx, motors, ctx.flow.loadNode(tx.id));
     if (load.running() <= rated + 1e-9)

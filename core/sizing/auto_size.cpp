@@ -2,6 +2,8 @@
 // that the rules in core/rules accept; tests check that a proposed bucket checks clean.
 #include "sizing/auto_size.h"
 
+#include "model/ratings.h"
+
 #include <cmath>
 
 namespace lineward {
@@ -11,7 +13,7 @@ namespace {
 std::string chooseTripClass(const Part& motor, const Tables& t) {
     // The relay must not trip during acceleration: its shortest time at 7.2 × setting must
     // exceed the acceleration time (IEC 60947-4-1 Table 3 limits).
-    const double accel = motor.number("accel_s").value_or(5);
+    const double accel = MotorRatings::of(motor).accelS;
     for (const char* name : {"10", "20", "30"})
         if (const auto* c = t.tripClass(name); c && c->tpMinS > accel)
             return name;
@@ -64,7 +66,8 @@ std::optional<BucketProposal> proposeBucket(const Part& motor, const SizeOptions
                      "inrush needs " + fmt(need, 0) + " A, above the 430.52(C)(3) ceiling"});
         }
     }
-    if (auto fla = motor.number("fla")) {
+    const auto m = MotorRatings::of(motor);
+    if (auto fla = m.fla) {
         p.overloadMaxA = overloadLimit(motor, *fla).maxA;
         p.overloadSettingA = *fla;
     } else {
@@ -72,11 +75,9 @@ std::optional<BucketProposal> proposeBucket(const Part& motor, const SizeOptions
     }
     p.tripClass = chooseTripClass(motor, t);
     p.disconnectMinA = std::round(115.0 * flc->amps) / 100.0; // 1.15 × FLC to the cent
-    const double hp = motorHp(motor), v = motor.number("volts").value_or(0);
-    const int ph = static_cast<int>(motor.number("phases").value_or(3));
-    p.nemaSize =
-        smallestNemaSize(hp, v, ph, std::max(flc->amps, motor.number("fla").value_or(0)), t)
-            .value_or("");
+    p.nemaSize = smallestNemaSize(motorHp(motor), m.volts, m.phases,
+                                  std::max(flc->amps, m.fla.value_or(flc->amps)), t)
+                     .value_or(""); // empty: no NEMA size is large enough
     const double egcDevice = o.device == ScpdType::InstantaneousBreaker
                                  ? scpdLimit(ScpdType::TimeDelayFuse, type, flc->amps, t).maxA
                                  : p.deviceRatingA;

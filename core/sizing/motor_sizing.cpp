@@ -3,48 +3,52 @@
 #include "sizing/motor_sizing.h"
 
 #include "model/conductor.h"
+#include "model/ratings.h"
 
 #include <cmath>
 #include <cstdio>
 
 namespace lineward {
 
-double motorHp(const Part& m) {
-    if (auto hp = m.number("hp"))
-        return *hp;
-    return m.number("kw").value_or(0) / 0.746;
+double motorHp(const Part& motor) {
+    const auto m = MotorRatings::of(motor);
+    if (m.hp)
+        return *m.hp;
+    return m.kw.value_or(0) / kKwPerHp; // the kind's validation gives one of the two
 }
 
-MotorType motorTypeOf(const Part& m) {
-    if (m.number("phases").value_or(3) == 1)
+MotorType motorTypeOf(const Part& motor) {
+    const auto m = MotorRatings::of(motor);
+    if (m.phases == 1)
         return MotorType::SinglePhase;
-    const auto rotor = m.word("rotor").value_or("squirrel_cage");
-    if (rotor == "wound_rotor")
+    if (m.rotor == Rotor::WoundRotor)
         return MotorType::WoundRotor;
-    if (rotor == "synchronous")
+    if (m.rotor == Rotor::Synchronous)
         return MotorType::Synchronous;
-    if (m.flag("premium_eff") || m.word("design").value_or("B") == "E")
+    if (m.premiumEff || m.design == "E")
         return MotorType::DesignBPremium;
     return MotorType::SquirrelCage;
 }
 
-std::optional<MotorFlc> motorFlc(const Part& m, const Tables& t, bool withTrace) {
+std::optional<MotorFlc> motorFlc(const Part& motor, const Tables& t, bool withTrace) {
     MotorFlc r;
-    const int phases = static_cast<int>(m.number("phases").value_or(3));
-    const double volts = m.number("volts").value_or(0);
+    const auto m = MotorRatings::of(motor);
+    const int phases = m.phases;
+    const double volts = m.volts;
     const FlcTable& table = phases == 1 ? t.flc1 : t.flc3;
-    double hp = m.number("hp").value_or(0);
-    if (!m.number("hp")) {
+    double hp = motorHp(motor);
+    if (!m.hp && m.kw) {
         // A kW rating takes the next hp row at or above its equivalent (common practice).
-        const double eq = m.number("kw").value_or(0) / 0.746;
+        const double eq = hp;
         for (double row : table.hp)
             if (row >= eq - 1e-6) {
                 hp = row;
                 break;
             }
         if (withTrace)
-            r.trace.push_back({"kW as hp", fmt(*m.number("kw"), 2) + " kW / 0.746 = " + fmt(eq, 2) +
-                                               " hp → table row " + fmt(hp, 2) + " hp"});
+            r.trace.push_back({"kW as hp", fmt(*m.kw, 2) + " kW / " + fmt(kKwPerHp, 3) + " = " +
+                                               fmt(eq, 2) + " hp → table row " + fmt(hp, 2) +
+                                               " hp"});
     }
     if (auto a = t.flc(hp, volts, phases, &r.columnV)) {
         r.amps = *a;
@@ -55,7 +59,7 @@ std::optional<MotorFlc> motorFlc(const Part& m, const Tables& t, bool withTrace)
                                           fmt(hp, 2) + " hp, " + fmt(r.columnV, 0) + " V column)"});
         return r;
     }
-    if (auto fla = m.number("fla")) {
+    if (auto fla = m.fla) {
         r.amps = *fla;
         r.fromTable = false;
         if (withTrace)
@@ -74,8 +78,8 @@ std::optional<ScpdType> scpdTypeOf(const Part& d) {
     case PartKind::InstBreaker:
         return ScpdType::InstantaneousBreaker;
     case PartKind::Fuse:
-        return d.word("fuse_type").value_or("time_delay") == "fast" ? ScpdType::NonTimeDelayFuse
-                                                                    : ScpdType::TimeDelayFuse;
+        return FuseRatings::of(d).type == FuseType::Fast ? ScpdType::NonTimeDelayFuse
+                                                         : ScpdType::TimeDelayFuse;
     default:
         return std::nullopt;
     }
@@ -104,20 +108,22 @@ ScpdLimit scpdLimit(ScpdType type, MotorType motor, double flc, const Tables& t)
     return l;
 }
 
-std::optional<double> lockedRotorA(const Part& m, const Tables& t, std::vector<TraceStep>* trace) {
-    if (auto lra = m.number("lra")) {
+std::optional<double> lockedRotorA(const Part& motor, const Tables& t,
+                                   std::vector<TraceStep>* trace) {
+    const auto m = MotorRatings::of(motor);
+    if (auto lra = m.lra) {
         if (trace)
             trace->push_back({"locked-rotor current", fmt(*lra, 0) + " A (given)"});
         return *lra;
     }
-    auto letter = m.word("code_letter");
+    const auto& letter = m.codeLetter;
     if (!letter || letter->empty())
         return std::nullopt;
     auto kvaHp = t.codeLetterKvaPerHp((*letter)[0]);
     if (!kvaHp)
         return std::nullopt;
-    const double hp = motorHp(m), v = m.number("volts").value_or(0);
-    const bool one = m.number("phases").value_or(3) == 1;
+    const double hp = motorHp(motor), v = m.volts;
+    const bool one = m.phases == 1;
     const double lra = *kvaHp * hp * 1000.0 / (one ? v : std::sqrt(3.0) * v);
     if (trace)
         trace->push_back({"locked-rotor current",
@@ -132,7 +138,7 @@ std::optional<LockedRotor> lockedRotor(const Part& m, const Tables& t,
     if (auto known = lockedRotorA(m, t, trace))
         return LockedRotor{*known, false};
     const auto flc = motorFlc(m, t, false);
-    const double base = flc ? flc->amps : m.number("fla").value_or(0);
+    const double base = flc ? flc->amps : MotorRatings::of(m).fla.value_or(0); // 0: no basis
     if (base <= 0)
         return std::nullopt;
     const double amps = kAssumedLockedRotorMultiple * base;
@@ -144,14 +150,15 @@ std::optional<LockedRotor> lockedRotor(const Part& m, const Tables& t,
     return LockedRotor{amps, true};
 }
 
-CableConditions conditionsOf(const Part& c, const Settings& s) {
+CableConditions conditionsOf(const Part& cable, const Settings& s) {
+    const auto c = CableRatings::of(cable);
     CableConditions k;
-    k.material = c.word("material").value_or("cu") == "al" ? Material::Al : Material::Cu;
-    k.insulationC = static_cast<int>(c.number("insulation_c").value_or(90));
-    k.terminationC = static_cast<int>(c.number("termination_c").value_or(75));
-    k.ambientC = c.number("ambient_c").value_or(s.ambientC);
-    k.conductors = static_cast<int>(c.number("conductors").value_or(3));
-    k.sets = static_cast<int>(c.number("sets").value_or(1));
+    k.material = c.material;
+    k.insulationC = c.insulationC;
+    k.terminationC = c.terminationC;
+    k.ambientC = c.ambientC.value_or(s.ambientC); // blank: the drawing's ambient
+    k.conductors = c.conductors;
+    k.sets = c.sets;
     return k;
 }
 
@@ -209,10 +216,11 @@ std::optional<std::pair<std::string, Ampacity>> smallestCable(double requiredA,
     return std::nullopt;
 }
 
-OverloadLimit overloadLimit(const Part& m, double fla) {
+OverloadLimit overloadLimit(const Part& motor, double fla) {
     OverloadLimit l;
-    const double sf = m.number("sf").value(); // default: the field table
-    const auto rise = m.number("temp_rise_c");
+    const auto m = MotorRatings::of(motor);
+    const double sf = m.serviceFactor;
+    const auto rise = m.tempRiseC;
     const bool high = sf >= 1.15 - 1e-9 || (rise && *rise <= 40);
     l.pctA = high ? 125 : 115;
     l.pctC = high ? 140 : 130;
@@ -238,7 +246,7 @@ double egcDeviceRating(const Part& device, ScpdType type, MotorType motor, doubl
                        const Tables& t) {
     if (type == ScpdType::InstantaneousBreaker)
         return scpdLimit(ScpdType::TimeDelayFuse, motor, flc, t).maxA;
-    return device.number(device.kind == PartKind::Breaker ? "trip_a" : "amps").value_or(0);
+    return ampereRatingA(device);
 }
 
 std::optional<EgcSize> egcSize(double deviceA, Material m, const std::string& phaseSize,

@@ -21,7 +21,7 @@ struct MotorFlc {
     std::vector<TraceStep> trace;
 };
 std::optional<MotorFlc> motorFlc(const Part& motor, const Tables& t, bool withTrace = true);
-double motorHp(const Part& motor); ///< hp, or kW / 0.746
+double motorHp(const Part& motor); ///< hp, or kW / kKwPerHp
 MotorType motorTypeOf(const Part& motor);
 
 /// Largest permitted rating or setting by Table 430.52(C)(1).
@@ -43,6 +43,9 @@ std::optional<double> lockedRotorA(const Part& motor, const Tables& t,
 /// Locked-rotor multiple assumed where a motor has neither an LRA nor a code letter (common
 /// practice: 6 × full-load current for a squirrel-cage motor across the line).
 inline constexpr double kAssumedLockedRotorMultiple = 6.0;
+/// kW per horsepower for turning a kW rating into a table row (746 W per hp, common practice;
+/// 1 hp is 745.7 W).
+inline constexpr double kKwPerHp = 0.746;
 
 /// The locked-rotor current every study, curve and rule uses: lockedRotorA where it is known,
 /// else kAssumedLockedRotorMultiple × the table FLC (the nameplate FLA where the table has no

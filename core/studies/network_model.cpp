@@ -2,6 +2,7 @@
 // nodes they join become one solve bus; cables and transformers are branches.
 #include "studies/network_model.h"
 
+#include "model/ratings.h"
 #include "sizing/motor_sizing.h"
 
 #include <cmath>
@@ -36,12 +37,13 @@ double NetworkModel::baseAmps(int bus) const {
     return kBaseMva * 1e6 / (std::sqrt(3.0) * baseV[static_cast<std::size_t>(bus)]);
 }
 
-std::optional<Complex> cableOhms(const Part& c, const Tables& t) {
-    const auto size = c.word("size").value_or("");
-    const double lengthFt = c.number("length_ft").value_or(0);
-    const double sets = c.number("sets").value_or(1);
-    const bool al = c.word("material").value_or("cu") == "al";
-    const auto raceway = c.word("raceway").value_or("steel");
+std::optional<Complex> cableOhms(const Part& cable, const Tables& t) {
+    const auto c = CableRatings::of(cable);
+    const std::string& size = c.size;
+    const double lengthFt = c.lengthFt;
+    const double sets = c.sets;
+    const bool al = c.material == Material::Al;
+    const auto raceway = c.raceway;
     if (size.ends_with(" mm2")) {
         // Resistivity at 75 °C (Cu 0.0210, Al 0.0346 ohm·mm²/m, from memory) and 0.08 ohm/km
         // reactance (common practice) where IEC tables are not loaded.
@@ -52,11 +54,11 @@ std::optional<Complex> cableOhms(const Part& c, const Tables& t) {
     const ImpedanceRow* row = t.impedanceRow(size);
     if (!row)
         return std::nullopt;
-    const int col = raceway == "pvc" ? 0 : raceway == "aluminum" ? 1 : 2;
+    const int col = raceway == Raceway::Pvc ? 0 : raceway == Raceway::Aluminum ? 1 : 2;
     const auto r = (al ? row->alR : row->cuR)[col];
     if (!r)
         return std::nullopt;
-    const double x = raceway == "steel" ? row->xlSteel : row->xlPvcAl;
+    const double x = raceway == Raceway::Steel ? row->xlSteel : row->xlPvcAl;
     return Complex(*r, x) * (lengthFt / 1000.0) / sets;
 }
 
@@ -102,15 +104,16 @@ void addBranches(NetworkModel& m, const Network& net, const Tables& t) {
             continue;
         Complex z;
         if (p.kind == PartKind::Transformer) {
-            const double zpu = p.number("z_pct").value_or(5) / 100.0 * kBaseMva /
-                               (p.number("kva").value_or(1) / 1000.0);
-            z = fromMagnitude(zpu, p.number("x_over_r").value_or(6));
+            // kVA and %Z are required ratings: every drawing read or edited has them.
+            const auto tx = TransformerRatings::of(p);
+            const double zpu = tx.zPct / 100.0 * kBaseMva / (tx.kva / 1000.0);
+            z = fromMagnitude(zpu, tx.xOverR);
         } else if (auto ohms = cableOhms(p, t)) {
             z = *ohms / zBase(m.baseV[static_cast<std::size_t>(a)]);
         } else {
             m.issues.push_back({StudyIssueKind::CableNoData,
                                 {p.id},
-                                p.tag + ": no impedance data for " + p.word("size").value_or("?") +
+                                p.tag + ": no impedance data for " + CableRatings::of(p).size +
                                     "; the studies treat it as having none"});
             z = Complex(1e-9, 1e-9);
         }
@@ -127,17 +130,18 @@ void addShunts(NetworkModel& m, const Network& net, const Tables& t, const Setti
             continue;
         const double vb = m.baseV[static_cast<std::size_t>(bus)];
         if (p.kind == PartKind::Source) {
-            const double mva = p.number("fault_mva")
-                                   .value_or(std::sqrt(3.0) * p.number("kv").value_or(0) *
-                                             p.number("fault_ka").value_or(0));
-            m.sources.push_back(
-                {bus, fromMagnitude(kBaseMva / mva, p.number("x_over_r").value_or(15)), p.id});
+            // The source gives exactly one of the two (the kind's validation).
+            const auto src = SourceRatings::of(p);
+            const double mva =
+                src.faultMva ? *src.faultMva : std::sqrt(3.0) * src.kv * src.faultKa.value_or(0);
+            m.sources.push_back({bus, fromMagnitude(kBaseMva / mva, src.xOverR), p.id});
         } else if (p.kind == PartKind::Motor) {
             auto flc = motorFlc(p, t, false);
-            const double amps = p.number("fla").value_or(flc ? flc->amps : 0);
+            const auto motor = MotorRatings::of(p);
+            const double amps = motor.fla ? *motor.fla : flc ? flc->amps : 0;
             if (amps <= 0)
                 continue;
-            const double rated = p.number("volts").value_or(vb);
+            const double rated = motor.volts;
             const double sPu = std::sqrt(3.0) * rated * amps / (kBaseMva * 1e6);
             m.loads.push_back({bus, std::polar(sPu, std::acos(kRunningPf)), p.id});
             if (s.motorContributionX > 0) {
@@ -146,8 +150,9 @@ void addShunts(NetworkModel& m, const Network& net, const Tables& t, const Setti
                 m.motors.push_back({bus, fromMagnitude(zOhm / zBase(vb), kMotorXr), p.id});
             }
         } else if (p.kind == PartKind::Load) {
-            const double pf = p.number("pf").value(); // default: the field table
-            const double kva = p.number("kva").value_or(p.number("kw").value_or(0) / pf);
+            const auto load = LoadRatings::of(p);
+            const double pf = load.pf;
+            const double kva = load.apparentKva();
             m.loads.push_back({bus, std::polar(kva / 1000.0 / kBaseMva, std::acos(pf)), p.id});
         }
     }

@@ -2,6 +2,7 @@
 // same solver of Y) and motor starting (superposition on the load-flow state).
 #include "studies/study.h"
 
+#include "model/ratings.h"
 #include "sizing/motor_sizing.h"
 #include "studies/admittance.h"
 #include "studies/finite_guard.h"
@@ -194,7 +195,7 @@ void motorStarting(StudyResults& r, const Network& net, const Flow& flow, const 
         ms.lockedRotorA = lr->amps;
         const int m = l.bus;
         const double vb = r.model.baseV[static_cast<std::size_t>(m)];
-        const double rated = p.number("volts").value_or(vb);
+        const double rated = MotorRatings::of(p).volts;
         const double zOhm = rated / std::sqrt(3.0) / lr->amps;
         const Complex zlr = std::polar(zOhm / (vb * vb / (kBaseMva * 1e6)), std::acos(s.startPf));
         auto chain = net.branchChain(p.id);

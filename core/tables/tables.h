@@ -2,6 +2,7 @@
 // passed explicitly to the rules and sizing functions.
 #pragma once
 
+#include "model/ratings.h"
 #include "tables/csv_table.h"
 #include "tables/embedded.h"
 
@@ -15,7 +16,6 @@
 
 namespace lineward {
 
-enum class Material { Cu, Al };
 /// Short-circuit and ground-fault device types of NEC Table 430.52(C)(1).
 enum class ScpdType { NonTimeDelayFuse, TimeDelayFuse, InstantaneousBreaker, InverseTimeBreaker };
 /// Motor rows of NEC Table 430.52(C)(1).

@@ -1,6 +1,8 @@
 // Builds the network: union-find over wired terminals, then walks from the sources.
 #include "topology/network.h"
 
+#include "model/ratings.h"
+
 #include <cmath>
 #include <deque>
 #include <numeric>
@@ -21,20 +23,6 @@ struct UnionFind {
     }
     void join(std::size_t a, std::size_t b) { parent[find(a)] = find(b); }
 };
-
-// Rated voltage of a one-terminal part, in volts; 0 where it has none.
-double ratedVolts(const Part& p) {
-    switch (p.kind) {
-    case PartKind::Source:
-        return p.number("kv").value_or(0) * 1000.0;
-    case PartKind::Bus:
-    case PartKind::Motor:
-    case PartKind::Load:
-        return p.number("volts").value_or(0);
-    default:
-        return 0.0;
-    }
-}
 
 bool differs(double systemV, double ratedV, double tolerance) {
     return systemV > 0 && ratedV > 0 && std::abs(systemV - ratedV) > tolerance * ratedV;
@@ -180,12 +168,13 @@ void Network::walkVoltage() {
             double there = here;
             if (p.kind == PartKind::Transformer) {
                 const bool fromPrimary = nodeOf(p.id, 0) == n;
-                const double ratedHere = p.number(fromPrimary ? "pri_v" : "sec_v").value_or(0);
+                const auto tx = TransformerRatings::of(p);
+                const double ratedHere = fromPrimary ? tx.priV : tx.secV;
                 if (differs(here, ratedHere, 0.05))
                     m_conflicts.push_back({p.id, here, ratedHere,
                                            fromPrimary ? "transformer primary rated"
                                                        : "transformer secondary rated"});
-                there = p.number(fromPrimary ? "sec_v" : "pri_v").value_or(0);
+                there = fromPrimary ? tx.secV : tx.priV;
             }
             if (m_graph[t].nominalV == 0) {
                 m_graph[t].nominalV = there;

@@ -123,13 +123,14 @@ TEST(StartingCurves, ASlowRelayLetsAStalledMotorBurn) {
 }
 
 TEST(CheckIncomplete, AFamilyThatThrowsIsReportedAndTheOthersStillRun) {
-    // A motor whose service factor holds a word (no file or editor can make one; a bug could):
-    // the overload sizing throws inside the motor-branch family. The check reports the family
-    // as incomplete and goes on with the rest instead of ending.
+    // An overload relay whose lowest setting holds a word (no file or editor can make one; a
+    // bug could): reading its ratings throws inside the families that judge the relay. The
+    // check reports them as incomplete and goes on with the rest instead of ending.
     EXPECT_TRUE(findingsOf(smallLineup(), "check.incomplete").empty());
     Drawing d = smallLineup();
+    Part* ol = d.part(d.partByTag("OL-1")->id);
+    ol->values[*fieldIndex(PartKind::Overload, "range_min_a")] = std::string("not a number");
     Part* m = d.part(d.partByTag("M-1")->id);
-    m->values[*fieldIndex(PartKind::Motor, "sf")] = std::string("not a number");
     ASSERT_FALSE(m->set("hp", 40.0)); // too big for its lineup: the families still running say so
     const auto report = checkDrawing(d, testTables());
     std::vector<std::string> incomplete;
