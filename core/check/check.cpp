@@ -14,6 +14,7 @@
 
 #include <algorithm>
 #include <cmath>
+#include <unordered_map>
 
 namespace lineward {
 
@@ -109,8 +110,12 @@ void analyse(CheckResult& r, std::vector<Finding>& out) {
     });
     if (!r.study)
         return;
-    const RuleContext ctx = *r.view();
-    runStage("motor facts", out, [&] { computeMotorFacts(r, ctx); });
+    const StudyView view = *r.view();
+    runStage("motor facts", out, [&] { computeMotorFacts(r, view); });
+    std::unordered_map<PartId, const MotorFacts*> factsByMotor;
+    for (const auto& m : r.motors)
+        factsByMotor.emplace(m.branch.motor->id, &m);
+    const RuleContext ctx{view, r.motors, factsByMotor};
     runStage("motor branch", out, [&] { checkMotorBranches(ctx, out); });
     runStage("feeder", out, [&] { checkFeeders(ctx, out); });
     runStage("short-circuit duty", out, [&] { checkDuty(ctx, out); });

@@ -36,14 +36,6 @@ struct CheckReport {
     bool hasOpenAtLeast(Severity threshold) const;
 };
 
-/// What the check computed for one motor, once: its branch, full-load current (NEC Table
-/// 430.250/430.248, no trace text) and starting profile.
-struct MotorFacts {
-    MotorBranch branch;
-    std::optional<MotorFlc> flc;
-    std::optional<StartProfile> start;
-};
-
 /// One analysis of one drawing: immutable once made, shared read-only by every consumer. Each
 /// stage is present when the stage before it could be built (a drawing whose network cannot be
 /// built has findings and nothing else).

@@ -3,6 +3,10 @@
 #pragma once
 
 #include "curves/trip_curve.h"
+#include "sizing/motor_sizing.h"
+#include "topology/motor_branch.h"
+
+#include <optional>
 
 namespace lineward {
 
@@ -18,6 +22,15 @@ struct StartProfile {
     static constexpr double kAsymS =
         0.1; ///< asymmetrical inrush lasts a few cycles (common practice)
     bool lraAssumed = false;
+};
+
+/// What the check computed for one motor, once: its branch, full-load current (NEC Table
+/// 430.250/430.248, no trace text) and starting profile. The rules, schedules and curves read
+/// these instead of computing them again.
+struct MotorFacts {
+    MotorBranch branch;
+    std::optional<MotorFlc> flc;
+    std::optional<StartProfile> start;
 };
 
 } // namespace lineward

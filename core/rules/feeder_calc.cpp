@@ -6,11 +6,11 @@
 
 namespace lineward {
 
-FeederMotorMap feederMotors(const RuleContext& ctx, const std::vector<MotorBranch>& branches) {
+FeederMotorMap feederMotors(const RuleContext& ctx) {
     FeederMotorMap m;
-    for (const auto& b : branches)
-        if (auto flc = motorFlc(*b.motor, ctx.tables, false))
-            m[b.motor->id] = FeederMotor{flc->amps, b.scpd};
+    for (const auto& facts : ctx.motors) // the FLC the check computed once per motor
+        if (facts.flc)
+            m[facts.branch.motor->id] = FeederMotor{facts.flc->amps, facts.branch.scpd};
     return m;
 }
 

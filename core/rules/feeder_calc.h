@@ -29,7 +29,7 @@ struct FeederMotor {
     const Part* scpd = nullptr;
 };
 using FeederMotorMap = std::unordered_map<PartId, FeederMotor>;
-FeederMotorMap feederMotors(const RuleContext& ctx, const std::vector<MotorBranch>& branches);
+FeederMotorMap feederMotors(const RuleContext& ctx);
 
 FeederLoad feederLoad(const RuleContext& ctx, const FeederMotorMap& motors, NodeIndex from);
 

@@ -154,7 +154,7 @@ void checkTransformers(const RuleContext& ctx, const FeederMotorMap& motors,
 
 void checkFeeders(const RuleContext& ctx, std::vector<Finding>& out) {
     const auto& branches = ctx.branches;
-    FeederCheck c{ctx, feederMotors(ctx, branches), {}, out};
+    FeederCheck c{ctx, feederMotors(ctx), {}, out};
     for (const auto& b : branches)
         for (const Part* p : b.chain)
             c.branchParts.insert(p->id);

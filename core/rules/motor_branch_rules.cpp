@@ -145,8 +145,9 @@ void scpd(BranchCheck& c) {
 } // namespace
 
 void checkMotorBranches(const RuleContext& ctx, std::vector<Finding>& out) {
-    for (const auto& b : ctx.branches) {
-        auto flc = motorFlc(*b.motor, ctx.tables, false);
+    for (const auto& facts : ctx.motors) {
+        const MotorBranch& b = facts.branch;
+        const auto& flc = facts.flc; // computed once by the check
         if (!flc) {
             auto f = makeFinding("branch.flc.unknown", {b.motor->id},
                                  b.motor->tag + ": no table full-load current for " +

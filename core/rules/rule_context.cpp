@@ -7,6 +7,11 @@
 
 namespace lineward {
 
+const MotorFacts* RuleContext::facts(PartId motor) const {
+    auto it = factsByMotor.find(motor);
+    return it == factsByMotor.end() ? nullptr : it->second;
+}
+
 double loadAmps(const Part& load) {
     const auto l = LoadRatings::of(load);
     if (l.volts <= 0)

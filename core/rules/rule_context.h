@@ -2,15 +2,23 @@
 // tree, motor branches, tables, study results), read-only.
 #pragma once
 
+#include "curves/path_types.h"
 #include "rules/finding.h"
 #include "studies/study_view.h"
 
+#include <unordered_map>
 #include <vector>
 
 namespace lineward {
 
-/// Read-only inputs of one check: the view of the check result the rules judge.
-using RuleContext = StudyView;
+/// Read-only inputs of one check: the view of the check result the rules judge, with the facts
+/// the check computed once per motor.
+struct RuleContext : StudyView {
+    const std::vector<MotorFacts>& motors; ///< one per motor branch, in the branches' order
+    const std::unordered_map<PartId, const MotorFacts*>& factsByMotor;
+    /// The facts of a motor, or nothing where the check found no branch for it.
+    const MotorFacts* facts(PartId motor) const;
+};
 
 /// Current drawn by a static load at its rated voltage.
 double loadAmps(const Part& load);
@@ -21,6 +29,6 @@ void checkDuty(const RuleContext& ctx, std::vector<Finding>& out);
 void checkVoltage(const RuleContext& ctx, std::vector<Finding>& out);
 void checkCurves(const RuleContext& ctx, std::vector<Finding>& out);
 /// The study issues (what a study could not compute) as findings.
-void reportStudyIssues(const RuleContext& ctx, std::vector<Finding>& out);
+void reportStudyIssues(const StudyView& ctx, std::vector<Finding>& out);
 
 } // namespace lineward

@@ -24,7 +24,7 @@ RuleId ruleOf(StudyIssueKind k) {
 
 } // namespace
 
-void reportStudyIssues(const RuleContext& ctx, std::vector<Finding>& out) {
+void reportStudyIssues(const StudyView& ctx, std::vector<Finding>& out) {
     for (const auto& issue : ctx.study.issues)
         out.push_back(makeFinding(ruleOf(issue.kind), issue.parts, issue.message));
 }

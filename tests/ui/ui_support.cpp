@@ -6,11 +6,13 @@
 #include "main_window.h"
 
 #include <QApplication>
+#include <QCoreApplication>
 #include <QDir>
 #include <QStandardPaths>
 #include <fstream>
 #include <gtest/gtest.h>
 #include <sstream>
+#include <unistd.h>
 
 namespace lineward::ui::test {
 
@@ -42,7 +44,10 @@ const Finding* findingOf(MainWindow& w, const std::string& rule) {
 }
 
 QString tempDir(const char* name) {
-    const QString dir = QDir::tempPath() + "/lineward-ui-" + name;
+    // One folder per process: ctest runs the ui tests two at a time, and another checkout's
+    // tests may run on the same machine.
+    const QString dir = QDir::tempPath() + "/lineward-ui-" +
+                        QString::number(QCoreApplication::applicationPid()) + "-" + name;
     QDir(dir).removeRecursively();
     QDir().mkpath(dir);
     return dir;
@@ -55,11 +60,19 @@ int main(int argc, char** argv) {
     // same tests in a real X window).
     if (qEnvironmentVariableIsEmpty("QT_QPA_PLATFORM"))
         qputenv("QT_QPA_PLATFORM", "offscreen");
-    qputenv("XDG_DATA_HOME", QByteArray((QDir::tempPath() + "/lineward-ui-data").toUtf8()));
+    // Recovery slots and settings live under XDG_DATA_HOME: one folder per process, so that
+    // tests running at the same time never share a recovery slot.
+    const QString data = QDir::tempPath() + "/lineward-ui-data-" + QString::number(::getpid());
+    qputenv("XDG_DATA_HOME", data.toUtf8());
     lineward::ui::Application app(argc, argv); // the program's own exception boundary
     QApplication::setOrganizationName("LinewardTests");
     QApplication::setApplicationName("LinewardTests");
     QStandardPaths::setTestModeEnabled(true);
     ::testing::InitGoogleTest(&argc, argv);
-    return RUN_ALL_TESTS();
+    const int failed = RUN_ALL_TESTS();
+    QDir(data).removeRecursively();
+    const QString mine = "lineward-ui-" + QString::number(::getpid()) + "-*";
+    for (const QString& dir : QDir(QDir::tempPath()).entryList({mine}, QDir::Dirs))
+        QDir(QDir::tempPath() + "/" + dir).removeRecursively();
+    return failed;
 }
