@@ -85,13 +85,17 @@ QString Document::saveAs(const QString& path) {
     return {};
 }
 
-void Document::reset(Drawing drawing, const QString& path) {
+void Document::replaceDrawing(Drawing drawing, const QString& path) {
     m_drawing = std::move(drawing);
     m_path = path;
     m_recovered = false;
     m_undo.clear();
     emit drawingReset();
     emit modifiedChanged();
+}
+
+void Document::reset(Drawing drawing, const QString& path) {
+    replaceDrawing(std::move(drawing), path);
     startCheck();
 }
 
@@ -102,14 +106,9 @@ void Document::resetRecovered(Drawing drawing, const QString& originalPath) {
 }
 
 void Document::resetChecked(std::shared_ptr<const CheckResult> result) {
-    m_drawing = *result->drawing;
-    m_path.clear();
-    m_recovered = false;
-    m_undo.clear();
     ++m_generation; // any check still running is older than this result
-    m_result = std::move(result);
-    emit drawingReset();
-    emit modifiedChanged();
+    m_result = result;
+    replaceDrawing(*result->drawing, QString());
     emit reportChanged();
 }
 

@@ -89,6 +89,8 @@ signals:
     void modifiedChanged();
 
 private:
+    /// The drawing, its path and a cleared undo stack; the signals that say so. No check.
+    void replaceDrawing(Drawing drawing, const QString& path);
     void changed();
     void startCheck();
     void finishCheck(quint64 generation, std::shared_ptr<const CheckResult> result);

@@ -1,5 +1,6 @@
 // Writes the .lineward text: fixed key order, one part/wire/bucket per line.
 #include "io/drawing_file.h"
+#include "io/field_json.h"
 
 #include <nlohmann/json.hpp>
 
@@ -18,32 +19,18 @@ std::string endName(const Drawing& d, const WireEnd& e) {
     return std::to_string(e.part.value) + "." + term;
 }
 
-ojson fieldJson(const FieldValue& v) {
-    if (auto d = std::get_if<double>(&v)) {
-        // Whole numbers are written without a fraction so files read naturally.
-        if (*d == static_cast<double>(static_cast<long long>(*d)) && std::abs(*d) < 1e15)
-            return static_cast<long long>(*d);
-        return *d;
-    }
-    if (auto b = std::get_if<bool>(&v))
-        return *b;
-    if (auto s = std::get_if<std::string>(&v))
-        return *s;
-    return nullptr;
-}
-
 ojson partJson(const Part& p) {
     ojson j;
     j["id"] = p.id.value;
     j["kind"] = kindInfo(p.kind).key;
     j["tag"] = p.tag;
-    j["x"] = fieldJson(p.x);
-    j["y"] = fieldJson(p.y);
+    j["x"] = fieldValueJson(p.x);
+    j["y"] = fieldValueJson(p.y);
     j["rot"] = p.rotation;
     const auto& fields = kindInfo(p.kind).fields;
     for (std::size_t i = 0; i < fields.size() && i < p.values.size(); ++i)
         if (!std::holds_alternative<std::monostate>(p.values[i]))
-            j[std::string(fields[i].key)] = fieldJson(p.values[i]);
+            j[std::string(fields[i].key)] = fieldValueJson(p.values[i]);
     return j;
 }
 
@@ -68,15 +55,15 @@ ojson sheetJson(const SheetInfo& s) {
 
 ojson settingsJson(const Settings& s) {
     ojson j;
-    j["vdrop_branch_pct"] = fieldJson(s.vdropBranchPct);
-    j["vdrop_total_pct"] = fieldJson(s.vdropTotalPct);
-    j["start_dip_pct"] = fieldJson(s.startDipPct);
-    j["start_terminal_pct"] = fieldJson(s.startTerminalPct);
-    j["coordination_margin_s"] = fieldJson(s.coordinationMarginS);
-    j["ambient_c"] = fieldJson(s.ambientC);
-    j["asymmetry_factor"] = fieldJson(s.asymmetryFactor);
-    j["start_pf"] = fieldJson(s.startPf);
-    j["motor_contribution_x"] = fieldJson(s.motorContributionX);
+    j["vdrop_branch_pct"] = fieldValueJson(s.vdropBranchPct);
+    j["vdrop_total_pct"] = fieldValueJson(s.vdropTotalPct);
+    j["start_dip_pct"] = fieldValueJson(s.startDipPct);
+    j["start_terminal_pct"] = fieldValueJson(s.startTerminalPct);
+    j["coordination_margin_s"] = fieldValueJson(s.coordinationMarginS);
+    j["ambient_c"] = fieldValueJson(s.ambientC);
+    j["asymmetry_factor"] = fieldValueJson(s.asymmetryFactor);
+    j["start_pf"] = fieldValueJson(s.startPf);
+    j["motor_contribution_x"] = fieldValueJson(s.motorContributionX);
     return j;
 }
 
@@ -132,7 +119,7 @@ std::string serializeDrawing(const Drawing& d) {
             j["id"] = b.id.value;
             j["tag"] = b.tag;
             if (b.sccrKa)
-                j["sccr_ka"] = fieldJson(*b.sccrKa);
+                j["sccr_ka"] = fieldValueJson(*b.sccrKa);
             j["parts"] = idList(b.parts);
             return j;
         },
@@ -151,6 +138,20 @@ std::string serializeDrawing(const Drawing& d) {
         true);
     out += "}\n";
     return out;
+}
+
+nlohmann::ordered_json fieldValueJson(const FieldValue& v) {
+    if (auto d = std::get_if<double>(&v)) {
+        // Whole numbers are written without a fraction so files read naturally.
+        if (*d == static_cast<double>(static_cast<long long>(*d)) && std::abs(*d) < 1e15)
+            return static_cast<long long>(*d);
+        return *d;
+    }
+    if (auto b = std::get_if<bool>(&v))
+        return *b;
+    if (auto s = std::get_if<std::string>(&v))
+        return *s;
+    return nullptr;
 }
 
 } // namespace lineward::io

@@ -1,6 +1,7 @@
 // Report rendering. Text groups findings under the part they are about (their first part).
 #include "report/report_format.h"
 
+#include "io/field_json.h"
 #include "util/safe_text.h"
 
 #include <cmath>
@@ -22,16 +23,6 @@ std::string partLabel(const Drawing& d, PartId id) {
 // Two decimals are enough for people; JSON keeps full precision.
 std::string rounded(double v) {
     return formatNumber(std::round(v * 100.0) / 100.0);
-}
-
-nlohmann::ordered_json fieldValueJson(const FieldValue& v) {
-    if (auto d = std::get_if<double>(&v))
-        return *d;
-    if (auto b = std::get_if<bool>(&v))
-        return *b;
-    if (auto s = std::get_if<std::string>(&v))
-        return *s;
-    return nullptr;
 }
 
 } // namespace
@@ -102,7 +93,7 @@ nlohmann::ordered_json reportJson(const Drawing& d, const CheckReport& r, const 
             for (const auto& c : f.fix->changes)
                 changes.push_back({{"part", c.part.value},
                                    {"field", c.field},
-                                   {"value", fieldValueJson(c.value)}});
+                                   {"value", io::fieldValueJson(c.value)}});
             e["fix"] = {{"description", f.fix->description}, {"changes", changes}};
         } else {
             e["fix"] = nullptr;
