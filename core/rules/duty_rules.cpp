@@ -6,12 +6,23 @@
 #include "rules/rule_catalog.h"
 #include "rules/rule_context.h"
 #include "sizing/motor_sizing.h"
+#include "studies/network_model.h"
 
 #include <cmath>
 
 namespace lineward {
 
 namespace {
+
+// The assumption behind the running motors' share of every fault current.
+TraceStep motorContributionStep(const RuleContext& ctx) {
+    const double x = ctx.settings().motorContributionX;
+    if (x <= 0)
+        return {"motor contribution", "none (drawing setting 0)"};
+    return {"motor contribution", "each running motor feeds " + fmt(x, 1) + " × its FLC at X/R " +
+                                      fmt(kMotorXr, 0) +
+                                      " (drawing setting and X/R assumed, common practice)"};
+}
 
 void interrupting(const RuleContext& ctx, const Part& d, std::vector<Finding>& out) {
     const auto* f = ctx.study.faultAtNode(ctx.flow.lineNode(d.id));
@@ -29,6 +40,7 @@ void interrupting(const RuleContext& ctx, const Part& d, std::vector<Finding>& o
     x.unit = "kA";
     x.trace = {
         {"available fault current", fmt(f->ikKa, 2) + " kA symmetrical, X/R " + fmt(f->xOverR, 1)},
+        motorContributionStep(ctx),
         {"interrupting rating", fmt(rating) + " kA"}};
     const double next = std::ceil(f->ikKa / 5.0) * 5.0 < 10 ? 10 : std::ceil(f->ikKa / 5.0) * 5.0;
     x.fix = Fix{"use a device rated " + fmt(next, 0) + " kA or more (or series-rated, listed)",
@@ -48,7 +60,8 @@ void bracing(const RuleContext& ctx, const Part& bus, std::vector<Finding>& out)
     x.limit = *rating;
     x.unit = "kA";
     x.trace = {{"available fault current",
-                fmt(f->ikKa, 2) + " kA symmetrical, peak " + fmt(f->peakKa, 2) + " kA"}};
+                fmt(f->ikKa, 2) + " kA symmetrical, peak " + fmt(f->peakKa, 2) + " kA"},
+               motorContributionStep(ctx)};
     const double next = std::ceil(f->ikKa / 5.0) * 5.0;
     x.fix =
         Fix{"brace the bus for " + fmt(next, 0) + " kA", {{bus.id, BusRatings::kBracingKa, next}}};
@@ -74,7 +87,9 @@ void sccr(const RuleContext& ctx, const Bucket& b, std::vector<Finding>& out) {
     x.computed = worst->ikKa;
     x.limit = *b.sccrKa;
     x.unit = "kA";
-    x.trace = {{"bucket", b.tag}, {"available fault current", fmt(worst->ikKa, 2) + " kA"}};
+    x.trace = {{"bucket", b.tag},
+               {"available fault current", fmt(worst->ikKa, 2) + " kA"},
+               motorContributionStep(ctx)};
     x.fix =
         Fix{"use a combination listed for " + fmt(std::ceil(worst->ikKa / 5) * 5, 0) + " kA", {}};
     out.push_back(std::move(x));

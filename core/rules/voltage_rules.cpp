@@ -2,12 +2,19 @@
 #include "rules/rule_catalog.h"
 #include "rules/rule_context.h"
 #include "sizing/motor_sizing.h"
+#include "studies/network_model.h"
 
 #include <cmath>
 
 namespace lineward {
 
 namespace {
+
+// The assumption behind every motor's running load in the load flow.
+TraceStep runningMotorsStep() {
+    return {"running motors", "nameplate FLA (else table FLC) at power factor " +
+                                  fmt(kRunningPf, 2) + " (assumed, common practice)"};
+}
 
 double vAt(const RuleContext& ctx, NodeIndex n) {
     const int b = ctx.study.busOf(n);
@@ -37,7 +44,8 @@ void drops(const RuleContext& ctx, const Part& load, std::vector<Finding>& out) 
         f.unit = "%";
         f.trace = {{"voltage at the branch's bus", fmt(vHead * 100, 2) + " % of nominal"},
                    {"voltage at the load", fmt(vLoad * 100, 2) + " % of nominal"},
-                   {"method", "load flow on the nodal admittance matrix, loads at rated current"}};
+                   {"method", "load flow on the nodal admittance matrix, loads at rated current"},
+                   runningMotorsStep()};
         for (auto id : chain)
             if (ctx.drawing.part(id)->kind == PartKind::Cable)
                 f.fix = Fix{"use a larger cable for " + ctx.tag(id) + " or shorten the run", {}};
@@ -52,7 +60,8 @@ void drops(const RuleContext& ctx, const Part& load, std::vector<Finding>& out) 
         f.unit = "%";
         f.trace = {{"voltage at the supplying transformer or source",
                     fmt(ctx.study.originVoltagePu[static_cast<std::size_t>(bus)] * 100, 2) + " %"},
-                   {"voltage at the load", fmt(vLoad * 100, 2) + " %"}};
+                   {"voltage at the load", fmt(vLoad * 100, 2) + " %"},
+                   runningMotorsStep()};
         f.fix = Fix{"use larger feeder or branch conductors", {}};
         out.push_back(std::move(f));
     }

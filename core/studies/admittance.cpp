@@ -26,7 +26,7 @@ Admittance::Admittance(const NetworkModel& m, bool withMotors) : m_n(m.busCount(
             trip.emplace_back(s.bus, s.bus, 1.0 / s.z);
     // A negligible shunt on every bus keeps Y regular for islands without a source.
     for (int i = 0; i < m_n; ++i)
-        trip.emplace_back(i, i, Complex(1e-12, 0));
+        trip.emplace_back(i, i, Complex(kGroundLeakPu, 0));
     m_y.resize(m_n, m_n);
     m_y.setFromTriplets(trip.begin(), trip.end());
     m_y.makeCompressed();

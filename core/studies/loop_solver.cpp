@@ -10,6 +10,13 @@
 namespace lineward {
 
 namespace {
+// Smallest reciprocal condition number of a loop block's correction matrix that the solver
+// trusts: below it, about 13 of the 16 significant digits of a double would be lost and the
+// study falls back to the sparse LU, which factorises the whole matrix afresh.
+constexpr double kMinReciprocalCondition = 1e-13;
+} // namespace
+
+namespace {
 std::size_t at(int i) {
     return static_cast<std::size_t>(i);
 }
@@ -90,7 +97,7 @@ bool LoopSolver::correct(Block& b, std::vector<Complex>& current, std::vector<Co
         mm(c, c) += ch.z;
     }
     const Eigen::PartialPivLU<Eigen::MatrixXcd> lu(mm);
-    if (!(lu.rcond() > 1e-13)) // also false for NaN
+    if (!(lu.rcond() > kMinReciprocalCondition)) // also false for NaN
         return false;
     b.mInv = lu.inverse();
     if (!b.mInv.allFinite())

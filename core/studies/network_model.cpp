@@ -115,7 +115,7 @@ void addBranches(NetworkModel& m, const Network& net, const Tables& t) {
                                 {p.id},
                                 p.tag + ": no impedance data for " + CableRatings::of(p).size +
                                     "; the studies treat it as having none"});
-            z = Complex(1e-9, 1e-9);
+            z = Complex(kNoDataCablePu, kNoDataCablePu);
         }
         m.branches.push_back({a, b, z, p.id});
     }

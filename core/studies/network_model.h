@@ -59,6 +59,15 @@ NetworkModel buildNetworkModel(const Network& net, const Tables& tables, const S
 /// resistivity). Nothing when the size has no data.
 std::optional<Complex> cableOhms(const Part& cable, const Tables& tables);
 
+/// Admittance to ground added at every bus (per unit): keeps the admittance matrix regular for
+/// an island with no source (it would otherwise be singular) while changing no fault or
+/// voltage result in the digits shown (1e12 per unit: about 2e9 ohms at 480 V on the 100 MVA
+/// base).
+inline constexpr double kGroundLeakPu = 1e-12;
+/// Impedance (per unit, R and X each) given to a cable whose size has no impedance data: a
+/// closed connection that the studies treat as having none, as their study issue says.
+inline constexpr double kNoDataCablePu = 1e-9;
+
 /// Power factor of running motors (common practice).
 inline constexpr double kRunningPf = 0.85;
 /// X/R of a motor's fault contribution (common practice for low-voltage induction motors).

@@ -18,7 +18,7 @@ std::size_t at(int i) {
 } // namespace
 
 std::vector<Complex> TreeSolver::shunts(const NetworkModel& m, bool withMotors) {
-    std::vector<Complex> shunt(at(m.busCount()), Complex(1e-12, 0));
+    std::vector<Complex> shunt(at(m.busCount()), Complex(kGroundLeakPu, 0));
     for (const auto& s : m.sources)
         shunt[at(s.bus)] += 1.0 / s.z;
     if (withMotors)

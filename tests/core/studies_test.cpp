@@ -258,6 +258,18 @@ TEST(DutyRules, InterruptingBracingAndSccr) {
     EXPECT_EQ(count("duty.bracing"), 1);
     ASSERT_FALSE(d.part(PartId(5))->set("interrupting_ka", 25.0));
     EXPECT_EQ(count("duty.interrupting"), 1);
+    // The motor contribution the fault current includes is stated in the trace, with the
+    // drawing's setting.
+    for (const auto& f : checkDrawing(d, testTables()).findings)
+        if (f.ruleId == "duty.interrupting") {
+            const auto step = std::find_if(f.trace.begin(), f.trace.end(), [](const auto& s) {
+                return s.name == "motor contribution";
+            });
+            ASSERT_NE(step, f.trace.end());
+            EXPECT_NE(step->value.find(fmt(d.settings.motorContributionX, 1) + " × its FLC"),
+                      std::string::npos)
+                << step->value;
+        }
     EXPECT_EQ(count("duty.sccr"), 0); // bucket rated 65 kA
     Bucket b = *d.bucket(BucketId(1));
     b.sccrKa = 22.0;

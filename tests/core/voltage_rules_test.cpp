@@ -53,6 +53,12 @@ TEST(VoltageDrop, TheTotalDropIsJudgedOnItsOwnLimit) {
     const auto f = findingsOf(d, "voltage.drop.total");
     ASSERT_EQ(f.size(), 1u);
     EXPECT_GT(*f[0].computed, 5.0);
+    // The assumed running power factor is named where it was used.
+    bool pfNamed = false;
+    for (const auto& step : f[0].trace)
+        pfNamed = pfNamed || (step.name == "running motors" &&
+                              step.value.find("0.85 (assumed") != std::string::npos);
+    EXPECT_TRUE(pfNamed);
     EXPECT_TRUE(findingsOf(smallLineup(), "voltage.drop.total").empty());
 }
 
