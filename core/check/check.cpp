@@ -3,6 +3,7 @@
 #include "check/check.h"
 
 #include "curves/path_curves.h"
+#include "model/ratings.h"
 #include "rules/drawing_rules.h"
 #include "rules/rule_catalog.h"
 #include "rules/rule_context.h"
@@ -90,6 +91,11 @@ void computeMotorFacts(CheckResult& r, const StudyView& view) {
         MotorFacts m{b, motorFlc(*b.motor, *r.tables, false), startProfile(view, *b.motor)};
         r.motors.push_back(std::move(m));
     }
+    for (const auto& p : r.drawing->parts())
+        if (p.kind == PartKind::Cable && r.net->partEnergized(p.id))
+            if (auto a = cableAmpacity(CableRatings::of(p).size,
+                                       conditionsOf(p, r.drawing->settings), *r.tables, false))
+                r.cableAmpacityA.emplace(p.id, a->amps);
 }
 
 void analyse(CheckResult& r, std::vector<Finding>& out) {

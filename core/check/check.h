@@ -14,6 +14,7 @@
 #include <cstdint>
 #include <memory>
 #include <optional>
+#include <unordered_map>
 #include <vector>
 
 namespace lineward {
@@ -48,6 +49,9 @@ struct CheckResult {
     std::unique_ptr<const StudyResults> study;
     std::vector<MotorBranch> branches;
     std::vector<MotorFacts> motors; ///< one per motor the network reaches
+    /// Each energized cable's ampacity (NEC Table 310.16 with its conditions), where the table
+    /// has its size: what the schedules show.
+    std::unordered_map<PartId, double> cableAmpacityA;
     CheckReport report;
 
     CheckResult();

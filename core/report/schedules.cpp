@@ -53,7 +53,6 @@ std::string faultAt(const StudyResults& r, NodeIndex n) {
 
 std::vector<Schedule> buildSchedules(const CheckResult& result) {
     const Drawing& d = *result.drawing;
-    const Tables& t = *result.tables;
     Schedule motors{"motors",
                     {"Tag", "Rating", "Volts", "FLC A", "FLA A", "Short-circuit device",
                      "Contactor", "Overload A", "Class", "Conductor", "Length ft", "EGC", "Drop %",
@@ -97,11 +96,12 @@ std::vector<Schedule> buildSchedules(const CheckResult& result) {
         auto load = r.loadAmps.find(p.id);
         if (p.kind == PartKind::Cable) {
             const auto cr = CableRatings::of(p);
-            auto amp = cableAmpacity(cr.size, conditionsOf(p, d.settings), t, false);
+            const auto amp = result.cableAmpacityA.find(p.id); // computed once by the check
             const double drop = dropPct(r, net, flow, p);
             cables.rows.push_back(
                 {p.tag, cr.material == Material::Al ? "Al" : "Cu", cr.size, std::to_string(cr.sets),
-                 fmt(cr.lengthFt, 0), std::to_string(cr.insulationC), amp ? fmt(amp->amps) : "",
+                 fmt(cr.lengthFt, 0), std::to_string(cr.insulationC),
+                 amp != result.cableAmpacityA.end() ? fmt(amp->second) : "",
                  load == r.loadAmps.end() ? "" : fmt(load->second),
                  std::isnan(drop) ? "" : fmt(drop, 2), faultAt(r, flow.lineNode(p.id))});
         } else if (kindInfo(p.kind).protective) {
