@@ -1,7 +1,8 @@
-// Reading typed ratings from a part. Defaults come from the field table through Part::number;
+// Reading typed ratings from a part. Defaults come from the field table;
 // choice words become enums here and nowhere else.
 #include "model/ratings.h"
 
+#include <array>
 #include <stdexcept>
 
 namespace lineward {
@@ -14,47 +15,117 @@ void expectKind(const Part& p, PartKind kind) {
                                p.tag + ", a " + std::string(kindInfo(p.kind).key));
 }
 
-// A number rating, its default when empty; a value of another type is a bug (no file or edit
-// can make one) and stops the reading instead of passing for "absent".
-std::optional<double> opt(const Part& p, std::string_view key) {
-    const FieldValue& v = p.value(key);
-    if (!std::holds_alternative<std::monostate>(v) && !std::holds_alternative<double>(v))
-        throw std::logic_error(p.tag + ": rating " + std::string(key) +
-                               " holds a value that is not a number");
-    return p.number(key);
+// Where a key sits in each kind's field list, found once per place that reads it: the check
+// reads ratings hundreds of thousands of times, and a search by name each time was a third of
+// its cost. A function-local static is built once, thread-safely (the editor checks on a
+// worker thread while the window reads the same parts).
+struct Place {
+    std::size_t index = 0;
+    const FieldSpec* spec = nullptr; ///< null: the kind has no such field
+};
+using KindIndex = std::array<Place, kPartKindCount>;
+
+KindIndex fieldIndices(std::string_view key) {
+    KindIndex t;
+    for (int k = 0; k < kPartKindCount; ++k)
+        if (auto i = fieldIndex(static_cast<PartKind>(k), key))
+            t[static_cast<std::size_t>(k)] = {*i, &kindInfo(static_cast<PartKind>(k)).fields[*i]};
+    return t;
+}
+
+struct Slot {
+    const KindIndex* at;
+    std::string_view key;
+};
+#define SLOT(key)                                                                                  \
+    (Slot{[] {                                                                                     \
+              static const KindIndex t = fieldIndices(key);                                        \
+              return &t;                                                                           \
+          }(),                                                                                     \
+          (key)})
+
+const FieldValue kEmpty{};
+
+[[noreturn]] void noField(const Part& p, Slot s) {
+    throw std::logic_error("part kind " + std::string(kindInfo(p.kind).key) + " has no field " +
+                           std::string(s.key));
+}
+
+// The stored value and the field's spec; a key the kind lacks is a bug and throws.
+inline std::pair<const FieldValue*, const FieldSpec*> slotOf(const Part& p, Slot s) {
+    const Place& at = (*s.at)[static_cast<std::size_t>(p.kind)];
+    if (!at.spec)
+        noField(p, s);
+    return {at.index < p.values.size() ? &p.values[at.index] : &kEmpty, at.spec};
+}
+
+// A value of another type than the field's is a bug (no file or edit can make one): it stops
+// the reading instead of passing for "absent".
+[[noreturn]] void wrongType(const Part& p, Slot s, const char* expected) {
+    throw std::logic_error(p.tag + ": rating " + std::string(s.key) +
+                           " holds a value that is not " + expected);
+}
+
+// A rating read as its type, else its default when empty (one default per rating: the field
+// table's), else nothing.
+template <class T> inline std::optional<T> read(const Part& p, Slot s, const char* expected) {
+    const auto [v, spec] = slotOf(p, s);
+    if (auto x = std::get_if<T>(v))
+        return *x;
+    if (!std::holds_alternative<std::monostate>(*v))
+        wrongType(p, s, expected);
+    if (auto d = std::get_if<T>(&spec->defaultValue))
+        return *d;
+    return std::nullopt;
+}
+
+inline std::optional<double> opt(const Part& p, Slot s) {
+    return read<double>(p, s, "a number");
 }
 // A rating with a default in the field table, or a required one (0 when absent; see ratings.h).
-double num(const Part& p, std::string_view key) {
-    return opt(p, key).value_or(0.0);
+inline double num(const Part& p, Slot s) {
+    return opt(p, s).value_or(0.0);
 }
-int whole(const Part& p, std::string_view key) {
-    return static_cast<int>(num(p, key));
+int whole(const Part& p, Slot s) {
+    return static_cast<int>(num(p, s));
 }
-std::string text(const Part& p, std::string_view key) {
-    if (auto w = p.word(key))
-        return *w;
-    // An empty choice reads as its default, as a number does (Part::number).
-    if (const FieldSpec* f = findField(p.kind, key))
-        if (auto s = std::get_if<std::string>(&f->defaultValue))
-            return *s;
-    return {};
+// The stored text, else the field's default text, else nothing; no copy.
+inline const std::string* wordRef(const Part& p, Slot s) {
+    const auto [v, spec] = slotOf(p, s);
+    if (auto x = std::get_if<std::string>(v))
+        return x;
+    if (!std::holds_alternative<std::monostate>(*v))
+        wrongType(p, s, "text");
+    return std::get_if<std::string>(&spec->defaultValue);
+}
+std::optional<std::string> word(const Part& p, Slot s) {
+    const std::string* w = wordRef(p, s);
+    return w ? std::optional(*w) : std::nullopt;
+}
+std::string text(const Part& p, Slot s) {
+    const std::string* w = wordRef(p, s);
+    return w ? *w : std::string(); // empty: not given
+}
+bool flag(const Part& p, Slot s) {
+    return read<bool>(p, s, "true or false").value_or(false);
 }
 
 template <class E, std::size_t N>
-E choice(const Part& p, std::string_view key, const std::pair<std::string_view, E> (&words)[N]) {
-    const std::string w = text(p, key);
+E choice(const Part& p, Slot key, const std::pair<std::string_view, E> (&words)[N]) {
+    const std::string* stored = wordRef(p, key);
+    const std::string_view w = stored ? std::string_view(*stored) : std::string_view();
     for (const auto& [word, e] : words)
         if (word == w)
             return e;
-    throw std::logic_error(std::string(kindInfo(p.kind).key) + " " + std::string(key) +
-                           " has no enum for '" + w + "'");
+    throw std::logic_error(std::string(kindInfo(p.kind).key) + " " + std::string(key.key) +
+                           " has no enum for '" + std::string(w) + "'");
 }
 
 void protective(const Part& p, ProtectiveData& d) {
-    d.interruptingKa = num(p, ProtectiveData::kInterruptingKa);
-    d.letThroughA2s = opt(p, ProtectiveData::kLetThrough);
-    d.clearS = opt(p, ProtectiveData::kClearS);
-    d.curvePoints = text(p, ProtectiveData::kCurvePoints);
+    d.interruptingKa = num(p, SLOT(ProtectiveData::kInterruptingKa));
+    d.letThroughA2s = opt(p, SLOT(ProtectiveData::kLetThrough));
+    d.clearS = opt(p, SLOT(ProtectiveData::kClearS));
+    d.curvePoints = text(p, SLOT(ProtectiveData::kCurvePoints));
 }
 
 } // namespace
@@ -70,21 +141,21 @@ std::optional<ProtectiveData> protectiveDataOf(const Part& p) {
 SourceRatings SourceRatings::of(const Part& p) {
     expectKind(p, PartKind::Source);
     SourceRatings r;
-    r.kv = num(p, kKv);
-    r.faultKa = opt(p, kFaultKa);
-    r.faultMva = opt(p, kFaultMva);
-    r.xOverR = num(p, kXOverR);
+    r.kv = num(p, SLOT(kKv));
+    r.faultKa = opt(p, SLOT(kFaultKa));
+    r.faultMva = opt(p, SLOT(kFaultMva));
+    r.xOverR = num(p, SLOT(kXOverR));
     return r;
 }
 
 TransformerRatings TransformerRatings::of(const Part& p) {
     expectKind(p, PartKind::Transformer);
     TransformerRatings r;
-    r.kva = num(p, kKva);
-    r.priV = num(p, kPriV);
-    r.secV = num(p, kSecV);
-    r.zPct = num(p, kZPct);
-    r.xOverR = num(p, kXOverR);
+    r.kva = num(p, SLOT(kKva));
+    r.priV = num(p, SLOT(kPriV));
+    r.secV = num(p, SLOT(kSecV));
+    r.zPct = num(p, SLOT(kZPct));
+    r.xOverR = num(p, SLOT(kXOverR));
     return r;
 }
 
@@ -95,11 +166,11 @@ BusRatings BusRatings::of(const Part& p) {
         {"mcc", BusType::Mcc},
         {"panelboard", BusType::Panelboard}};
     BusRatings r;
-    r.type = choice(p, kType, kWords);
-    r.volts = num(p, kVolts);
-    r.amps = num(p, kAmps);
-    r.bracingKa = opt(p, kBracingKa);
-    r.phases = whole(p, kPhases);
+    r.type = choice(p, SLOT(kType), kWords);
+    r.volts = num(p, SLOT(kVolts));
+    r.amps = num(p, SLOT(kAmps));
+    r.bracingKa = opt(p, SLOT(kBracingKa));
+    r.phases = whole(p, SLOT(kPhases));
     return r;
 }
 
@@ -109,16 +180,16 @@ BreakerRatings BreakerRatings::of(const Part& p) {
         {"thermal_magnetic", TripType::ThermalMagnetic}, {"electronic", TripType::Electronic}};
     BreakerRatings r;
     protective(p, r);
-    r.tripType = choice(p, kTripType, kWords);
-    r.frameA = opt(p, kFrameA);
-    r.tripA = num(p, kTripA);
-    r.instX = opt(p, kInstX);
-    r.ltPickupX = opt(p, kLtPickupX);
-    r.ltDelayS = opt(p, kLtDelayS);
-    r.stPickupX = opt(p, kStPickupX);
-    r.stDelayS = opt(p, kStDelayS);
-    r.stI2t = p.flag(kStI2t);
-    r.open = p.flag(kOpen);
+    r.tripType = choice(p, SLOT(kTripType), kWords);
+    r.frameA = opt(p, SLOT(kFrameA));
+    r.tripA = num(p, SLOT(kTripA));
+    r.instX = opt(p, SLOT(kInstX));
+    r.ltPickupX = opt(p, SLOT(kLtPickupX));
+    r.ltDelayS = opt(p, SLOT(kLtDelayS));
+    r.stPickupX = opt(p, SLOT(kStPickupX));
+    r.stDelayS = opt(p, SLOT(kStDelayS));
+    r.stI2t = flag(p, SLOT(kStI2t));
+    r.open = flag(p, SLOT(kOpen));
     return r;
 }
 
@@ -126,11 +197,11 @@ InstBreakerRatings InstBreakerRatings::of(const Part& p) {
     expectKind(p, PartKind::InstBreaker);
     InstBreakerRatings r;
     protective(p, r);
-    r.amps = num(p, kAmps);
-    r.pickupA = num(p, kPickupA);
-    r.pickupMinA = opt(p, kPickupMinA);
-    r.pickupMaxA = opt(p, kPickupMaxA);
-    r.open = p.flag(kOpen);
+    r.amps = num(p, SLOT(kAmps));
+    r.pickupA = num(p, SLOT(kPickupA));
+    r.pickupMinA = opt(p, SLOT(kPickupMinA));
+    r.pickupMaxA = opt(p, SLOT(kPickupMaxA));
+    r.open = flag(p, SLOT(kOpen));
     return r;
 }
 
@@ -140,39 +211,39 @@ FuseRatings FuseRatings::of(const Part& p) {
         {"time_delay", FuseType::TimeDelay}, {"fast", FuseType::Fast}};
     FuseRatings r;
     protective(p, r);
-    r.type = choice(p, kType, kWords);
-    r.fuseClass = p.word(kClass);
-    r.amps = num(p, kAmps);
+    r.type = choice(p, SLOT(kType), kWords);
+    r.fuseClass = word(p, SLOT(kClass));
+    r.amps = num(p, SLOT(kAmps));
     return r;
 }
 
 DisconnectRatings DisconnectRatings::of(const Part& p) {
     expectKind(p, PartKind::Disconnect);
     DisconnectRatings r;
-    r.amps = num(p, kAmps);
-    r.hpRating = opt(p, kHpRating);
-    r.fused = p.flag(kFused);
-    r.open = p.flag(kOpen);
+    r.amps = num(p, SLOT(kAmps));
+    r.hpRating = opt(p, SLOT(kHpRating));
+    r.fused = flag(p, SLOT(kFused));
+    r.open = flag(p, SLOT(kOpen));
     return r;
 }
 
 ContactorRatings ContactorRatings::of(const Part& p) {
     expectKind(p, PartKind::Contactor);
     ContactorRatings r;
-    r.nemaSize = p.word(kNemaSize);
-    r.ac3A = opt(p, kAc3A);
-    r.open = p.flag(kOpen);
+    r.nemaSize = word(p, SLOT(kNemaSize));
+    r.ac3A = opt(p, SLOT(kAc3A));
+    r.open = flag(p, SLOT(kOpen));
     return r;
 }
 
 OverloadRatings OverloadRatings::of(const Part& p) {
     expectKind(p, PartKind::Overload);
     OverloadRatings r;
-    r.settingA = num(p, kSettingA);
-    r.rangeMinA = opt(p, kRangeMinA);
-    r.rangeMaxA = opt(p, kRangeMaxA);
-    r.tripClass = text(p, kTripClass);
-    r.curvePoints = text(p, kCurvePoints);
+    r.settingA = num(p, SLOT(kSettingA));
+    r.rangeMinA = opt(p, SLOT(kRangeMinA));
+    r.rangeMaxA = opt(p, SLOT(kRangeMaxA));
+    r.tripClass = text(p, SLOT(kTripClass));
+    r.curvePoints = text(p, SLOT(kCurvePoints));
     return r;
 }
 
@@ -183,16 +254,16 @@ CableRatings CableRatings::of(const Part& p) {
     static constexpr std::pair<std::string_view, Raceway> kRaceways[] = {
         {"steel", Raceway::Steel}, {"pvc", Raceway::Pvc}, {"aluminum", Raceway::Aluminum}};
     CableRatings r;
-    r.material = choice(p, kMaterial, kMaterials);
-    r.size = text(p, kSize);
-    r.sets = whole(p, kSets);
-    r.lengthFt = num(p, kLengthFt);
-    r.insulationC = whole(p, kInsulationC);
-    r.terminationC = whole(p, kTerminationC);
-    r.raceway = choice(p, kRaceway, kRaceways);
-    r.conductors = whole(p, kConductors);
-    r.ambientC = opt(p, kAmbientC);
-    r.egcSize = text(p, kEgcSize);
+    r.material = choice(p, SLOT(kMaterial), kMaterials);
+    r.size = text(p, SLOT(kSize));
+    r.sets = whole(p, SLOT(kSets));
+    r.lengthFt = num(p, SLOT(kLengthFt));
+    r.insulationC = whole(p, SLOT(kInsulationC));
+    r.terminationC = whole(p, SLOT(kTerminationC));
+    r.raceway = choice(p, SLOT(kRaceway), kRaceways);
+    r.conductors = whole(p, SLOT(kConductors));
+    r.ambientC = opt(p, SLOT(kAmbientC));
+    r.egcSize = text(p, SLOT(kEgcSize));
     return r;
 }
 
@@ -203,52 +274,52 @@ MotorRatings MotorRatings::of(const Part& p) {
         {"wound_rotor", Rotor::WoundRotor},
         {"synchronous", Rotor::Synchronous}};
     MotorRatings r;
-    r.hp = opt(p, kHp);
-    r.kw = opt(p, kKw);
-    r.volts = num(p, kVolts);
-    r.phases = whole(p, kPhases);
-    r.fla = opt(p, kFla);
-    r.serviceFactor = num(p, kSf);
-    r.design = text(p, kDesign);
-    r.rotor = choice(p, kRotor, kRotors);
-    r.codeLetter = p.word(kCodeLetter);
-    r.lra = opt(p, kLra);
-    r.accelS = num(p, kAccelS);
-    r.stallHotS = opt(p, kStallHotS);
-    r.stallColdS = opt(p, kStallColdS);
-    r.tempRiseC = opt(p, kTempRiseC);
-    r.premiumEff = p.flag(kPremiumEff);
-    r.hardToStart = p.flag(kHardToStart);
+    r.hp = opt(p, SLOT(kHp));
+    r.kw = opt(p, SLOT(kKw));
+    r.volts = num(p, SLOT(kVolts));
+    r.phases = whole(p, SLOT(kPhases));
+    r.fla = opt(p, SLOT(kFla));
+    r.serviceFactor = num(p, SLOT(kSf));
+    r.design = text(p, SLOT(kDesign));
+    r.rotor = choice(p, SLOT(kRotor), kRotors);
+    r.codeLetter = word(p, SLOT(kCodeLetter));
+    r.lra = opt(p, SLOT(kLra));
+    r.accelS = num(p, SLOT(kAccelS));
+    r.stallHotS = opt(p, SLOT(kStallHotS));
+    r.stallColdS = opt(p, SLOT(kStallColdS));
+    r.tempRiseC = opt(p, SLOT(kTempRiseC));
+    r.premiumEff = flag(p, SLOT(kPremiumEff));
+    r.hardToStart = flag(p, SLOT(kHardToStart));
     return r;
 }
 
 LoadRatings LoadRatings::of(const Part& p) {
     expectKind(p, PartKind::Load);
     LoadRatings r;
-    r.kva = opt(p, kKva);
-    r.kw = opt(p, kKw);
-    r.pf = num(p, kPf);
-    r.volts = num(p, kVolts);
-    r.phases = whole(p, kPhases);
-    r.continuous = p.flag(kContinuous);
+    r.kva = opt(p, SLOT(kKva));
+    r.kw = opt(p, SLOT(kKw));
+    r.pf = num(p, SLOT(kPf));
+    r.volts = num(p, SLOT(kVolts));
+    r.phases = whole(p, SLOT(kPhases));
+    r.continuous = flag(p, SLOT(kContinuous));
     return r;
 }
 
 std::string userCurvePoints(const Part& p) {
-    return fieldIndex(p.kind, ProtectiveData::kCurvePoints) ? text(p, ProtectiveData::kCurvePoints)
-                                                            : std::string();
+    const Slot s = SLOT(ProtectiveData::kCurvePoints);
+    return (*s.at)[static_cast<std::size_t>(p.kind)].spec ? text(p, s) : std::string();
 }
 
 double ratedVolts(const Part& p) {
     switch (p.kind) {
     case PartKind::Source:
-        return num(p, SourceRatings::kKv) * 1000.0;
+        return num(p, SLOT(SourceRatings::kKv)) * 1000.0;
     case PartKind::Bus:
-        return num(p, BusRatings::kVolts);
+        return num(p, SLOT(BusRatings::kVolts));
     case PartKind::Motor:
-        return num(p, MotorRatings::kVolts);
+        return num(p, SLOT(MotorRatings::kVolts));
     case PartKind::Load:
-        return num(p, LoadRatings::kVolts);
+        return num(p, SLOT(LoadRatings::kVolts));
     default:
         return 0.0;
     }
@@ -259,7 +330,8 @@ std::string_view ampereRatingKey(PartKind kind) {
 }
 
 double ampereRatingA(const Part& device) {
-    return num(device, ampereRatingKey(device.kind));
+    return device.kind == PartKind::Breaker ? num(device, SLOT(BreakerRatings::kTripA))
+                                            : num(device, SLOT(InstBreakerRatings::kAmps));
 }
 
 std::string_view branchSettingKey(PartKind kind) {
@@ -267,7 +339,8 @@ std::string_view branchSettingKey(PartKind kind) {
 }
 
 double branchSettingA(const Part& device) {
-    return num(device, branchSettingKey(device.kind));
+    return device.kind == PartKind::InstBreaker ? num(device, SLOT(InstBreakerRatings::kPickupA))
+                                                : ampereRatingA(device);
 }
 
 } // namespace lineward
