@@ -52,15 +52,15 @@ TripCurve TripCurve::ofBreaker(const Part& p) {
     const auto assumed = [](bool given) { return given ? "" : " (assumed)"; };
     if (b.tripType == TripType::Electronic) {
         c.m_model = Model::Electronic;
-        // A long-time pickup not given is the trip rating itself (1.0 ×); no short-time or
-        // instantaneous element where none is given.
-        const double ir = c.m_ratingA * b.ltPickupX.value_or(1.0);
+        // No short-time or instantaneous element where none is given.
+        const double ir = c.m_ratingA * b.ltPickupX.value_or(kAssumedLongTimePickupX);
         c.m_a = ir;
         c.m_b = b.ltDelayS.value_or(kAssumedLongTimeDelayS);
         c.m_c = b.stPickupX ? *b.stPickupX * ir : 0;
         c.m_d = b.instX ? *b.instX * c.m_ratingA : 0;
         c.m_pickupA = 1.05 * ir;
-        c.m_label = p.tag + " " + num(c.m_ratingA) + " A LSI, LT " + num(c.m_b) + " s" +
+        c.m_label = p.tag + " " + num(c.m_ratingA) + " A LSI, LT " +
+                    (b.ltPickupX ? "" : num(ir) + " A (assumed) ") + num(c.m_b) + " s" +
                     assumed(b.ltDelayS.has_value()) +
                     (c.m_c > 0 ? ", ST " + num(c.m_c) + " A " +
                                      num(b.stDelayS.value_or(kAssumedShortTimeDelayS)) + " s" +

@@ -20,6 +20,9 @@ inline constexpr double kNoTrip = std::numeric_limits<double>::infinity();
 /// electronic trip unit's long-time band of 10 s at 6 × pickup and short-time band of 0.1 s
 /// (common practice: middle settings of the usual ranges).
 inline constexpr double kAssumedThermalMagneticInstX = 10.0;
+/// An electronic trip unit's long-time pickup left blank: the trip rating itself (1.0 ×, the
+/// highest setting; common practice).
+inline constexpr double kAssumedLongTimePickupX = 1.0;
 inline constexpr double kAssumedLongTimeDelayS = 10.0;
 inline constexpr double kAssumedShortTimeDelayS = 0.1;
 

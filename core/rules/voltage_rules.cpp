@@ -44,7 +44,8 @@ void drops(const RuleContext& ctx, const Part& load, std::vector<Finding>& out) 
         f.unit = "%";
         f.trace = {{"voltage at the branch's bus", fmt(vHead * 100, 2) + " % of nominal"},
                    {"voltage at the load", fmt(vLoad * 100, 2) + " % of nominal"},
-                   {"method", "load flow on the nodal admittance matrix, loads at rated current"},
+                   {"method", "load flow on the nodal admittance matrix; each load draws its rated "
+                              "power (a motor √3 × rated V × FLA) as constant power"},
                    runningMotorsStep()};
         for (auto id : chain)
             if (ctx.drawing.part(id)->kind == PartKind::Cable)
