@@ -112,6 +112,10 @@ void PartItem::setBarSpan(qreal left, qreal right) {
 }
 
 void PartItem::setBadge(std::optional<Severity> worst, const QString& tooltip) {
+    // Most parts keep their badge across an edit: only the ones that change are redrawn (a
+    // refresh of every label was most of an edit's cost on a large drawing).
+    if (worst == m_badge && tooltip == m_badgeTip)
+        return;
     m_badge = worst;
     m_badgeTip = tooltip;
     refreshText();

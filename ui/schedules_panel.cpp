@@ -1,13 +1,45 @@
-// SchedulesPanel: rebuilt from the check result's schedules after each check, when shown.
+// SchedulesPanel: the check result's schedules in model/view tables, refilled after each
+// check while shown.
 #include "schedules_panel.h"
 
 #include "guard.h"
-#include "report/schedules.h"
 
 #include <QHeaderView>
-#include <QTableWidget>
+#include <QTableView>
 
 namespace lineward::ui {
+
+void ScheduleModel::setSchedule(Schedule s) {
+    beginResetModel();
+    m_schedule = std::move(s);
+    endResetModel();
+}
+
+int ScheduleModel::rowCount(const QModelIndex& parent) const {
+    return parent.isValid() ? 0 : static_cast<int>(m_schedule.rows.size());
+}
+
+int ScheduleModel::columnCount(const QModelIndex& parent) const {
+    return parent.isValid() ? 0 : static_cast<int>(m_schedule.headers.size());
+}
+
+QVariant ScheduleModel::data(const QModelIndex& index, int role) const {
+    if (role != Qt::DisplayRole || !index.isValid())
+        return {};
+    const auto& row = m_schedule.rows[static_cast<std::size_t>(index.row())];
+    const auto c = static_cast<std::size_t>(index.column());
+    return c < row.size() ? QString::fromStdString(row[c]) : QString();
+}
+
+QVariant ScheduleModel::headerData(int section, Qt::Orientation o, int role) const {
+    if (role != Qt::DisplayRole)
+        return {};
+    if (o == Qt::Vertical)
+        return section + 1;
+    return section >= 0 && static_cast<std::size_t>(section) < m_schedule.headers.size()
+               ? QString::fromStdString(m_schedule.headers[static_cast<std::size_t>(section)])
+               : QVariant();
+}
 
 SchedulesPanel::SchedulesPanel(Document& doc, QWidget* parent) : QTabWidget(parent), m_doc(doc) {
     setObjectName("schedules");
@@ -30,33 +62,32 @@ void SchedulesPanel::refresh() {
 
 void SchedulesPanel::rebuild() {
     m_stale = false;
-    const int current = currentIndex();
-    while (count() > 0) {
-        QWidget* w = widget(0);
-        removeTab(0);
-        delete w;
+    auto schedules = buildSchedules(m_doc.result());
+    for (std::size_t i = 0; i < schedules.size(); ++i) {
+        if (i == m_models.size()) { // the first fill makes the tabs; later ones reuse them
+            auto* model = new ScheduleModel(this);
+            auto* view = new QTableView;
+            view->setModel(model);
+            view->setObjectName(QString::fromStdString("schedule_" + schedules[i].name));
+            view->setEditTriggers(QAbstractItemView::NoEditTriggers);
+            view->verticalHeader()->hide();
+            // Widths from the first rows, not every row (a large plant has thousands).
+            view->horizontalHeader()->setResizeContentsPrecision(50);
+            QString name = QString::fromStdString(schedules[i].name);
+            name[0] = name[0].toUpper();
+            addTab(view, name);
+            m_models.push_back(model);
+            m_views.push_back(view);
+            m_sized.push_back(false);
+        }
+        const bool hasRows = !schedules[i].rows.empty();
+        m_models[i]->setSchedule(std::move(schedules[i]));
+        // Columns fit their contents once; after that the user's widths stay as they are.
+        if (hasRows && !m_sized[i]) {
+            m_views[i]->resizeColumnsToContents();
+            m_sized[i] = true;
+        }
     }
-    for (const auto& s : buildSchedules(m_doc.result())) {
-        auto* table =
-            new QTableWidget(static_cast<int>(s.rows.size()), static_cast<int>(s.headers.size()));
-        table->setObjectName(QString::fromStdString("schedule_" + s.name));
-        QStringList headers;
-        for (const auto& h : s.headers)
-            headers << QString::fromStdString(h);
-        table->setHorizontalHeaderLabels(headers);
-        for (std::size_t r = 0; r < s.rows.size(); ++r)
-            for (std::size_t c = 0; c < s.rows[r].size(); ++c)
-                table->setItem(static_cast<int>(r), static_cast<int>(c),
-                               new QTableWidgetItem(QString::fromStdString(s.rows[r][c])));
-        table->setEditTriggers(QAbstractItemView::NoEditTriggers);
-        table->resizeColumnsToContents();
-        table->verticalHeader()->hide();
-        QString name = QString::fromStdString(s.name);
-        name[0] = name[0].toUpper();
-        addTab(table, name);
-    }
-    if (current >= 0 && current < count())
-        setCurrentIndex(current);
 }
 
 } // namespace lineward::ui

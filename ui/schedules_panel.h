@@ -2,10 +2,31 @@
 #pragma once
 
 #include "document.h"
+#include "report/schedules.h"
 
+#include <QAbstractTableModel>
 #include <QTabWidget>
+#include <vector>
+
+class QTableView;
 
 namespace lineward::ui {
+
+/// One schedule as a read-only table model: a new check replaces its rows in one reset, so
+/// the view keeps its widgets, column widths and scroll position.
+class ScheduleModel : public QAbstractTableModel {
+    Q_OBJECT
+public:
+    using QAbstractTableModel::QAbstractTableModel;
+    void setSchedule(Schedule s);
+    int rowCount(const QModelIndex& parent = {}) const override;
+    int columnCount(const QModelIndex& parent = {}) const override;
+    QVariant data(const QModelIndex& index, int role = Qt::DisplayRole) const override;
+    QVariant headerData(int section, Qt::Orientation o, int role = Qt::DisplayRole) const override;
+
+private:
+    Schedule m_schedule;
+};
 
 class SchedulesPanel : public QTabWidget {
     Q_OBJECT
@@ -16,12 +37,15 @@ protected:
     void showEvent(QShowEvent* e) override;
 
 private:
-    /// Rebuilds the tables when the panel is shown; while hidden, only notes they are stale
+    /// Refills the tables when the panel is shown; while hidden, only notes they are stale
     /// (a hidden tab costs nothing per edit).
     void refresh();
     void rebuild();
     Document& m_doc;
     bool m_stale = true;
+    std::vector<ScheduleModel*> m_models;
+    std::vector<QTableView*> m_views;
+    std::vector<bool> m_sized; ///< columns sized to their contents once the table had rows
 };
 
 } // namespace lineward::ui

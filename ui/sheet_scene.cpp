@@ -156,9 +156,28 @@ void SheetScene::onPartRemoved(PartId id) {
 }
 
 void SheetScene::onPartChanged(PartId id) {
-    if (auto* item = itemFor(id))
-        item->setPart(*m_doc.drawing().part(id));
-    scheduleRoute();
+    PartItem* item = itemFor(id);
+    const Part& now = *m_doc.drawing().part(id);
+    // Wires, bus bars and label room follow positions; a rating edit moves nothing, so only
+    // the bucket frames (which enclose the labels) are refreshed, not the whole Sheet.
+    const bool moved = !item || item->part().x != now.x || item->part().y != now.y ||
+                       item->part().rotation != now.rotation;
+    if (item)
+        item->setPart(now);
+    if (moved)
+        scheduleRoute();
+    else
+        scheduleFrames();
+}
+
+void SheetScene::scheduleFrames() {
+    if (m_framesPending || m_routePending)
+        return;
+    m_framesPending = true;
+    QTimer::singleShot(0, this, [this] {
+        m_framesPending = false;
+        refreshBuckets();
+    });
 }
 
 void SheetScene::onWireAdded(WireId id) {

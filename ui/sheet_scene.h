@@ -61,9 +61,11 @@ private:
     std::unordered_map<WireId, WireItem*> m_wires;
     std::unordered_map<BucketId, BucketItem*> m_buckets;
     bool m_selectionPending = false;
-    bool m_routePending = false;
+    bool m_routePending = false, m_framesPending = false;
     bool m_printing = false;
     void scheduleRoute();
+    /// Bucket frames only (a rating edit changes a label's width, not where anything is).
+    void scheduleFrames();
 };
 
 } // namespace lineward::ui

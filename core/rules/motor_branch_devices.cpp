@@ -150,13 +150,16 @@ void groundingConductor(BranchCheck& c) {
         const auto cond = conditionsOf(*cable, c.ctx.settings());
         CableConditions one = cond;
         one.sets = 1;
-        auto minPhase = smallestCable(1.25 * c.flc.amps / cond.sets, one, c.ctx.tables);
-        auto need = egcSize(deviceA, cond.material, phase, minPhase ? minPhase->first : phase,
-                            c.ctx.tables);
+        // Without the trace text first: most cables pass, and only a finding shows it.
+        auto minPhase =
+            smallestCable(1.25 * c.flc.amps / cond.sets, one, c.ctx.tables, "14 AWG", false);
+        const std::string& minSize = minPhase ? minPhase->first : phase;
+        auto need = egcSize(deviceA, cond.material, phase, minSize, c.ctx.tables, false);
         auto needArea = need ? c.ctx.tables.areaCmil(need->size) : std::nullopt;
         auto givenArea = c.ctx.tables.areaCmil(given);
         if (!need || !needArea || !givenArea || *givenArea >= *needArea - 1e-6)
             continue;
+        need = egcSize(deviceA, cond.material, phase, minSize, c.ctx.tables); // with its trace
         auto& f = c.add("branch.egc.size", *cable,
                         cable->tag + " equipment grounding conductor " + given +
                             " is smaller than " + need->size);

@@ -200,10 +200,9 @@ std::optional<Ampacity> cableAmpacity(const std::string& size, const CableCondit
     return a;
 }
 
-std::optional<std::pair<std::string, Ampacity>> smallestCable(double requiredA,
-                                                              const CableConditions& c,
-                                                              const Tables& t,
-                                                              const std::string& minSize) {
+std::optional<std::pair<std::string, Ampacity>>
+smallestCable(double requiredA, const CableConditions& c, const Tables& t,
+              const std::string& minSize, bool withTrace) {
     bool started = false;
     for (auto size : awgSizes()) {
         started = started || size == minSize;
@@ -211,7 +210,8 @@ std::optional<std::pair<std::string, Ampacity>> smallestCable(double requiredA,
             continue;
         if (auto a = cableAmpacity(std::string(size), c, t, false);
             a && a->amps >= requiredA - 1e-9)
-            return std::pair{std::string(size), *cableAmpacity(std::string(size), c, t)};
+            return std::pair{std::string(size),
+                             withTrace ? *cableAmpacity(std::string(size), c, t) : *a};
     }
     return std::nullopt;
 }
@@ -250,13 +250,14 @@ double egcDeviceRating(const Part& device, ScpdType type, MotorType motor, doubl
 }
 
 std::optional<EgcSize> egcSize(double deviceA, Material m, const std::string& phaseSize,
-                               const std::string& minPhaseSize, const Tables& t) {
+                               const std::string& minPhaseSize, const Tables& t, bool withTrace) {
     auto base = t.egcFor(deviceA, m);
     if (!base)
         return std::nullopt;
     EgcSize e{*base, {}};
-    e.trace.push_back(
-        {"EGC from device rating", *base + " for " + fmt(deviceA, 0) + " A (NEC Table 250.122)"});
+    if (withTrace)
+        e.trace.push_back({"EGC from device rating",
+                           *base + " for " + fmt(deviceA, 0) + " A (NEC Table 250.122)"});
     auto phase = t.areaCmil(phaseSize), minPhase = t.areaCmil(minPhaseSize),
          egc = t.areaCmil(*base);
     if (phase && minPhase && egc && *phase > *minPhase) {
@@ -270,13 +271,17 @@ std::optional<EgcSize> egcSize(double deviceA, Material m, const std::string& ph
                 break;
             }
         }
-        e.trace.push_back({"proportional increase",
-                           fmt(*phase, 0) + " / " + fmt(*minPhase, 0) + " cmil = " + fmt(ratio, 2) +
-                               " × " + fmt(*egc, 0) + " cmil → " + e.size + " (NEC 250.122(B))"});
+        if (withTrace)
+            e.trace.push_back({"proportional increase", fmt(*phase, 0) + " / " + fmt(*minPhase, 0) +
+                                                            " cmil = " + fmt(ratio, 2) + " × " +
+                                                            fmt(*egc, 0) + " cmil → " + e.size +
+                                                            " (NEC 250.122(B))"});
     }
     if (auto a = t.areaCmil(e.size); a && phase && *a > *phase) {
         e.size = phaseSize;
-        e.trace.push_back({"250.122(A)", "not larger than the circuit conductors: " + phaseSize});
+        if (withTrace)
+            e.trace.push_back(
+                {"250.122(A)", "not larger than the circuit conductors: " + phaseSize});
     }
     return e;
 }

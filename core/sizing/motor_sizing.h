@@ -80,7 +80,7 @@ std::optional<Ampacity> cableAmpacity(const std::string& size, const CableCondit
 /// Smallest US size (from `minSize`) whose ampacity reaches `requiredA`.
 std::optional<std::pair<std::string, Ampacity>>
 smallestCable(double requiredA, const CableConditions& c, const Tables& t,
-              const std::string& minSize = "14 AWG");
+              const std::string& minSize = "14 AWG", bool withTrace = true);
 
 /// Overload limits of 430.32(A)(1) and (C) from the nameplate FLA.
 struct OverloadLimit {
@@ -101,7 +101,8 @@ struct EgcSize {
     std::vector<TraceStep> trace;
 };
 std::optional<EgcSize> egcSize(double deviceA, Material m, const std::string& phaseSize,
-                               const std::string& minPhaseSize, const Tables& t);
+                               const std::string& minPhaseSize, const Tables& t,
+                               bool withTrace = true);
 /// Device rating used for the EGC (250.122(D)(1): a time-delay fuse rating for instantaneous
 /// breakers).
 double egcDeviceRating(const Part& device, ScpdType type, MotorType motor, double flc,

@@ -3,9 +3,14 @@
 #include "main_window.h"
 #include "plant_generator.h"
 #include "sheet_scene.h"
+#include "sheet_view.h"
 
 #include <QAction>
 #include <QApplication>
+#include <QElapsedTimer>
+#include <QLineEdit>
+#include <QScrollBar>
+#include <QTest>
 #include <benchmark/benchmark.h>
 
 using namespace lineward;
@@ -92,6 +97,71 @@ void BM_UndoDelete(benchmark::State& state) {
     counters(state, e);
 }
 
+// Notes when the Sheet's viewport is painted after the new check result arrived.
+struct PaintWatch : QObject {
+    bool armed = false, painted = false;
+    bool eventFilter(QObject*, QEvent* e) override {
+        if (e->type() == QEvent::Paint && armed)
+            painted = true;
+        return false;
+    }
+};
+
+// One rating edit typed into the Inspector (a branch cable's length, 80 ft and 900 ft in
+// turn: the voltage-drop finding comes and goes), timed from the first key press to the end of
+// the Sheet's first paint after the new check result: what a person sees as the delay.
+void BM_EditToPaint(benchmark::State& state) {
+    Editor e(static_cast<int>(state.range(0)));
+    const Part* cable = nullptr;
+    for (const auto& p : e.plant.parts())
+        if (p.kind == PartKind::Cable && p.tag.rfind("C-", 0) == 0 &&
+            p.tag.find('T') == std::string::npos && p.tag.find('F') == std::string::npos)
+            cable = &p;
+    if (!cable) {
+        state.SkipWithError("no branch cable in the plant");
+        return;
+    }
+    e.w.scene()->selectParts({cable->id});
+    e.w.view()->centerOn(cable->x, cable->y);
+    QApplication::processEvents();
+    auto* field = e.w.findChild<QLineEdit*>("field_length_ft");
+    if (!field) {
+        state.SkipWithError("no length field in the Inspector");
+        return;
+    }
+    PaintWatch watch;
+    e.w.view()->viewport()->installEventFilter(&watch);
+    QObject::connect(&e.w.document(), &ui::Document::reportChanged, &watch,
+                     [&watch] { watch.armed = true; });
+    bool longRun = false;
+    for (auto _ : state) {
+        longRun = !longRun;
+        watch.armed = watch.painted = false;
+        QElapsedTimer t;
+        t.start();
+        QTest::mouseClick(field, Qt::LeftButton);
+        QTest::keyClick(field, Qt::Key_A, Qt::ControlModifier);
+        QTest::keyClicks(field, longRun ? "900" : "80");
+        QTest::keyClick(field, Qt::Key_Return);
+        while (!watch.painted && t.elapsed() < 10000)
+            QApplication::processEvents(QEventLoop::AllEvents);
+        state.SetIterationTime(static_cast<double>(t.nsecsElapsed()) * 1e-9);
+        if (!watch.painted) {
+            state.SkipWithError("no repaint within 10 s");
+            return;
+        }
+    }
+    counters(state, e);
+}
+
+BENCHMARK(BM_EditToPaint)
+    ->Arg(2000)
+    ->Arg(8000)
+    ->Unit(benchmark::kMillisecond)
+    ->UseManualTime()
+    ->Iterations(20)
+    ->Repetitions(3)
+    ->ReportAggregatesOnly(true);
 BENCHMARK(BM_SelectAll)
     ->Arg(2000)
     ->Arg(5000)

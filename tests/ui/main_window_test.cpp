@@ -10,7 +10,7 @@
 #include <QApplication>
 #include <QGraphicsView>
 #include <QLabel>
-#include <QTableWidget>
+#include <QTableView>
 #include <QTreeWidget>
 #include <gtest/gtest.h>
 
@@ -83,12 +83,23 @@ TEST(MainWindow, SchedulesShownAfterEditsHoldTheNewValues) {
     user.clickPart(w.document().drawing().partByTag("OL-101")->id);
     user.type("setting_a", "33.5", test::Commit::Enter);
     user.showPanel("Schedules");
-    auto* motors = w.findChild<QTableWidget*>("schedule_motors");
+    auto* motors = w.findChild<QTableView*>("schedule_motors");
     ASSERT_NE(motors, nullptr);
     ASSERT_TRUE(motors->isVisible());
+    const auto* rows = motors->model();
+    auto cell = [&](int r, int c) { return rows->index(r, c).data().toString(); };
     bool shown = false;
-    for (int r = 0; r < motors->rowCount(); ++r)
-        if (motors->item(r, 0)->text() == "P-101")
-            shown = motors->item(r, 7)->text() == "33.5"; // the Overload A column
+    for (int r = 0; r < rows->rowCount(); ++r)
+        if (cell(r, 0) == "P-101")
+            shown = cell(r, 7) == "33.5"; // the Overload A column
     EXPECT_TRUE(shown);
+    // Another edit while the tab is up refills the same table in place.
+    user.clickPart(w.document().drawing().partByTag("OL-101")->id);
+    user.type("setting_a", "34", test::Commit::Enter);
+    EXPECT_EQ(w.findChild<QTableView*>("schedule_motors"), motors);
+    bool again = false;
+    for (int r = 0; r < rows->rowCount(); ++r)
+        if (cell(r, 0) == "P-101")
+            again = cell(r, 7) == "34";
+    EXPECT_TRUE(again);
 }
