@@ -58,9 +58,10 @@ void ratedDevice(BranchCheck& c, const Part& d, ScpdType type, const ScpdLimit& 
     f.trace.push_back({"Table 430.52(C)(1)", fmt(lim.pct, 0) + " % × " + fmt(c.flc.amps) +
                                                  " A = " + fmt(lim.rawA) + " A"});
     f.trace.push_back({"next standard size (Exc. No. 1, 240.6(A))", fmt(lim.maxA, 0) + " A"});
-    f.trace.push_back({"Exception No. 2 ceiling", fmt(lim.excPct, 0) + " % → " +
-                                                      fmt(lim.excMaxA, 0) +
-                                                      " A, only where the motor will not start"});
+    f.trace.push_back(
+        {"Exception No. 2 ceiling", fmt(lim.excPct, 0) + " % → " + fmt(lim.excMaxA, 0) +
+                                        " A, only where the motor will not start" +
+                                        (lim.excNote.empty() ? "" : " (" + lim.excNote + ")")});
     if (!hard && withinExc)
         f.trace.push_back({"hard-to-start flag", "not set on the motor"});
     if (!(withinExc && hard))

@@ -56,11 +56,11 @@ inline constexpr std::array kRules{
     RuleInfo{"branch.scpd.rating", "short-circuit device too large", "NEC 2023 430.52(C)(1)",
              Severity::Violation,
              "rating ≤ Table 430.52(C)(1) % × FLC, raised to the next standard "
-             "size (Exception No. 1)"},
+             "rating of the device type (Exception No. 1; fuses also 1, 3, 6, 10, 601 A)"},
     RuleInfo{"branch.scpd.exception", "short-circuit device under Exception No. 2",
              "NEC 2023 430.52(C)(1) Exception No. 2", Severity::Caution,
-             "rating above the table value but within the Exception No. 2 maximum, motor marked "
-             "hard to start"},
+             "rating above the table value but within the Exception No. 2 maximum (a "
+             "non-time-delay fuse above 600 A: 300 %, 2(d)), motor marked hard to start"},
     RuleInfo{"branch.inst.setting", "instantaneous setting too high", "NEC 2023 430.52(C)(3)",
              Severity::Violation,
              "setting ≤ 800 % × FLC (1100 % Design B premium); up to 1300 % "

@@ -99,11 +99,26 @@ ScpdLimit scpdLimit(ScpdType type, MotorType motor, double flc, const Tables& t)
         l.excMaxA = l.excPct / 100.0 * flc;
         return l;
     }
-    // 430.52(C)(1) Exception No. 1: the next higher standard size is permitted.
-    l.maxA = t.nextStandardAtOrAbove(l.rawA).value_or(l.rawA);
+    // 430.52(C)(1) Exception No. 1: the next higher standard rating of that device type is
+    // permitted; for fuses 240.6(A) adds 1, 3, 6, 10 and 601 A.
+    const bool fuse = type == ScpdType::TimeDelayFuse || type == ScpdType::NonTimeDelayFuse;
+    l.maxA = t.nextStandardAtOrAbove(l.rawA, fuse).value_or(l.rawA);
     l.roundedUp = l.maxA > l.rawA + 1e-9;
     // Exception No. 2 sets a ceiling ("shall in no case exceed"): round down.
-    l.excMaxA = t.standardAtOrBelow(l.excPct / 100.0 * flc).value_or(l.maxA);
+    double ceiling = l.excPct / 100.0 * flc;
+    if (type == ScpdType::NonTimeDelayFuse && ceiling > kExc2aFuseMaxA) {
+        // Exception No. 2(a) holds for fuses up to 600 A; 2(d) lets fuses of 601–6000 A go
+        // to 300 % of FLC: the larger of the two that applies.
+        const double d = kExc2dPct / 100.0 * flc;
+        ceiling = std::max(d, kExc2aFuseMaxA);
+        l.excNote = d > kExc2aFuseMaxA
+                        ? "Exception No. 2(d): a fuse of 601–6000 A, at most " + fmt(kExc2dPct, 0) +
+                              " % × FLC = " + fmt(d, 0) + " A"
+                        : "Exception No. 2(a) covers fuses up to " + fmt(kExc2aFuseMaxA, 0) +
+                              " A; 2(d)'s " + fmt(kExc2dPct, 0) + " % (" + fmt(d, 0) +
+                              " A) reaches no fuse above it";
+    }
+    l.excMaxA = t.standardAtOrBelow(ceiling, fuse).value_or(l.maxA);
     l.excMaxA = std::max(l.excMaxA, l.maxA);
     return l;
 }

@@ -30,8 +30,9 @@ struct ScpdLimit {
     double rawA = 0; ///< pct × FLC
     double maxA = 0; ///< after the next-standard-size rule (Exc. 1); the raw value for settings
     bool roundedUp = false;
-    double excPct = 0;  ///< Exception No. 2 or 430.52(C)(3) percentage
-    double excMaxA = 0; ///< largest rating the exception permits (rounded down for ratings)
+    double excPct = 0;   ///< Exception No. 2 or 430.52(C)(3) percentage
+    double excMaxA = 0;  ///< largest rating the exception permits (rounded down for ratings)
+    std::string excNote; ///< why the ceiling is not excPct × FLC, where it is not
 };
 ScpdLimit scpdLimit(ScpdType type, MotorType motor, double flc, const Tables& t);
 std::optional<ScpdType> scpdTypeOf(const Part& device);
@@ -43,6 +44,10 @@ std::optional<double> lockedRotorA(const Part& motor, const Tables& t,
 /// Locked-rotor multiple assumed where a motor has neither an LRA nor a code letter (common
 /// practice: 6 × full-load current for a squirrel-cage motor across the line).
 inline constexpr double kAssumedLockedRotorMultiple = 6.0;
+/// NEC 2023 430.52(C)(1) Exception No. 2(a) covers non-time-delay fuses "not exceeding 600
+/// amperes"; Exception No. 2(d) permits fuses rated 601–6000 A up to 300 % of FLC.
+inline constexpr double kExc2aFuseMaxA = 600.0;
+inline constexpr double kExc2dPct = 300.0;
 /// kW per horsepower for turning a kW rating into a table row (746 W per hp, common practice;
 /// 1 hp is 745.7 W).
 inline constexpr double kKwPerHp = 0.746;

@@ -80,23 +80,24 @@ double Tables::adjustmentFactor(int n) const {
     return adjustment.back().second / 100.0;
 }
 
-std::optional<double> Tables::nextStandardAtOrAbove(double amps) const {
-    for (double s : standardRatings)
+std::optional<double> Tables::nextStandardAtOrAbove(double amps, bool fuse) const {
+    for (double s : fuse ? fuseRatings : standardRatings)
         if (s >= amps - 1e-9)
             return s;
     return std::nullopt;
 }
 
-std::optional<double> Tables::standardAtOrBelow(double amps) const {
+std::optional<double> Tables::standardAtOrBelow(double amps, bool fuse) const {
     std::optional<double> best;
-    for (double s : standardRatings)
+    for (double s : fuse ? fuseRatings : standardRatings)
         if (s <= amps + 1e-9)
             best = s;
     return best;
 }
 
-bool Tables::isStandardRating(double amps) const {
-    return std::any_of(standardRatings.begin(), standardRatings.end(),
+bool Tables::isStandardRating(double amps, bool fuse) const {
+    const auto& list = fuse ? fuseRatings : standardRatings;
+    return std::any_of(list.begin(), list.end(),
                        [&](double s) { return std::abs(s - amps) < 1e-9; });
 }
 

@@ -98,9 +98,16 @@ void buildRest(Tables& tb, const CsvTable& t) {
         }
         checkIncreasing(t, keys);
     } else if (n == "standard_ratings") {
-        for (std::size_t r = 0; r < t.rows.size(); ++r)
-            tb.standardRatings.push_back(t.required(r, 0));
-        checkIncreasing(t, tb.standardRatings);
+        const std::size_t amps = t.column("amps"), kinds = t.column("devices");
+        for (std::size_t r = 0; r < t.rows.size(); ++r) {
+            const std::string& devices = t.rows[r][kinds];
+            if (devices != "all" && devices != "fuse")
+                t.fail(r, "devices must be 'all' or 'fuse', not '" + devices + "'");
+            if (devices == "all")
+                tb.standardRatings.push_back(t.required(r, amps));
+            tb.fuseRatings.push_back(t.required(r, amps));
+        }
+        checkIncreasing(t, tb.fuseRatings);
     } else if (n == "small_conductor") {
         for (std::size_t r = 0; r < t.rows.size(); ++r)
             tb.smallConductor.push_back(

@@ -78,7 +78,8 @@ struct Tables {
     std::vector<std::pair<double, std::array<std::optional<double>, 3>>>
         ambient;                                       ///< max °C -> 60/75/90
     std::vector<std::pair<double, double>> adjustment; ///< conductors up to -> percent
-    std::vector<double> standardRatings;
+    std::vector<double> standardRatings; ///< 240.6(A): fuses and inverse-time breakers
+    std::vector<double> fuseRatings;     ///< the same with the ratings for fuses only (1, 3, ...)
     std::vector<std::tuple<std::string, Material, double>> smallConductor;
     std::vector<std::tuple<double, std::string, std::string>> egc; ///< device max A, cu, al
     std::vector<std::tuple<std::string, double, double, double>>
@@ -100,9 +101,10 @@ struct Tables {
     /// Ambient correction factor; nothing where the conductor may not be used at that ambient.
     std::optional<double> ambientFactor(double ambientC, int columnC) const;
     double adjustmentFactor(int currentCarryingConductors) const;
-    std::optional<double> nextStandardAtOrAbove(double amps) const;
-    std::optional<double> standardAtOrBelow(double amps) const;
-    bool isStandardRating(double amps) const;
+    /// Standard ratings of 240.6(A); `fuse` adds the ratings standard for fuses only.
+    std::optional<double> nextStandardAtOrAbove(double amps, bool fuse = false) const;
+    std::optional<double> standardAtOrBelow(double amps, bool fuse = false) const;
+    bool isStandardRating(double amps, bool fuse = false) const;
     std::optional<double> smallConductorLimit(const std::string& size, Material m) const;
     std::optional<std::string> egcFor(double deviceA, Material m) const;
     std::optional<double> areaCmil(const std::string& size) const;

@@ -191,3 +191,42 @@ TEST(OneDefault, AnEmptyRatingWithADefaultReadsAsTheDefault) {
     EXPECT_EQ(load.number("pf"), 0.9);
     EXPECT_EQ(load.number("kva"), std::nullopt); // no default: still nothing
 }
+
+// NEC 2023 430.52(C)(1) Exception No. 1 rounds up to the next standard rating of the device
+// type: for fuses 240.6(A) adds 1, 3, 6, 10 and 601 A. A 1 hp 460 V motor has a Table 430.250
+// FLC of 2.1 A (from memory): time-delay fuse 175 % = 3.675 A → 6 A, non-time-delay fuse
+// 300 % = 6.3 A → 10 A, inverse-time breaker 250 % = 5.25 A → 15 A (the breaker list starts
+// at 15 A).
+TEST(ScpdLimit, FusesRoundUpToTheFuseOnlyStandardRatings) {
+    const Part m = motor(1, 460);
+    const auto flc = motorFlc(m, testTables(), false);
+    ASSERT_TRUE(flc);
+    EXPECT_DOUBLE_EQ(flc->amps, 2.1);
+    const auto type = motorTypeOf(m);
+    EXPECT_DOUBLE_EQ(scpdLimit(ScpdType::TimeDelayFuse, type, flc->amps, testTables()).maxA, 6);
+    EXPECT_DOUBLE_EQ(scpdLimit(ScpdType::NonTimeDelayFuse, type, flc->amps, testTables()).maxA, 10);
+    EXPECT_DOUBLE_EQ(scpdLimit(ScpdType::InverseTimeBreaker, type, flc->amps, testTables()).maxA,
+                     15);
+}
+
+// Exception No. 2(a) permits a non-time-delay fuse "not exceeding 600 amperes" up to 400 % of
+// FLC, and 2(d) fuses of 601–6000 A up to 300 %. 150 hp at 460 V: FLC 180 A (Table 430.250,
+// from memory); 400 % = 720 A but a fuse above 600 A falls under 2(d), whose 300 % = 540 A
+// permits none: the ceiling is 600 A (it was 700 A before 2(d) was applied). 250 hp: FLC
+// 302 A; the 2(d) ceiling 300 % = 906 A is the table value itself, which Exception No. 1
+// already raises to the standard 1000 A: 2(d) takes nothing away there.
+TEST(ScpdLimit, ExceptionTwoDLimitsNonTimeDelayFusesAbove600A) {
+    const auto limit = [](double hp) {
+        const Part m = motor(hp, 460);
+        const auto flc = motorFlc(m, testTables(), false);
+        EXPECT_TRUE(flc);
+        return scpdLimit(ScpdType::NonTimeDelayFuse, motorTypeOf(m), flc ? flc->amps : 0,
+                         testTables());
+    };
+    const auto l150 = limit(150);
+    EXPECT_DOUBLE_EQ(l150.excMaxA, 600);
+    EXPECT_NE(l150.excNote.find("2(a)"), std::string::npos) << l150.excNote;
+    const auto l250 = limit(250);
+    EXPECT_DOUBLE_EQ(l250.excMaxA, 1000); // Exc. No. 1 already gives 1000 A (300 % = 906 A)
+    EXPECT_NE(l250.excNote.find("2(d)"), std::string::npos) << l250.excNote;
+}

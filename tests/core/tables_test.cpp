@@ -186,11 +186,16 @@ TEST(Tables, MalformedTablesStopWithFileAndLine) {
         }
     };
     fails("# table: standard_ratings\namps\n15\n", "no '# source:'");
-    fails("# table: standard_ratings\n# source: x\namps\n15\nabc\n",
+    fails("# table: standard_ratings\n# source: x\namps,devices\n15,all\nabc,all\n",
           "bad.csv:5: column 'amps': 'abc' is not a number");
-    fails("# table: standard_ratings\n# source: x\namps\n20\n15\n", "must increase");
+    fails("# table: standard_ratings\n# source: x\namps,devices\n20,all\n15,all\n",
+          "must increase");
+    fails("# table: standard_ratings\n# source: x\namps,devices\n15,breaker\n",
+          "devices must be 'all' or 'fuse'");
+    fails("# table: standard_ratings\n# source: x\namps\n15\n", "devices");
     fails("# table: ampacity\n# source: x\nsize,cu_60\n14 AWG,15,20\n",
           "bad.csv:4: row has 3 cells");
-    fails("# table: standard_ratings\n# source: x\namps\n15\n", "table 'flc_3ph' is missing");
+    fails("# table: standard_ratings\n# source: x\namps,devices\n15,all\n",
+          "table 'flc_3ph' is missing");
     fails("# table: nonsense\n# source: x\na\n1\n", "unknown table 'nonsense'");
 }
