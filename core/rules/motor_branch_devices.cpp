@@ -23,6 +23,26 @@ void overload(BranchCheck& c) {
     const auto lim = overloadLimit(*c.b.motor, *fla);
     const auto relay = OverloadRatings::of(*ol);
     const double setting = relay.settingA;
+    if (setting < *fla - 1e-9) {
+        // The relay would trip the motor at full load (common practice: set at the nameplate
+        // current, up to the 430.32 limit).
+        auto& f = c.add("branch.overload.low", *ol,
+                        ol->tag + " set at " + fmt(setting) + " A is below the nameplate FLA " +
+                            fmt(*fla) + " A of " + c.motorName() + "; it trips the motor at load");
+        f.computed = setting;
+        f.limit = *fla;
+        f.unit = "A";
+        f.trace = {{"nameplate FLA", fmt(*fla) + " A (NEC 430.6(A)(2))"},
+                   {"430.32(A)(1) upper limit",
+                    fmt(lim.pctA, 0) + " % × " + fmt(*fla) + " = " + fmt(lim.maxA) + " A"}};
+        const double fixTo = std::ceil(*fla * 10.0) / 10.0;
+        if ((!relay.rangeMaxA || fixTo <= *relay.rangeMaxA) && fixTo <= lim.maxA + 1e-9)
+            f.fix = Fix{"set " + ol->tag + " to " + fmt(fixTo) + " A",
+                        {{ol->id, OverloadRatings::kSettingA, fixTo}}};
+        else
+            f.fix = Fix{"choose a relay whose range reaches " + fmt(fixTo) + " A", {}};
+        return;
+    }
     if (setting <= lim.maxA + 1e-9)
         return;
     const bool withinC = setting <= lim.maxC + 1e-9;

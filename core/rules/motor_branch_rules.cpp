@@ -38,6 +38,27 @@ void conductor(BranchCheck& c) {
 
 void ratedDevice(BranchCheck& c, const Part& d, ScpdType type, const ScpdLimit& lim) {
     const double rating = branchSettingA(d);
+    // 430.52(B): the device must carry the starting and running current; one rated below the
+    // running current opens with the motor at load.
+    const auto fla = MotorRatings::of(*c.b.motor).fla;
+    const double running = fla ? std::max(c.flc.amps, *fla) : c.flc.amps;
+    if (rating < running - 1e-9) {
+        auto& f =
+            c.add("branch.scpd.low", d,
+                  std::string(scpdTypeName(type)) + " " + d.tag + " rated " + fmt(rating, 0) +
+                      " A is below the " + fmt(running) + " A running current of " + c.motorName());
+        f.computed = rating;
+        f.limit = running;
+        f.unit = "A";
+        f.trace.push_back({"running current", fmt(running) + " A (the larger of table FLC " +
+                                                  fmt(c.flc.amps) + " A and nameplate FLA)"});
+        f.trace.push_back({"Table 430.52(C)(1)", fmt(lim.pct, 0) + " % × " + fmt(c.flc.amps) +
+                                                     " A = " + fmt(lim.rawA) + " A → " +
+                                                     fmt(lim.maxA, 0) + " A (Exc. No. 1)"});
+        f.fix = Fix{"set " + d.tag + " to " + fmt(lim.maxA, 0) + " A",
+                    {{d.id, branchSettingKey(d.kind), lim.maxA}}};
+        return;
+    }
     if (rating <= lim.maxA + 1e-9)
         return;
     const bool withinExc = rating <= lim.excMaxA + 1e-9;

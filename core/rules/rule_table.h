@@ -57,6 +57,9 @@ inline constexpr std::array kRules{
              Severity::Violation,
              "rating ≤ Table 430.52(C)(1) % × FLC, raised to the next standard "
              "rating of the device type (Exception No. 1; fuses also 1, 3, 6, 10, 601 A)"},
+    RuleInfo{"branch.scpd.low", "short-circuit device cannot carry the motor", "NEC 2023 430.52(B)",
+             Severity::Violation,
+             "rating ≥ the motor's running current (the larger of table FLC and nameplate FLA)"},
     RuleInfo{"branch.scpd.exception", "short-circuit device under Exception No. 2",
              "NEC 2023 430.52(C)(1) Exception No. 2", Severity::Caution,
              "rating above the table value but within the Exception No. 2 maximum (a "
@@ -69,6 +72,9 @@ inline constexpr std::array kRules{
              Severity::Caution, "setting × (1 − 0.20) ≥ LRA × asymmetry factor"},
     RuleInfo{"branch.overload.no_fla", "overload setting cannot be judged", "NEC 2023 430.6(A)(2)",
              Severity::Caution, "the motor has a nameplate FLA"},
+    RuleInfo{"branch.overload.low", "overload set below the motor's current",
+             "common practice (430.32 sets the upper limit)", Severity::Violation,
+             "setting ≥ nameplate FLA: a relay set lower trips the motor at full load"},
     RuleInfo{"branch.overload.setting", "overload setting too high", "NEC 2023 430.32(A)(1)",
              Severity::Violation,
              "setting ≤ 125 % FLA (SF ≥ 1.15 or rise ≤ 40 °C), else ≤ 115 % FLA"},

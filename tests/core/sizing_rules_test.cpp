@@ -77,6 +77,40 @@ TEST(BranchRules, BreakerAboveTable430_52) {
     EXPECT_EQ(findings(d, "branch.scpd.rating").size(), 1u);
 }
 
+TEST(BranchRules, ABreakerBelowTheRunningCurrentCannotCarryTheMotor) {
+    // NEC 2023 430.52(B): the device carries the starting and running current. The motor's
+    // FLC is 34 A (Table 430.250, 25 hp 460 V) and its nameplate 32 A: 35 A carries it, 30 A
+    // does not, and the fix is the table maximum (250 % × 34 = 85 → 90 A), not 34 A.
+    Drawing d = smallLineup();
+    set(d, 5, "trip_a", 35.0);
+    EXPECT_TRUE(findings(d, "branch.scpd.low").empty());
+    set(d, 5, "trip_a", 30.0);
+    auto f = findings(d, "branch.scpd.low");
+    ASSERT_EQ(f.size(), 1u);
+    EXPECT_EQ(f[0].severity, Severity::Violation);
+    EXPECT_DOUBLE_EQ(*f[0].computed, 30);
+    EXPECT_DOUBLE_EQ(*f[0].limit, 34);
+    applyFix(d, f[0]);
+    EXPECT_DOUBLE_EQ(*d.part(PartId(5))->number("trip_a"), 90);
+    EXPECT_TRUE(findings(d, "branch.scpd.low").empty());
+    EXPECT_TRUE(findings(d, "branch.scpd.rating").empty());
+}
+
+TEST(BranchRules, AnOverloadSetBelowTheNameplateTripsTheMotorAtLoad) {
+    Drawing d = smallLineup(); // nameplate FLA 32 A
+    set(d, 7, "setting_a", 32.0);
+    EXPECT_TRUE(findings(d, "branch.overload.low").empty());
+    set(d, 7, "setting_a", 28.0);
+    auto f = findings(d, "branch.overload.low");
+    ASSERT_EQ(f.size(), 1u);
+    EXPECT_EQ(f[0].severity, Severity::Violation);
+    EXPECT_DOUBLE_EQ(*f[0].limit, 32);
+    applyFix(d, f[0]); // raised to the nameplate current, within the 430.32 limit
+    EXPECT_DOUBLE_EQ(*d.part(PartId(7))->number("setting_a"), 32);
+    EXPECT_TRUE(findings(d, "branch.overload.low").empty());
+    EXPECT_TRUE(findings(d, "branch.overload.setting").empty());
+}
+
 TEST(BranchRules, MissingShortCircuitDevice) {
     Drawing d = smallLineup();
     d.removePart(PartId(5));
