@@ -50,12 +50,16 @@ std::optional<MotorFlc> motorFlc(const Part& motor, const Tables& t, bool withTr
                                                fmt(eq, 2) + " hp → table row " + fmt(hp, 2) +
                                                " hp"});
     }
-    if (auto a = t.flc(hp, volts, phases, &r.columnV)) {
+    // A synchronous motor reads the table's synchronous columns (unity power factor; the
+    // table's note multiplies by 1.1 or 1.25 for 0.9 or 0.8 power factor).
+    const bool sync = phases == 3 && m.rotor == Rotor::Synchronous;
+    if (auto a = t.flc(hp, volts, phases, &r.columnV, sync)) {
         r.amps = *a;
         r.hpUsed = hp;
         if (withTrace)
             r.trace.push_back({"FLC", fmt(*a, 1) + " A (NEC Table " +
-                                          std::string(phases == 1 ? "430.248" : "430.250") + ", " +
+                                          std::string(phases == 1 ? "430.248" : "430.250") +
+                                          (sync ? ", synchronous, unity power factor" : "") + ", " +
                                           fmt(hp, 2) + " hp, " + fmt(r.columnV, 0) + " V column)"});
         return r;
     }

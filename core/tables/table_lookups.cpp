@@ -29,8 +29,9 @@ int conductorColumn(int c) {
 
 } // namespace
 
-std::optional<double> Tables::flc(double hp, double ratedVolts, int phases, double* columnV) const {
-    const FlcTable& t = phases == 1 ? flc1 : flc3;
+std::optional<double> Tables::flc(double hp, double ratedVolts, int phases, double* columnV,
+                                  bool synchronous) const {
+    const FlcTable& t = phases == 1 ? flc1 : synchronous ? flcSync : flc3;
     auto col = columnFor(ratedVolts, t.volts);
     if (!col)
         return std::nullopt;

@@ -189,16 +189,18 @@ std::shared_ptr<const Tables> loadTables(std::span<const tables::EmbeddedFile> f
             tb->flc3 = buildFlc(t);
         else if (t.name == "flc_1ph")
             tb->flc1 = buildFlc(t);
+        else if (t.name == "flc_3ph_sync")
+            tb->flcSync = buildFlc(t);
         else if (t.name == "scpd_pct")
             tb->scpd = buildScpd(t);
         else
             buildRest(*tb, t);
     }
     for (const char* needed :
-         {"flc_3ph", "flc_1ph", "scpd_pct", "code_letters", "ampacity", "ambient_correction",
-          "conductor_adjustment", "standard_ratings", "small_conductor", "egc",
-          "conductor_properties", "conductor_impedance", "transformer_protection", "nema_sizes",
-          "trip_classes"})
+         {"flc_3ph", "flc_1ph", "flc_3ph_sync", "scpd_pct", "code_letters", "ampacity",
+          "ambient_correction", "conductor_adjustment", "standard_ratings", "small_conductor",
+          "egc", "conductor_properties", "conductor_impedance", "transformer_protection",
+          "nema_sizes", "trip_classes"})
         if (!tb->sources.count(needed))
             throw TableError("resources/tables", 0,
                              std::string("table '") + needed + "' is missing");

@@ -72,6 +72,7 @@ struct TransformerProtectionRow {
 /// Every reference table. Build with loadTables(); copy-free sharing through shared_ptr.
 struct Tables {
     FlcTable flc3, flc1;
+    FlcTable flcSync; ///< three-phase synchronous motors, unity power factor
     std::vector<ScpdRow> scpd;
     std::vector<std::pair<char, std::array<double, 2>>> codeLetters; ///< letter -> kVA/hp min, max
     std::vector<AmpacityRow> ampacity;
@@ -92,8 +93,9 @@ struct Tables {
 
     // --- lookups ---
     /// Table FLC for hp at a rated voltage (column chosen by the code's voltage ranges).
-    std::optional<double> flc(double hp, double ratedVolts, int phases,
-                              double* columnV = nullptr) const;
+    /// `synchronous`: the three-phase synchronous (unity power factor) columns.
+    std::optional<double> flc(double hp, double ratedVolts, int phases, double* columnV = nullptr,
+                              bool synchronous = false) const;
     const ScpdRow& scpdRow(MotorType m) const;
     /// kVA/hp (upper bound of the letter's range); nothing for an unknown letter.
     std::optional<double> codeLetterKvaPerHp(char letter) const;

@@ -230,3 +230,21 @@ TEST(ScpdLimit, ExceptionTwoDLimitsNonTimeDelayFusesAbove600A) {
     EXPECT_DOUBLE_EQ(l250.excMaxA, 1000); // Exc. No. 1 already gives 1000 A (300 % = 906 A)
     EXPECT_NE(l250.excNote.find("2(d)"), std::string::npos) << l250.excNote;
 }
+
+// NEC 2023 Table 430.250, synchronous-type unity power factor columns (from memory): 100 hp at
+// 460 V is 101 A where the induction motor of the same rating is 124 A; outside the table's
+// 25–200 hp the nameplate FLA sizes the branch.
+TEST(MotorFlc, SynchronousMotorsReadTheirOwnColumns) {
+    const auto flc = [](const Part& m) { return motorFlc(m, testTables(), true); };
+    const auto induction = flc(motor(100, 460));
+    ASSERT_TRUE(induction);
+    EXPECT_DOUBLE_EQ(induction->amps, 124);
+    const auto sync = flc(motor(100, 460, {{"rotor", std::string("synchronous")}}));
+    ASSERT_TRUE(sync);
+    EXPECT_DOUBLE_EQ(sync->amps, 101);
+    EXPECT_NE(sync->trace.back().value.find("synchronous"), std::string::npos);
+    const auto small = flc(motor(10, 460, {{"rotor", std::string("synchronous")}, {"fla", 13.0}}));
+    ASSERT_TRUE(small);
+    EXPECT_FALSE(small->fromTable);
+    EXPECT_DOUBLE_EQ(small->amps, 13);
+}
