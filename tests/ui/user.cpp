@@ -16,6 +16,8 @@
 #include <QFileDialog>
 #include <QLabel>
 #include <QLineEdit>
+#include <QMenu>
+#include <QMenuBar>
 #include <QMimeData>
 #include <QPushButton>
 #include <QTabBar>
@@ -248,6 +250,77 @@ void User::press(Qt::Key key, Qt::KeyboardModifiers mods) {
     QWidget* target = QApplication::focusWidget() ? QApplication::focusWidget() : &m_w;
     QTest::keyClick(target, key, mods);
     settle();
+}
+
+namespace {
+QString menuWords(QString text) {
+    return text.remove('&');
+}
+
+// Opens the menus of `path` (all of it, or all but its last entry) by clicking; returns the
+// menu shown last, or nothing after reporting a failure.
+QMenu* openMenus(MainWindow& w, const QStringList& path, int depth) {
+    QApplication::setActiveWindow(&w);
+    QMenuBar* bar = w.menuBar();
+    QMenu* menu = nullptr;
+    for (QAction* a : bar->actions())
+        if (menuWords(a->text()) == path.front() && a->menu()) {
+            QTest::mouseClick(bar, Qt::LeftButton, {}, bar->actionGeometry(a).center());
+            menu = a->menu();
+        }
+    if (!menu || !QTest::qWaitFor([menu] { return menu->isVisible(); }, 2000)) {
+        ADD_FAILURE() << "no menu " << path.front().toStdString() << " opened";
+        return nullptr;
+    }
+    for (int i = 1; i < depth; ++i) {
+        QAction* sub = nullptr;
+        for (QAction* a : menu->actions())
+            if (menuWords(a->text()) == path[i] && a->menu())
+                sub = a;
+        if (!sub) {
+            ADD_FAILURE() << "no submenu " << path[i].toStdString();
+            return nullptr;
+        }
+        const QPoint at = menu->actionGeometry(sub).center();
+        QTest::mouseMove(menu, at);
+        QTest::mouseClick(menu, Qt::LeftButton, {}, at);
+        menu = sub->menu();
+        if (!QTest::qWaitFor([menu] { return menu->isVisible(); }, 2000)) {
+            ADD_FAILURE() << "submenu " << path[i].toStdString() << " did not open";
+            return nullptr;
+        }
+    }
+    return menu;
+}
+} // namespace
+
+void User::chooseMenu(const QStringList& path) {
+    QMenu* menu = openMenus(m_w, path, static_cast<int>(path.size()) - 1);
+    if (!menu)
+        return;
+    for (QAction* a : menu->actions())
+        if (menuWords(a->text()) == path.back()) {
+            const QPoint at = menu->actionGeometry(a).center();
+            QTest::mouseMove(menu, at);
+            QTest::mouseClick(menu, Qt::LeftButton, {}, at);
+            settle();
+            return;
+        }
+    ADD_FAILURE() << "no command " << path.back().toStdString() << " in the menu";
+}
+
+QStringList User::menuTexts(const QStringList& path) {
+    QStringList texts;
+    QMenu* menu = openMenus(m_w, path, static_cast<int>(path.size()));
+    if (!menu)
+        return texts;
+    for (QAction* a : menu->actions())
+        if (!a->isSeparator() && a->isVisible())
+            texts << menuWords(a->text());
+    for (int i = 0; i < 5 && QApplication::activePopupWidget(); ++i)
+        QTest::keyClick(QApplication::activePopupWidget(), Qt::Key_Escape);
+    settle();
+    return texts;
 }
 
 void User::answerFileDialogWith(const QString& path) {

@@ -7,6 +7,7 @@
 #include <QMessageBox>
 #include <QPoint>
 #include <QString>
+#include <QStringList>
 
 class QLineEdit;
 class QComboBox;
@@ -55,6 +56,13 @@ public:
     void press(Qt::Key key, Qt::KeyboardModifiers mods = Qt::NoModifier);
     /// Runs the event loop until the newest check has been shown.
     void settle();
+
+    /// Clicks through the menu bar: the top menu, any submenus, then the command, each by a
+    /// mouse click on its place in the menu ({"File", "Export", "One-line DXF…"}).
+    void chooseMenu(const QStringList& path);
+    /// Opens the menus of `path` by clicking them and returns the texts the last one shows (its
+    /// separators left out), then closes the menus with Escape.
+    QStringList menuTexts(const QStringList& path);
 
     /// Answers the next file dialog with `path` (typed into its file name box, then Enter).
     void answerFileDialogWith(const QString& path);
