@@ -31,12 +31,7 @@ void isolateSettings(const char* name) {
 
 // Reads the folder the next file dialog starts in, then cancels it with Escape.
 void readDialogFolderThenCancel(QString* folder) {
-    QTimer::singleShot(200, [folder] {
-        auto* dialog = qobject_cast<QFileDialog*>(QApplication::activeModalWidget());
-        if (!dialog) {
-            ADD_FAILURE() << "no file dialog opened";
-            return;
-        }
+    User::whenModal<QFileDialog>([folder](QFileDialog* dialog) {
         *folder = dialog->directory().absolutePath();
         QTest::keyClick(dialog, Qt::Key_Escape);
     });
@@ -121,13 +116,11 @@ TEST(Desktop, HelpListsTheKeyboardShortcutsTheMenusHave) {
     User user(w);
     QList<QStringList> rows;
     auto readAndClose = [&rows] {
-        QTimer::singleShot(200, [&rows] {
-            auto* dialog = QApplication::activeModalWidget();
-            auto* table = dialog ? dialog->findChild<QTableWidget*>("shortcutsTable") : nullptr;
+        User::whenModal<QDialog>([&rows](QDialog* dialog) {
+            auto* table = dialog->findChild<QTableWidget*>("shortcutsTable");
             if (!table) {
                 ADD_FAILURE() << "no shortcuts table shown";
-                if (dialog)
-                    QTest::keyClick(dialog, Qt::Key_Escape);
+                QTest::keyClick(dialog, Qt::Key_Escape);
                 return;
             }
             rows.clear();

@@ -324,13 +324,9 @@ QStringList User::menuTexts(const QStringList& path) {
 }
 
 void User::answerFileDialogWith(const QString& path) {
-    // The dialog is modal: answer it from the event loop once it is up.
-    QTimer::singleShot(200, [path] {
-        auto* dialog = qobject_cast<QFileDialog*>(QApplication::activeModalWidget());
-        if (!dialog) {
-            ADD_FAILURE() << "no file dialog opened";
-            return;
-        }
+    // The dialog is modal: answer it from the event loop once it is up. Poll, as a person waits
+    // for it: the first dialog of a process can take a while to list its folder.
+    whenModal<QFileDialog>([path](QFileDialog* dialog) {
         auto* name = dialog->findChild<QLineEdit*>("fileNameEdit");
         if (!name) {
             ADD_FAILURE() << "the file dialog has no file name box";
@@ -340,6 +336,28 @@ void User::answerFileDialogWith(const QString& path) {
         QTest::keyClicks(name, path);
         QTest::keyClick(name, Qt::Key_Return);
     });
+}
+
+void User::whenModalWidget(std::function<bool(QWidget*)> accepts, std::function<void(QWidget*)> act,
+                           const char* what) {
+    auto* timer = new QTimer;
+    timer->setInterval(50);
+    auto tries = std::make_shared<int>(0);
+    QObject::connect(timer, &QTimer::timeout, [timer, accepts, act, what, tries] {
+        QWidget* w = QApplication::activeModalWidget();
+        if (!w || !accepts(w)) {
+            if (++*tries > 200) { // 10 s: it never came; do not answer a later test's dialog
+                timer->stop();
+                timer->deleteLater();
+                ADD_FAILURE() << "no " << what << " opened";
+            }
+            return;
+        }
+        timer->stop();
+        timer->deleteLater();
+        act(w);
+    });
+    timer->start();
 }
 
 void User::answerMessageBox(QMessageBox::StandardButton button, QString* text) {

@@ -8,6 +8,7 @@
 #include <QPoint>
 #include <QString>
 #include <QStringList>
+#include <functional>
 
 class QLineEdit;
 class QComboBox;
@@ -66,6 +67,14 @@ public:
 
     /// Answers the next file dialog with `path` (typed into its file name box, then Enter).
     void answerFileDialogWith(const QString& path);
+    /// Runs `act` on the next modal dialog of type T once it is up (polled for up to 10 s).
+    template <typename T> static void whenModal(std::function<void(T*)> act) {
+        whenModalWidget([](QWidget* w) { return qobject_cast<T*>(w) != nullptr; },
+                        [act](QWidget* w) { act(qobject_cast<T*>(w)); },
+                        T::staticMetaObject.className());
+    }
+    static void whenModalWidget(std::function<bool(QWidget*)> accepts,
+                                std::function<void(QWidget*)> act, const char* what);
     /// Clicks `button` in the next message box once it is up; its text goes to `text`.
     static void answerMessageBox(QMessageBox::StandardButton button, QString* text = nullptr);
 
