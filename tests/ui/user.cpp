@@ -13,12 +13,14 @@
 #include <QAbstractItemView>
 #include <QApplication>
 #include <QComboBox>
+#include <QCompleter>
 #include <QFileDialog>
 #include <QLabel>
 #include <QLineEdit>
 #include <QMenu>
 #include <QMenuBar>
 #include <QMimeData>
+#include <QPointer>
 #include <QPushButton>
 #include <QTabBar>
 #include <QTest>
@@ -334,7 +336,16 @@ void User::answerFileDialogWith(const QString& path) {
             return;
         }
         QTest::keyClicks(name, path);
-        QTest::keyClick(name, Qt::Key_Return);
+        // The name box completes from the folder it lists in the background; when its list of
+        // completions is up, Return would pick one instead of accepting. Close it first, as a
+        // person does, then press Return (again, if the list came up once more meanwhile).
+        QPointer<QFileDialog> open(dialog);
+        for (int i = 0; i < 5 && open && open->isVisible(); ++i) {
+            if (name->completer() && name->completer()->popup()->isVisible())
+                QTest::keyClick(name->completer()->popup(), Qt::Key_Escape);
+            QTest::keyClick(name, Qt::Key_Return);
+            QTest::qWait(50);
+        }
     });
 }
 
