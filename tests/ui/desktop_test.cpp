@@ -94,8 +94,9 @@ TEST(Desktop, OpenRecentListsRealPathsOfFilesThatExist) {
     User user(w);
     user.answerFileDialogWith(gone);
     user.press(Qt::Key_O, Qt::ControlModifier);
-    // Opened through a link and a "..": the menu names the file itself.
-    user.answerFileDialogWith(dir + "/../" + QFileInfo(dir).fileName() + "/link.lineward");
+    // Opened through a symbolic link: the menu names the file itself. (A typed ".." makes the
+    // file dialog change folder first, so the test goes through the link alone.)
+    user.answerFileDialogWith(dir + "/link.lineward");
     user.press(Qt::Key_O, Qt::ControlModifier);
     ASSERT_FALSE(w.document().filePath().isEmpty());
     ASSERT_TRUE(QFile::remove(gone));
