@@ -1,6 +1,8 @@
-// `lineward-cli export FILE [--pdf OUT] [--svg OUT] [--csv DIR] [--paper NAME] [--portrait]`
+// `lineward-cli export FILE [--pdf OUT] [--svg OUT] [--dxf OUT] [--csv DIR] [--paper NAME]
+// [--portrait]`
 #include "check/check.h"
 #include "cli_commands.h"
+#include "export/one_line_dxf.h"
 #include "io/drawing_file.h"
 #include "submittal.h"
 #include "util/safe_text.h"
@@ -14,7 +16,7 @@ namespace lineward::cli {
 
 namespace {
 struct ExportArgs {
-    std::string file, pdf, svg, csv, paper = "tabloid";
+    std::string file, pdf, svg, dxf, csv, paper = "tabloid";
     bool portrait = false;
 };
 } // namespace
@@ -22,24 +24,29 @@ struct ExportArgs {
 void addExportCommand(CLI::App& app, const TablesRef& tables, int& exitCode) {
     auto a = std::make_shared<ExportArgs>();
     auto* cmd = app.add_subcommand(
-        "export", "Write the Submittal PDF, the one-line as SVG, and the schedules as "
-                  "CSV, with no display. Exit 0, or 2 on a bad file or output.");
+        "export", "Write the Submittal PDF, the one-line as SVG or DXF, and the schedules "
+                  "as CSV, with no display. Exit 0, or 2 on a bad file or output.");
     cmd->add_option("file", a->file, "drawing (.lineward)")->required()->check(CLI::ExistingFile);
     cmd->add_option("--pdf", a->pdf, "Submittal PDF: one-line, findings, schedules, curve sheets");
     cmd->add_option("--svg", a->svg, "the one-line drawing as SVG");
+    cmd->add_option("--dxf", a->dxf,
+                    "the one-line as DXF (R12, inches): a layer per part kind, wires, tags, "
+                    "ratings, badges, buckets, title block");
     cmd->add_option("--csv", a->csv, "folder for motors.csv, cables.csv and devices.csv");
     cmd->add_option("--paper", a->paper, "letter, legal, tabloid (default), a4 or a3")
         ->check(CLI::IsMember({"letter", "legal", "tabloid", "a4", "a3"}));
     cmd->add_flag("--portrait", a->portrait, "portrait pages (default landscape)");
     cmd->callback([a, &tables, &exitCode] {
-        if (a->pdf.empty() && a->svg.empty() && a->csv.empty())
-            throw CLI::ValidationError("output", "give --pdf, --svg or --csv");
+        if (a->pdf.empty() && a->svg.empty() && a->dxf.empty() && a->csv.empty())
+            throw CLI::ValidationError("output", "give --pdf, --svg, --dxf or --csv");
         auto loaded = loadForVerb(a->file, exitCode);
         if (!loaded)
             return;
-        ensureGuiApplication();
+        // Painting needs Qt; the DXF alone does not.
+        if (!a->pdf.empty() || !a->svg.empty() || !a->csv.empty())
+            ensureGuiApplication();
         // Output folders are made as needed, as a user giving a new path expects.
-        for (const auto& out : {a->pdf, a->svg})
+        for (const auto& out : {a->pdf, a->svg, a->dxf})
             if (!out.empty())
                 QDir().mkpath(QFileInfo(QString::fromStdString(out)).absolutePath());
         // One analysis for every output: the PDF, the SVG and the CSVs read the same result.
@@ -64,6 +71,11 @@ void addExportCommand(CLI::App& app, const TablesRef& tables, int& exitCode) {
                 !why.isEmpty())
                 return fail(why);
             std::cout << "wrote " << a->svg << "\n";
+        }
+        if (!a->dxf.empty()) {
+            if (auto why = dxf::writeOneLineDxf(*result, a->dxf))
+                return fail(QString::fromStdString(a->dxf + ": " + *why));
+            std::cout << "wrote " << a->dxf << "\n";
         }
         if (!a->csv.empty()) {
             if (auto why = ui::writeScheduleCsvs(QString::fromStdString(a->csv), *result);

@@ -6,20 +6,29 @@
 
 #include <QApplication>
 #include <QCommandLineParser>
+#include <QIcon>
 #include <QMessageBox>
 #include <QPixmap>
 #include <QTimer>
 #include <spdlog/spdlog.h>
 
 int main(int argc, char** argv) {
+    // Qt 6 scales to the screen's device pixel ratio by itself; fractional ratios (150 %) are
+    // passed through, so the Sheet's vector symbols and text are drawn at full resolution.
+    QGuiApplication::setHighDpiScaleFactorRoundingPolicy(
+        Qt::HighDpiScaleFactorRoundingPolicy::PassThrough);
     lineward::ui::Application app(argc, argv);
+    Q_INIT_RESOURCE(icons);
     QApplication::setApplicationName("Lineward");
     QApplication::setOrganizationName("Lineward");
+    // The window belongs to the menu entry (lineward.desktop) and shows its icon.
+    QGuiApplication::setDesktopFileName("lineward");
+    QApplication::setWindowIcon(QIcon::fromTheme("lineward", QIcon(":/icons/lineward.svg")));
     lineward::setupLogging("lineward");
     QCommandLineParser parser;
     parser.setApplicationDescription("Lineward one-line diagram editor");
     parser.addHelpOption();
-    parser.addPositionalArgument("file", "drawing to open (.lineward)");
+    parser.addPositionalArgument("file", "drawing to open (.lineward)", "[file]");
     QCommandLineOption shot("screenshot", "save a picture of the window to PNG and quit", "PNG");
     parser.addOption(shot);
     parser.process(app);

@@ -21,15 +21,22 @@ namespace lineward::ui {
 
 namespace {
 QIcon badgeIcon(Severity s) {
-    QPixmap pm(16, 16);
-    pm.fill(Qt::transparent);
-    QPainter p(&pm);
-    p.setRenderHint(QPainter::Antialiasing);
-    p.translate(8, 8);
-    p.setPen(Qt::NoPen);
-    p.setBrush(severityColor(s));
-    p.drawPath(severityShape(s, 14));
-    return QIcon(pm);
+    // Painted at 1x, 2x and 3x so a high-DPI screen picks a sharp one, not a scaled-up blur.
+    QIcon icon;
+    for (int scale : {1, 2, 3}) {
+        QPixmap pm(16 * scale, 16 * scale);
+        pm.fill(Qt::transparent);
+        QPainter p(&pm);
+        p.setRenderHint(QPainter::Antialiasing);
+        p.scale(scale, scale);
+        p.translate(8, 8);
+        p.setPen(Qt::NoPen);
+        p.setBrush(severityColor(s));
+        p.drawPath(severityShape(s, 14));
+        p.end();
+        icon.addPixmap(pm);
+    }
+    return icon;
 }
 
 QString partTags(const Drawing& d, const Finding& f) {

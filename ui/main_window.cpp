@@ -8,6 +8,7 @@
 #include "commands/move_parts_command.h"
 #include "commands/set_fields_command.h"
 #include "curves_panel.h"
+#include "file_dialogs.h"
 #include "findings_panel.h"
 #include "guard.h"
 #include "inspector.h"
@@ -321,8 +322,8 @@ bool MainWindow::maybeSave() {
         return true;
     QString path = m_doc.filePath();
     if (path.isEmpty())
-        path = QFileDialog::getSaveFileName(this, tr("Save drawing"), {},
-                                            tr("Lineward drawings (*.lineward)"));
+        path = askSavePath(this, tr("Save drawing"), tr("untitled.lineward"),
+                           tr("Lineward drawings (*.lineward)"), ".lineward");
     if (path.isEmpty())
         return false;
     const QString why = saveTo(path);
@@ -357,13 +358,8 @@ void MainWindow::dropEvent(QDropEvent* e) {
 }
 
 void MainWindow::addRecent(const QString& path) {
-    QSettings settings;
-    QStringList recent = settings.value("recentFiles").toStringList();
-    recent.removeAll(QFileInfo(path).absoluteFilePath());
-    recent.prepend(QFileInfo(path).absoluteFilePath());
-    while (recent.size() > 8)
-        recent.removeLast();
-    settings.setValue("recentFiles", recent);
+    addRecentFile(path);
+    rememberFolder(path);
     rebuildRecentMenu();
 }
 
@@ -376,8 +372,8 @@ void MainWindow::rebuildRecentMenu() {
         m_recentMenu->removeAction(old);
         old->deleteLater();
     }
-    for (const QString& path : QSettings().value("recentFiles").toStringList()) {
-        auto* a = m_recentMenu->addAction(path);
+    for (const QString& path : recentFiles()) {
+        auto* a = m_recentMenu->addAction(QString(path).replace("&", "&&")); // no mnemonic
         connect(a, &QAction::triggered, this, guarded(this, tr("Open"), [this, path] {
                     if (maybeSave())
                         openFile(path);

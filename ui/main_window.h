@@ -67,6 +67,9 @@ protected:
 private:
     void buildActions();
     void buildFileMenu();
+    void buildExportMenu(QMenu* exportMenu);
+    /// The drawing's file name without its suffix ("untitled" before the first save).
+    QString baseName() const;
     void buildEditMenu();
     void buildViewMenu();
     void refreshStatus();

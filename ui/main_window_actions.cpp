@@ -2,6 +2,8 @@
 // standard shortcuts.
 #include "commands/add_parts_command.h"
 #include "commands/bucket_command.h"
+#include "export/one_line_dxf.h"
+#include "file_dialogs.h"
 #include "findings_panel.h"
 #include "guard.h"
 #include "io/drawing_file.h"
@@ -11,6 +13,7 @@
 #include "plain_text.h"
 #include "sheet_scene.h"
 #include "sheet_view.h"
+#include "shortcuts_dialog.h"
 #include "submittal.h"
 
 #include <QAction>
@@ -18,6 +21,7 @@
 #include <QClipboard>
 #include <QDockWidget>
 #include <QFileDialog>
+#include <QFileInfo>
 #include <QInputDialog>
 #include <QMenuBar>
 #include <QMimeData>
@@ -50,6 +54,10 @@ void MainWindow::buildActions() {
     buildEditMenu();
     buildViewMenu();
     auto* help = menuBar()->addMenu(tr("&Help"));
+    menuAction(help, tr("&Keyboard Shortcuts…"), QKeySequence(tr("Ctrl+/")), this, [this] {
+        ShortcutsDialog dialog(*menuBar(), this);
+        dialog.exec();
+    });
     menuAction(help, tr("&About Lineward"), QKeySequence(), this, [this] { showAbout(); });
 }
 
@@ -70,16 +78,19 @@ void MainWindow::buildFileMenu() {
     menuAction(file, tr("&Open…"), QKeySequence::Open, this, [this] {
         if (!maybeSave())
             return;
-        const auto path = QFileDialog::getOpenFileName(this, tr("Open drawing"), {},
-                                                       tr("Lineward drawings (*.lineward)"));
+        const auto path =
+            askOpenPath(this, tr("Open drawing"), tr("Lineward drawings (*.lineward)"));
         if (!path.isEmpty())
             openFile(path);
     });
     m_recentMenu = file->addMenu(tr("Open &Recent"));
     rebuildRecentMenu();
+    // Files move and vanish while the program runs: list what exists when the menu opens.
+    connect(m_recentMenu, &QMenu::aboutToShow, this,
+            guarded(this, tr("Open Recent"), [this] { rebuildRecentMenu(); }));
     auto saveAs = [this] {
-        const auto path = QFileDialog::getSaveFileName(this, tr("Save drawing"), m_doc.filePath(),
-                                                       tr("Lineward drawings (*.lineward)"));
+        const auto path = askSavePath(this, tr("Save drawing"), baseName() + ".lineward",
+                                      tr("Lineward drawings (*.lineward)"), ".lineward");
         if (!path.isEmpty())
             if (auto why = saveTo(path.endsWith(".lineward") ? path : path + ".lineward");
                 !why.isEmpty())
@@ -97,35 +108,7 @@ void MainWindow::buildFileMenu() {
     file->addSeparator();
     menuAction(file, tr("Print Pre&view…"), QKeySequence(), this, [this] { printPreview(); });
     menuAction(file, tr("&Print…"), QKeySequence::Print, this, [this] { printSubmittal(); });
-    menuAction(file, tr("Export Submittal &PDF…"), QKeySequence(), this, [this] {
-        const auto path =
-            QFileDialog::getSaveFileName(this, tr("Export Submittal PDF"), {}, tr("PDF (*.pdf)"));
-        if (path.isEmpty())
-            return;
-        m_doc.waitForCheck(); // the result of the newest edit
-        auto r =
-            writeSubmittalPdf(path, m_doc.sharedResult(), m_doc.sharedTables(), SubmittalOptions{});
-        if (!r.error.isEmpty())
-            plainMessage(this, QMessageBox::Warning, tr("Export failed"), r.error);
-        else
-            statusBar()->showMessage(tr("Wrote %1 (%2 pages)").arg(path).arg(r.pages), 8000);
-    });
-    menuAction(file, tr("Export One-line &SVG…"), QKeySequence(), this, [this] {
-        const auto path =
-            QFileDialog::getSaveFileName(this, tr("Export one-line SVG"), {}, tr("SVG (*.svg)"));
-        m_doc.waitForCheck();
-        if (!path.isEmpty())
-            if (auto why = writeOneLineSvg(path, m_doc.sharedResult(), m_doc.sharedTables());
-                !why.isEmpty())
-                plainMessage(this, QMessageBox::Warning, tr("Export failed"), why);
-    });
-    menuAction(file, tr("Export Schedules &CSV…"), QKeySequence(), this, [this] {
-        const auto dir = QFileDialog::getExistingDirectory(this, tr("Folder for the schedules"));
-        m_doc.waitForCheck();
-        if (!dir.isEmpty())
-            if (auto why = writeScheduleCsvs(dir, m_doc.result()); !why.isEmpty())
-                plainMessage(this, QMessageBox::Warning, tr("Export failed"), why);
-    });
+    buildExportMenu(file->addMenu(tr("&Export")));
     file->addSeparator();
     menuAction(file, tr("&Close"), QKeySequence(tr("Ctrl+W")), this, [this] { close(); });
     // Quit asks each window about its unsaved drawing; one Cancel keeps the program running.
@@ -136,6 +119,58 @@ void MainWindow::buildFileMenu() {
                 return;
         QApplication::quit();
     });
+}
+
+void MainWindow::buildExportMenu(QMenu* exportMenu) {
+    // Each export reads the result of the newest edit (waitForCheck) and starts in the folder
+    // used last, named after the drawing.
+    auto done = [this](const QString& path, const QString& why, const QString& more = {}) {
+        if (!why.isEmpty())
+            plainMessage(this, QMessageBox::Warning, tr("Export failed"), why);
+        else
+            statusBar()->showMessage(tr("Wrote %1%2").arg(path, more), 8000);
+    };
+    menuAction(exportMenu, tr("Submittal &PDF…"), QKeySequence(), this, [this, done] {
+        const auto path = askSavePath(this, tr("Export Submittal PDF"), baseName() + ".pdf",
+                                      tr("PDF (*.pdf)"), ".pdf");
+        if (path.isEmpty())
+            return;
+        m_doc.waitForCheck();
+        auto r =
+            writeSubmittalPdf(path, m_doc.sharedResult(), m_doc.sharedTables(), SubmittalOptions{});
+        done(path, r.error, tr(" (%1 pages)").arg(r.pages));
+    });
+    menuAction(exportMenu, tr("One-line &SVG…"), QKeySequence(), this, [this, done] {
+        const auto path = askSavePath(this, tr("Export one-line SVG"), baseName() + ".svg",
+                                      tr("SVG (*.svg)"), ".svg");
+        if (path.isEmpty())
+            return;
+        m_doc.waitForCheck();
+        done(path, writeOneLineSvg(path, m_doc.sharedResult(), m_doc.sharedTables()));
+    });
+    menuAction(exportMenu, tr("One-line &DXF…"), QKeySequence(), this, [this, done] {
+        const auto path = askSavePath(this, tr("Export one-line DXF"), baseName() + ".dxf",
+                                      tr("DXF (*.dxf)"), ".dxf");
+        if (path.isEmpty())
+            return;
+        m_doc.waitForCheck();
+        const auto why = dxf::writeOneLineDxf(m_doc.result(), path.toStdString());
+        done(path, why ? QString::fromStdString(*why) : QString());
+    });
+    menuAction(exportMenu, tr("Schedules &CSV…"), QKeySequence(), this, [this, done] {
+        const auto dir =
+            QFileDialog::getExistingDirectory(this, tr("Folder for the schedules"), lastFolder());
+        if (dir.isEmpty())
+            return;
+        rememberFolder(dir + "/motors.csv");
+        m_doc.waitForCheck();
+        done(dir, writeScheduleCsvs(dir, m_doc.result()));
+    });
+}
+
+QString MainWindow::baseName() const {
+    return m_doc.filePath().isEmpty() ? tr("untitled")
+                                      : QFileInfo(m_doc.filePath()).completeBaseName();
 }
 
 void MainWindow::buildEditMenu() {

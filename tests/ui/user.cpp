@@ -13,10 +13,14 @@
 #include <QAbstractItemView>
 #include <QApplication>
 #include <QComboBox>
+#include <QCompleter>
 #include <QFileDialog>
 #include <QLabel>
 #include <QLineEdit>
+#include <QMenu>
+#include <QMenuBar>
 #include <QMimeData>
+#include <QPointer>
 #include <QPushButton>
 #include <QTabBar>
 #include <QTest>
@@ -250,14 +254,81 @@ void User::press(Qt::Key key, Qt::KeyboardModifiers mods) {
     settle();
 }
 
-void User::answerFileDialogWith(const QString& path) {
-    // The dialog is modal: answer it from the event loop once it is up.
-    QTimer::singleShot(200, [path] {
-        auto* dialog = qobject_cast<QFileDialog*>(QApplication::activeModalWidget());
-        if (!dialog) {
-            ADD_FAILURE() << "no file dialog opened";
+namespace {
+QString menuWords(QString text) {
+    return text.remove('&');
+}
+
+// Opens the menus of `path` (all of it, or all but its last entry) by clicking; returns the
+// menu shown last, or nothing after reporting a failure.
+QMenu* openMenus(MainWindow& w, const QStringList& path, int depth) {
+    QApplication::setActiveWindow(&w);
+    QMenuBar* bar = w.menuBar();
+    QMenu* menu = nullptr;
+    for (QAction* a : bar->actions())
+        if (menuWords(a->text()) == path.front() && a->menu()) {
+            QTest::mouseClick(bar, Qt::LeftButton, {}, bar->actionGeometry(a).center());
+            menu = a->menu();
+        }
+    if (!menu || !QTest::qWaitFor([menu] { return menu->isVisible(); }, 2000)) {
+        ADD_FAILURE() << "no menu " << path.front().toStdString() << " opened";
+        return nullptr;
+    }
+    for (int i = 1; i < depth; ++i) {
+        QAction* sub = nullptr;
+        for (QAction* a : menu->actions())
+            if (menuWords(a->text()) == path[i] && a->menu())
+                sub = a;
+        if (!sub) {
+            ADD_FAILURE() << "no submenu " << path[i].toStdString();
+            return nullptr;
+        }
+        const QPoint at = menu->actionGeometry(sub).center();
+        QTest::mouseMove(menu, at);
+        QTest::mouseClick(menu, Qt::LeftButton, {}, at);
+        menu = sub->menu();
+        if (!QTest::qWaitFor([menu] { return menu->isVisible(); }, 2000)) {
+            ADD_FAILURE() << "submenu " << path[i].toStdString() << " did not open";
+            return nullptr;
+        }
+    }
+    return menu;
+}
+} // namespace
+
+void User::chooseMenu(const QStringList& path) {
+    QMenu* menu = openMenus(m_w, path, static_cast<int>(path.size()) - 1);
+    if (!menu)
+        return;
+    for (QAction* a : menu->actions())
+        if (menuWords(a->text()) == path.back()) {
+            const QPoint at = menu->actionGeometry(a).center();
+            QTest::mouseMove(menu, at);
+            QTest::mouseClick(menu, Qt::LeftButton, {}, at);
+            settle();
             return;
         }
+    ADD_FAILURE() << "no command " << path.back().toStdString() << " in the menu";
+}
+
+QStringList User::menuTexts(const QStringList& path) {
+    QStringList texts;
+    QMenu* menu = openMenus(m_w, path, static_cast<int>(path.size()));
+    if (!menu)
+        return texts;
+    for (QAction* a : menu->actions())
+        if (!a->isSeparator() && a->isVisible())
+            texts << menuWords(a->text());
+    for (int i = 0; i < 5 && QApplication::activePopupWidget(); ++i)
+        QTest::keyClick(QApplication::activePopupWidget(), Qt::Key_Escape);
+    settle();
+    return texts;
+}
+
+void User::answerFileDialogWith(const QString& path) {
+    // The dialog is modal: answer it from the event loop once it is up. Poll, as a person waits
+    // for it: the first dialog of a process can take a while to list its folder.
+    whenModal<QFileDialog>([path](QFileDialog* dialog) {
         auto* name = dialog->findChild<QLineEdit*>("fileNameEdit");
         if (!name) {
             ADD_FAILURE() << "the file dialog has no file name box";
@@ -265,8 +336,39 @@ void User::answerFileDialogWith(const QString& path) {
             return;
         }
         QTest::keyClicks(name, path);
-        QTest::keyClick(name, Qt::Key_Return);
+        // The name box completes from the folder it lists in the background; when its list of
+        // completions is up, Return would pick one instead of accepting. Close it first, as a
+        // person does, then press Return (again, if the list came up once more meanwhile).
+        QPointer<QFileDialog> open(dialog);
+        for (int i = 0; i < 5 && open && open->isVisible(); ++i) {
+            if (name->completer() && name->completer()->popup()->isVisible())
+                QTest::keyClick(name->completer()->popup(), Qt::Key_Escape);
+            QTest::keyClick(name, Qt::Key_Return);
+            QTest::qWait(50);
+        }
     });
+}
+
+void User::whenModalWidget(std::function<bool(QWidget*)> accepts, std::function<void(QWidget*)> act,
+                           const char* what) {
+    auto* timer = new QTimer;
+    timer->setInterval(50);
+    auto tries = std::make_shared<int>(0);
+    QObject::connect(timer, &QTimer::timeout, [timer, accepts, act, what, tries] {
+        QWidget* w = QApplication::activeModalWidget();
+        if (!w || !accepts(w)) {
+            if (++*tries > 200) { // 10 s: it never came; do not answer a later test's dialog
+                timer->stop();
+                timer->deleteLater();
+                ADD_FAILURE() << "no " << what << " opened";
+            }
+            return;
+        }
+        timer->stop();
+        timer->deleteLater();
+        act(w);
+    });
+    timer->start();
 }
 
 void User::answerMessageBox(QMessageBox::StandardButton button, QString* text) {

@@ -7,6 +7,8 @@
 #include <QMessageBox>
 #include <QPoint>
 #include <QString>
+#include <QStringList>
+#include <functional>
 
 class QLineEdit;
 class QComboBox;
@@ -56,8 +58,23 @@ public:
     /// Runs the event loop until the newest check has been shown.
     void settle();
 
+    /// Clicks through the menu bar: the top menu, any submenus, then the command, each by a
+    /// mouse click on its place in the menu ({"File", "Export", "One-line DXF…"}).
+    void chooseMenu(const QStringList& path);
+    /// Opens the menus of `path` by clicking them and returns the texts the last one shows (its
+    /// separators left out), then closes the menus with Escape.
+    QStringList menuTexts(const QStringList& path);
+
     /// Answers the next file dialog with `path` (typed into its file name box, then Enter).
     void answerFileDialogWith(const QString& path);
+    /// Runs `act` on the next modal dialog of type T once it is up (polled for up to 10 s).
+    template <typename T> static void whenModal(std::function<void(T*)> act) {
+        whenModalWidget([](QWidget* w) { return qobject_cast<T*>(w) != nullptr; },
+                        [act](QWidget* w) { act(qobject_cast<T*>(w)); },
+                        T::staticMetaObject.className());
+    }
+    static void whenModalWidget(std::function<bool(QWidget*)> accepts,
+                                std::function<void(QWidget*)> act, const char* what);
     /// Clicks `button` in the next message box once it is up; its text goes to `text`.
     static void answerMessageBox(QMessageBox::StandardButton button, QString* text = nullptr);
 
