@@ -338,13 +338,24 @@ void User::answerFileDialogWith(const QString& path) {
         QTest::keyClicks(name, path);
         // The name box completes from the folder it lists in the background; when its list of
         // completions is up, Return would pick one instead of accepting. Close it first, as a
-        // person does, then press Return (again, if the list came up once more meanwhile).
+        // person does, then press Return (again, if the list came up once more meanwhile, or
+        // the name was changed by it: type it again). On a loaded machine this can take a
+        // while; a dialog still open after 10 s fails the test instead of hanging it.
         QPointer<QFileDialog> open(dialog);
-        for (int i = 0; i < 5 && open && open->isVisible(); ++i) {
+        for (int i = 0; i < 200 && open && open->isVisible(); ++i) {
             if (name->completer() && name->completer()->popup()->isVisible())
                 QTest::keyClick(name->completer()->popup(), Qt::Key_Escape);
+            if (name->text() != path) {
+                QTest::keyClick(name, Qt::Key_A, Qt::ControlModifier);
+                QTest::keyClicks(name, path);
+                continue;
+            }
             QTest::keyClick(name, Qt::Key_Return);
             QTest::qWait(50);
+        }
+        if (open && open->isVisible()) {
+            ADD_FAILURE() << "the file dialog did not take " << path.toStdString();
+            open->reject();
         }
     });
 }
