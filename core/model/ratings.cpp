@@ -131,7 +131,7 @@ void protective(const Part& p, ProtectiveData& d) {
 } // namespace
 
 std::optional<ProtectiveData> protectiveDataOf(const Part& p) {
-    if (p.kind != PartKind::Breaker && p.kind != PartKind::InstBreaker && p.kind != PartKind::Fuse)
+    if (!kindInfo(p.kind).protective) // breakers, instantaneous-only breakers, fuses
         return std::nullopt;
     ProtectiveData d;
     protective(p, d);

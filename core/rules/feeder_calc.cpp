@@ -102,9 +102,7 @@ FeederDeviceLimit feederDeviceLimit(const RuleContext& ctx, const FeederMotorMap
         }
     }
     r.rawA = sumFlc + bestExtra + other;
-    const bool fuse =
-        feederType == ScpdType::TimeDelayFuse || feederType == ScpdType::NonTimeDelayFuse;
-    r.maxA = ctx.tables.standardAtOrBelow(r.rawA, fuse).value_or(r.rawA);
+    r.maxA = ctx.tables.standardAtOrBelow(r.rawA, isFuse(feederType)).value_or(r.rawA);
     r.trace.push_back({"largest branch device", bestTag});
     r.trace.push_back({"sum of motor FLC", fmt(sumFlc) + " A"});
     r.trace.push_back({"other loads (430.63)", fmt(other) + " A"});

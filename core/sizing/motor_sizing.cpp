@@ -105,7 +105,7 @@ ScpdLimit scpdLimit(ScpdType type, MotorType motor, double flc, const Tables& t)
     }
     // 430.52(C)(1) Exception No. 1: the next higher standard rating of that device type is
     // permitted; for fuses 240.6(A) adds 1, 3, 6, 10 and 601 A.
-    const bool fuse = type == ScpdType::TimeDelayFuse || type == ScpdType::NonTimeDelayFuse;
+    const bool fuse = isFuse(type);
     l.maxA = t.nextStandardAtOrAbove(l.rawA, fuse).value_or(l.rawA);
     l.roundedUp = l.maxA > l.rawA + 1e-9;
     // Exception No. 2 sets a ceiling ("shall in no case exceed"): round down.

@@ -22,6 +22,10 @@ enum class ScpdType { NonTimeDelayFuse, TimeDelayFuse, InstantaneousBreaker, Inv
 enum class MotorType { SinglePhase, SquirrelCage, DesignBPremium, Synchronous, WoundRotor };
 
 std::string_view scpdTypeKey(ScpdType t);
+/// Fuses of either kind (their standard ratings include 240.6(A)'s fuse-only ones).
+inline bool isFuse(ScpdType t) {
+    return t == ScpdType::TimeDelayFuse || t == ScpdType::NonTimeDelayFuse;
+}
 /// The device type in words, as Table 430.52 names it (for messages; the key is for files).
 std::string_view scpdTypeName(ScpdType t);
 
