@@ -19,6 +19,8 @@ std::string endName(const Drawing& d, const WireEnd& e) {
     return std::to_string(e.part.value) + "." + term;
 }
 
+} // namespace
+
 ojson partJson(const Part& p) {
     ojson j;
     j["id"] = p.id.value;
@@ -34,12 +36,16 @@ ojson partJson(const Part& p) {
     return j;
 }
 
+namespace {
+
 ojson idList(const std::vector<PartId>& ids) {
     ojson a = ojson::array();
     for (auto id : ids)
         a.push_back(id.value);
     return a;
 }
+
+} // namespace
 
 ojson sheetJson(const SheetInfo& s) {
     ojson j;
@@ -66,6 +72,8 @@ ojson settingsJson(const Settings& s) {
     j["motor_contribution_x"] = fieldValueJson(s.motorContributionX);
     return j;
 }
+
+namespace {
 
 // Writes `"name": [` then one dumped item per line.
 template <typename Range, typename ToJson>
