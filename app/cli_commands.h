@@ -23,6 +23,8 @@ using TablesRef = std::shared_ptr<const Tables>;
 
 /// `check FILE... [--json] [--fail-on violation|caution|note]`
 void addCheckCommand(CLI::App& app, const TablesRef& tables, int& exitCode);
+/// `compare OLD NEW [--json]`
+void addCompareCommand(CLI::App& app, const TablesRef& tables, int& exitCode);
 /// `size --hp HP | --kw KW --volts V [...]`
 void addSizeCommand(CLI::App& app, const TablesRef& tables, int& exitCode);
 /// `trip FILE --part TAG --amps A [--json]`

@@ -19,6 +19,7 @@ int main(int argc, char** argv) {
         return lineward::cli::kBadInput;
     }
     lineward::cli::addCheckCommand(app, tables, exitCode);
+    lineward::cli::addCompareCommand(app, tables, exitCode);
     lineward::cli::addSizeCommand(app, tables, exitCode);
     lineward::cli::addStudyCommand(app, tables, exitCode);
     lineward::cli::addTripCommand(app, exitCode);

@@ -369,7 +369,7 @@ std::string valueText(const ojson& v) {
     if (v.is_null())
         return "(none)";
     if (v.is_string())
-        return v.get<std::string>();
+        return v.get<std::string>().empty() ? "(none)" : v.get<std::string>();
     if (v.is_array()) {
         std::string out;
         for (const auto& e : v)

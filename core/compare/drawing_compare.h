@@ -113,7 +113,7 @@ DrawingComparison compareDrawings(const Drawing& oldDrawing, const Drawing& newD
                                   const Tables& tables);
 
 /// A value of a ValueChange as people read it: text without quotes, numbers as the file
-/// writes them, "(none)" for null, lists joined with ", ". Not escaped.
+/// writes them, "(none)" for null or empty text, lists joined with ", ". Not escaped.
 std::string valueText(const nlohmann::ordered_json& v);
 
 } // namespace lineward
