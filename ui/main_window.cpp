@@ -108,6 +108,7 @@ MainWindow::MainWindow(std::shared_ptr<const Tables> tables, QWidget* parent)
     connect(m_scene, &QGraphicsScene::selectionChanged, this,
             guarded(this, tr("Showing the selection"), [this] { selectionChanged(); }));
 
+    buildCompare();
     buildActions();
     m_recovery = std::make_unique<RecoverySlot>();
     connect(m_autosave, &QTimer::timeout, this,
@@ -120,6 +121,7 @@ MainWindow::MainWindow(std::shared_ptr<const Tables> tables, QWidget* parent)
     restoreState(settings.value("window/state").toByteArray());
     if (!settings.contains("window/geometry"))
         resize(1400, 900);
+    m_changesDock->hide(); // compare mode starts from the menu, never from a saved layout
     refreshStatus();
     refreshTitle();
 }

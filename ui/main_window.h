@@ -7,6 +7,7 @@
 
 #include <QMainWindow>
 
+class QDockWidget;
 class QLabel;
 class QTimer;
 
@@ -19,6 +20,8 @@ class Inspector;
 class PartsPalette;
 class SchedulesPanel;
 class CurvesPanel;
+class ChangesPanel;
+class CompareMark;
 
 /// One window per open drawing.
 class MainWindow : public QMainWindow {
@@ -54,6 +57,13 @@ public:
     /// Applies a finding's proposed fix as one edit, keeping the selection and the view;
     /// returns the refusal text, if any.
     QString applyFix(const Finding& f);
+    /// Compare mode (File → Compare With…): the open drawing against the older revision in
+    /// `path`; returns the reason when that file cannot be read.
+    QString compareWith(const QString& path);
+    /// Leaves compare mode: the Changes panel and the Sheet's marks go.
+    void leaveCompare();
+    bool comparing() const { return m_compareBase != nullptr; }
+    ChangesPanel* changes() const { return m_changes; }
     /// Where autosave writes this window's recovery copy.
     QString recoveryPath() const;
     /// Writes the recovery copy now (the autosave timer calls this every minute).
@@ -81,6 +91,10 @@ private:
     void addRecent(const QString& path);
     void rebuildRecentMenu();
     void selectionChanged();
+    void buildCompare();
+    void addCompareActions(QMenu* file);
+    void refreshCompare();
+    void clearCompareMarks();
 
     Document m_doc;
     SheetScene* m_scene;
@@ -94,6 +108,13 @@ private:
     QMenu* m_recentMenu = nullptr;
     QTimer* m_autosave;
     std::unique_ptr<RecoverySlot> m_recovery;
+    // compare mode
+    std::shared_ptr<const CheckResult> m_compareBase; ///< the older revision's check
+    QString m_compareFile;
+    ChangesPanel* m_changes = nullptr;
+    QDockWidget* m_changesDock = nullptr;
+    std::vector<CompareMark*> m_compareMarks; ///< owned by the scene
+    QAction* m_leaveCompareAction = nullptr;
 };
 
 /// At start-up: offers each drawing that windows which did not close left in the recovery

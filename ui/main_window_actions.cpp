@@ -106,6 +106,8 @@ void MainWindow::buildFileMenu() {
     file->addSeparator();
     menuAction(file, tr("&Title Block…"), QKeySequence(), this, [this] { editTitleBlock(); });
     file->addSeparator();
+    addCompareActions(file);
+    file->addSeparator();
     menuAction(file, tr("Print Pre&view…"), QKeySequence(), this, [this] { printPreview(); });
     menuAction(file, tr("&Print…"), QKeySequence::Print, this, [this] { printSubmittal(); });
     buildExportMenu(file->addMenu(tr("&Export")));

@@ -1,0 +1,207 @@
+// Changes panel rows: one group per kind of difference, one row per part, wire, bucket, value
+// or finding; every text is plain (tree items never interpret markup) and comes from the
+// comparison.
+#include "changes_panel.h"
+
+#include "compare/compare_format.h"
+
+#include <QHeaderView>
+#include <QKeyEvent>
+#include <QLabel>
+#include <QPushButton>
+#include <QTreeWidget>
+#include <QVBoxLayout>
+
+namespace lineward::ui {
+
+namespace {
+
+QString q(const std::string& s) {
+    return QString::fromStdString(s);
+}
+
+QString changesText(const std::vector<ValueChange>& fields) {
+    QStringList parts;
+    for (const auto& v : fields)
+        parts << q(v.key) + " " + q(valueText(v.oldValue)) + " → " + q(valueText(v.newValue));
+    return parts.join("; ");
+}
+
+QString tagsText(const std::vector<std::string>& tags) {
+    QStringList out;
+    for (const auto& t : tags)
+        out << q(t);
+    return out.join(", ");
+}
+
+QString findingText(const FindingRef& f) {
+    return q(std::string(severityName(f.severity))) + " · " + q(f.rule) + " · " + q(f.message);
+}
+
+QTreeWidgetItem* group(QTreeWidget* list, const QString& title, std::size_t count) {
+    auto* g = new QTreeWidgetItem(list, {QString("%1 (%2)").arg(title).arg(count)});
+    g->setFirstColumnSpanned(true);
+    g->setExpanded(true);
+    return g;
+}
+
+QTreeWidgetItem* row(QTreeWidgetItem* parent, const QString& what, const QString& detail) {
+    auto* r = new QTreeWidgetItem(parent, {what, detail});
+    r->setToolTip(1, detail);
+    return r;
+}
+
+} // namespace
+
+ChangesPanel::ChangesPanel(QWidget* parent)
+    : QWidget(parent), m_header(new QLabel), m_leave(new QPushButton(tr("Leave Compare"))),
+      m_list(new QTreeWidget) {
+    setObjectName("changesPanel");
+    m_header->setObjectName("changesHeader");
+    m_header->setTextFormat(Qt::PlainText);
+    m_header->setWordWrap(true);
+    m_leave->setObjectName("leaveCompare");
+    m_list->setObjectName("changesList");
+    m_list->setColumnCount(2);
+    m_list->setHeaderLabels({tr("Part or item"), tr("Change")});
+    m_list->header()->setSectionResizeMode(0, QHeaderView::ResizeToContents);
+    m_list->setRootIsDecorated(true);
+    auto* layout = new QVBoxLayout(this);
+    auto* top = new QHBoxLayout;
+    top->addWidget(m_header, 1);
+    top->addWidget(m_leave);
+    layout->addLayout(top);
+    layout->addWidget(m_list);
+    connect(m_leave, &QPushButton::clicked, this, &ChangesPanel::leaveRequested);
+    connect(m_list, &QTreeWidget::itemClicked, this, &ChangesPanel::rowActivated);
+    connect(m_list, &QTreeWidget::itemActivated, this, &ChangesPanel::rowActivated);
+    // Esc in the list (which would otherwise take it as a key to search for) leaves compare
+    // mode, as it does anywhere else in the panel (keyPressEvent).
+    m_list->installEventFilter(this);
+}
+
+bool ChangesPanel::eventFilter(QObject* watched, QEvent* event) {
+    const bool key = event->type() == QEvent::KeyPress || event->type() == QEvent::ShortcutOverride;
+    if (watched == m_list && key && static_cast<QKeyEvent*>(event)->key() == Qt::Key_Escape) {
+        // Claim Esc before the window's own Esc command (Cancel Placing) takes it as a shortcut.
+        event->accept();
+        if (event->type() == QEvent::KeyPress)
+            emit leaveRequested();
+        return true;
+    }
+    return QWidget::eventFilter(watched, event);
+}
+
+void ChangesPanel::keyPressEvent(QKeyEvent* event) {
+    if (event->key() == Qt::Key_Escape) {
+        emit leaveRequested();
+        return;
+    }
+    QWidget::keyPressEvent(event);
+}
+
+void ChangesPanel::clear() {
+    m_list->clear();
+    m_header->clear();
+}
+
+void ChangesPanel::rowActivated() {
+    const QTreeWidgetItem* r = m_list->currentItem();
+    if (!r)
+        return;
+    if (const QVariant id = r->data(0, kPartRole); id.isValid())
+        emit locatePart(PartId(id.toUInt()));
+    else if (const QVariant at = r->data(0, kPlaceRole); at.isValid())
+        emit locatePlace(at.toPointF());
+}
+
+void ChangesPanel::showComparison(const DrawingComparison& c, const QString& otherFile) {
+    m_list->clear();
+    m_header->setText(
+        (c.same() ? tr("The same drawing as %1 (older revision).")
+                  : tr("Changes since %1 (older revision); the Sheet marks added and changed "
+                       "parts and shows removed ones as ghosts."))
+            .arg(otherFile));
+    auto partRows = [&](const QString& title, const std::vector<PartOnOneSide>& parts,
+                        bool onSheet) {
+        if (parts.empty())
+            return;
+        auto* g = group(m_list, title, parts.size());
+        for (const auto& p : parts) {
+            auto* r = row(g, q(partTagOrId(p.part)), q(std::string(kindInfo(p.part.kind).name)));
+            if (onSheet)
+                r->setData(0, kPartRole, p.part.id.value);
+            else
+                r->setData(0, kPlaceRole, QPointF(p.part.x, p.part.y));
+        }
+    };
+    partRows(tr("Parts added"), c.partsAdded, true);
+    partRows(tr("Parts removed"), c.partsRemoved, false);
+    if (!c.partsChanged.empty()) {
+        auto* g = group(m_list, tr("Parts changed"), c.partsChanged.size());
+        for (const auto& p : c.partsChanged)
+            row(g, q(p.tag), changesText(p.fields))->setData(0, kPartRole, p.newId.value);
+    }
+    auto wireRows = [&](const QString& title, const std::vector<WireOnOneSide>& wires,
+                        bool onSheet) {
+        if (wires.empty())
+            return;
+        auto* g = group(m_list, title, wires.size());
+        for (const auto& w : wires) {
+            auto* r = row(g, tr("wire %1").arg(w.id.value),
+                          q(w.a.tag) + "." + q(w.a.terminal) + " – " + q(w.b.tag) + "." +
+                              q(w.b.terminal));
+            if (onSheet)
+                r->setData(0, kPartRole, w.a.part.value);
+        }
+    };
+    wireRows(tr("Wires added"), c.wiresAdded, true);
+    wireRows(tr("Wires removed"), c.wiresRemoved, false);
+    auto bucketRows = [&](const QString& title, const std::vector<BucketOnOneSide>& buckets) {
+        if (buckets.empty())
+            return;
+        auto* g = group(m_list, title, buckets.size());
+        for (const auto& b : buckets)
+            row(g, q(b.tag), tagsText(b.partTags));
+    };
+    bucketRows(tr("Buckets added"), c.bucketsAdded);
+    bucketRows(tr("Buckets removed"), c.bucketsRemoved);
+    if (!c.bucketsChanged.empty()) {
+        auto* g = group(m_list, tr("Buckets changed"), c.bucketsChanged.size());
+        for (const auto& b : c.bucketsChanged)
+            row(g, q(b.tag), changesText(b.fields));
+    }
+    auto valueRows = [&](const QString& title, const std::vector<ValueChange>& values) {
+        if (values.empty())
+            return;
+        auto* g = group(m_list, title, values.size());
+        for (const auto& v : values)
+            row(g, q(v.key), q(valueText(v.oldValue)) + " → " + q(valueText(v.newValue)));
+    };
+    valueRows(tr("Sheet"), c.sheet);
+    valueRows(tr("Settings"), c.settings);
+    auto findingRows = [&](const QString& title, const std::vector<FindingRef>& findings,
+                           bool onSheet) {
+        if (findings.empty())
+            return;
+        auto* g = group(m_list, title, findings.size());
+        for (const auto& f : findings) {
+            auto* r = row(g, tagsText(f.tags), findingText(f));
+            if (f.parts.empty())
+                continue;
+            if (onSheet) {
+                r->setData(0, kPartRole, f.parts.front().value);
+            } else if (auto it = c.pairedParts.find(f.parts.front()); it != c.pairedParts.end()) {
+                r->setData(0, kPartRole, it->second.value); // the part is still there
+            } else {
+                for (const auto& p : c.partsRemoved)
+                    if (p.part.id == f.parts.front())
+                        r->setData(0, kPlaceRole, QPointF(p.part.x, p.part.y));
+            }
+        }
+    };
+    findingRows(tr("Findings introduced"), c.findingsNew, true);
+    findingRows(tr("Findings resolved"), c.findingsResolved, false);
+}
+
+} // namespace lineward::ui
