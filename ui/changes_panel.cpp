@@ -51,6 +51,74 @@ QTreeWidgetItem* row(QTreeWidgetItem* parent, const QString& what, const QString
     return r;
 }
 
+void partRows(QTreeWidget* list, const QString& title, const std::vector<PartOnOneSide>& parts,
+              bool onSheet) {
+    if (parts.empty())
+        return;
+    auto* g = group(list, title, parts.size());
+    for (const auto& p : parts) {
+        auto* r = row(g, q(partTagOrId(p.part)), q(std::string(kindInfo(p.part.kind).name)));
+        if (onSheet)
+            r->setData(0, ChangesPanel::kPartRole, p.part.id.value);
+        else // a removed part: where its ghost stands
+            r->setData(0, ChangesPanel::kPlaceRole, QPointF(p.part.x, p.part.y));
+    }
+}
+
+void wireRows(QTreeWidget* list, const QString& title, const std::vector<WireOnOneSide>& wires,
+              bool onSheet) {
+    if (wires.empty())
+        return;
+    auto* g = group(list, title, wires.size());
+    for (const auto& w : wires) {
+        auto* r =
+            row(g, QObject::tr("wire %1").arg(w.id.value),
+                q(w.a.tag) + "." + q(w.a.terminal) + " – " + q(w.b.tag) + "." + q(w.b.terminal));
+        if (onSheet)
+            r->setData(0, ChangesPanel::kPartRole, w.a.part.value);
+    }
+}
+
+void bucketRows(QTreeWidget* list, const QString& title,
+                const std::vector<BucketOnOneSide>& buckets) {
+    if (buckets.empty())
+        return;
+    auto* g = group(list, title, buckets.size());
+    for (const auto& b : buckets)
+        row(g, q(b.tag), tagsText(b.partTags));
+}
+
+void valueRows(QTreeWidget* list, const QString& title, const std::vector<ValueChange>& values) {
+    if (values.empty())
+        return;
+    auto* g = group(list, title, values.size());
+    for (const auto& v : values)
+        row(g, q(v.key), q(valueText(v.oldValue)) + " → " + q(valueText(v.newValue)));
+}
+
+// A new finding's part is on the Sheet; a resolved one's is found through the pairing, or is
+// a removed part's ghost.
+void findingRows(QTreeWidget* list, const QString& title, const std::vector<FindingRef>& findings,
+                 const DrawingComparison& c, bool onSheet) {
+    if (findings.empty())
+        return;
+    auto* g = group(list, title, findings.size());
+    for (const auto& f : findings) {
+        auto* r = row(g, tagsText(f.tags), findingText(f));
+        if (f.parts.empty())
+            continue;
+        if (onSheet) {
+            r->setData(0, ChangesPanel::kPartRole, f.parts.front().value);
+        } else if (auto it = c.pairedParts.find(f.parts.front()); it != c.pairedParts.end()) {
+            r->setData(0, ChangesPanel::kPartRole, it->second.value);
+        } else {
+            for (const auto& p : c.partsRemoved)
+                if (p.part.id == f.parts.front())
+                    r->setData(0, ChangesPanel::kPlaceRole, QPointF(p.part.x, p.part.y));
+        }
+    }
+}
+
 } // namespace
 
 ChangesPanel::ChangesPanel(QWidget* parent)
@@ -122,86 +190,26 @@ void ChangesPanel::showComparison(const DrawingComparison& c, const QString& oth
                   : tr("Changes since %1 (older revision); the Sheet marks added and changed "
                        "parts and shows removed ones as ghosts."))
             .arg(otherFile));
-    auto partRows = [&](const QString& title, const std::vector<PartOnOneSide>& parts,
-                        bool onSheet) {
-        if (parts.empty())
-            return;
-        auto* g = group(m_list, title, parts.size());
-        for (const auto& p : parts) {
-            auto* r = row(g, q(partTagOrId(p.part)), q(std::string(kindInfo(p.part.kind).name)));
-            if (onSheet)
-                r->setData(0, kPartRole, p.part.id.value);
-            else
-                r->setData(0, kPlaceRole, QPointF(p.part.x, p.part.y));
-        }
-    };
-    partRows(tr("Parts added"), c.partsAdded, true);
-    partRows(tr("Parts removed"), c.partsRemoved, false);
+    partRows(m_list, tr("Parts added"), c.partsAdded, true);
+    partRows(m_list, tr("Parts removed"), c.partsRemoved, false);
     if (!c.partsChanged.empty()) {
         auto* g = group(m_list, tr("Parts changed"), c.partsChanged.size());
         for (const auto& p : c.partsChanged)
             row(g, q(p.tag), changesText(p.fields))->setData(0, kPartRole, p.newId.value);
     }
-    auto wireRows = [&](const QString& title, const std::vector<WireOnOneSide>& wires,
-                        bool onSheet) {
-        if (wires.empty())
-            return;
-        auto* g = group(m_list, title, wires.size());
-        for (const auto& w : wires) {
-            auto* r = row(g, tr("wire %1").arg(w.id.value),
-                          q(w.a.tag) + "." + q(w.a.terminal) + " – " + q(w.b.tag) + "." +
-                              q(w.b.terminal));
-            if (onSheet)
-                r->setData(0, kPartRole, w.a.part.value);
-        }
-    };
-    wireRows(tr("Wires added"), c.wiresAdded, true);
-    wireRows(tr("Wires removed"), c.wiresRemoved, false);
-    auto bucketRows = [&](const QString& title, const std::vector<BucketOnOneSide>& buckets) {
-        if (buckets.empty())
-            return;
-        auto* g = group(m_list, title, buckets.size());
-        for (const auto& b : buckets)
-            row(g, q(b.tag), tagsText(b.partTags));
-    };
-    bucketRows(tr("Buckets added"), c.bucketsAdded);
-    bucketRows(tr("Buckets removed"), c.bucketsRemoved);
+    wireRows(m_list, tr("Wires added"), c.wiresAdded, true);
+    wireRows(m_list, tr("Wires removed"), c.wiresRemoved, false);
+    bucketRows(m_list, tr("Buckets added"), c.bucketsAdded);
+    bucketRows(m_list, tr("Buckets removed"), c.bucketsRemoved);
     if (!c.bucketsChanged.empty()) {
         auto* g = group(m_list, tr("Buckets changed"), c.bucketsChanged.size());
         for (const auto& b : c.bucketsChanged)
             row(g, q(b.tag), changesText(b.fields));
     }
-    auto valueRows = [&](const QString& title, const std::vector<ValueChange>& values) {
-        if (values.empty())
-            return;
-        auto* g = group(m_list, title, values.size());
-        for (const auto& v : values)
-            row(g, q(v.key), q(valueText(v.oldValue)) + " → " + q(valueText(v.newValue)));
-    };
-    valueRows(tr("Sheet"), c.sheet);
-    valueRows(tr("Settings"), c.settings);
-    auto findingRows = [&](const QString& title, const std::vector<FindingRef>& findings,
-                           bool onSheet) {
-        if (findings.empty())
-            return;
-        auto* g = group(m_list, title, findings.size());
-        for (const auto& f : findings) {
-            auto* r = row(g, tagsText(f.tags), findingText(f));
-            if (f.parts.empty())
-                continue;
-            if (onSheet) {
-                r->setData(0, kPartRole, f.parts.front().value);
-            } else if (auto it = c.pairedParts.find(f.parts.front()); it != c.pairedParts.end()) {
-                r->setData(0, kPartRole, it->second.value); // the part is still there
-            } else {
-                for (const auto& p : c.partsRemoved)
-                    if (p.part.id == f.parts.front())
-                        r->setData(0, kPlaceRole, QPointF(p.part.x, p.part.y));
-            }
-        }
-    };
-    findingRows(tr("Findings introduced"), c.findingsNew, true);
-    findingRows(tr("Findings resolved"), c.findingsResolved, false);
+    valueRows(m_list, tr("Sheet"), c.sheet);
+    valueRows(m_list, tr("Settings"), c.settings);
+    findingRows(m_list, tr("Findings introduced"), c.findingsNew, c, true);
+    findingRows(m_list, tr("Findings resolved"), c.findingsResolved, c, false);
 }
 
 } // namespace lineward::ui
