@@ -16,7 +16,7 @@ namespace lineward::cli {
 
 namespace {
 struct ExportArgs {
-    std::string file, pdf, svg, dxf, csv, paper = "tabloid";
+    std::string file, pdf, svg, dxf, csv, paper = "tabloid", since, revision;
     bool portrait = false;
 };
 } // namespace
@@ -36,11 +36,20 @@ void addExportCommand(CLI::App& app, const TablesRef& tables, int& exitCode) {
     cmd->add_option("--paper", a->paper, "letter, legal, tabloid (default), a4 or a3")
         ->check(CLI::IsMember({"letter", "legal", "tabloid", "a4", "a3"}));
     cmd->add_flag("--portrait", a->portrait, "portrait pages (default landscape)");
+    cmd->add_option("--since", a->since,
+                    "previous revision (.lineward): the Submittal flags each part added or "
+                    "changed since it")
+        ->check(CLI::ExistingFile);
+    cmd->add_option("--revision", a->revision,
+                    "the flags' revision (default: the newest row of the revision table)");
     cmd->callback([a, &tables, &exitCode] {
         if (a->pdf.empty() && a->svg.empty() && a->dxf.empty() && a->csv.empty())
             throw CLI::ValidationError("output", "give --pdf, --svg, --dxf or --csv");
         auto loaded = loadForVerb(a->file, exitCode);
         if (!loaded)
+            return;
+        std::optional<Drawing> previous;
+        if (!a->since.empty() && !(previous = loadForVerb(a->since, exitCode)))
             return;
         // Painting needs Qt; the DXF alone does not.
         if (!a->pdf.empty() || !a->svg.empty() || !a->csv.empty())
@@ -60,11 +69,19 @@ void addExportCommand(CLI::App& app, const TablesRef& tables, int& exitCode) {
             ui::SubmittalOptions o;
             o.paper = *ui::paperByName(QString::fromStdString(a->paper));
             o.orientation = a->portrait ? QPageLayout::Portrait : QPageLayout::Landscape;
+            if (previous) {
+                o.previous = runCheck(*previous, *tables);
+                o.previousName = QFileInfo(QString::fromStdString(a->since)).fileName();
+                o.revision = QString::fromStdString(a->revision);
+            }
             auto r = ui::writeSubmittalPdf(QString::fromStdString(a->pdf), result, tables, o);
             if (!r.error.isEmpty())
                 return fail(r.error);
             std::cout << "wrote " << a->pdf << " (" << r.pages << " pages, " << r.oneLineSheets
-                      << " one-line sheet(s))\n";
+                      << " one-line sheet(s)";
+            if (previous)
+                std::cout << ", " << r.revisionFlags << " part(s) flagged as revised";
+            std::cout << ")\n";
         }
         if (!a->svg.empty()) {
             if (auto why = ui::writeOneLineSvg(QString::fromStdString(a->svg), result, tables);

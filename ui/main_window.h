@@ -22,6 +22,7 @@ class SchedulesPanel;
 class CurvesPanel;
 class ChangesPanel;
 class CompareMark;
+struct SubmittalOptions;
 
 /// One window per open drawing.
 class MainWindow : public QMainWindow {
@@ -95,6 +96,8 @@ private:
     void addCompareActions(QMenu* file);
     void refreshCompare();
     void clearCompareMarks();
+    /// In compare mode, the Submittal flags the parts changed since the compared revision.
+    void flagRevisions(SubmittalOptions& o) const;
 
     Document m_doc;
     SheetScene* m_scene;

@@ -138,8 +138,9 @@ void MainWindow::buildExportMenu(QMenu* exportMenu) {
         if (path.isEmpty())
             return;
         m_doc.waitForCheck();
-        auto r =
-            writeSubmittalPdf(path, m_doc.sharedResult(), m_doc.sharedTables(), SubmittalOptions{});
+        SubmittalOptions o;
+        flagRevisions(o);
+        auto r = writeSubmittalPdf(path, m_doc.sharedResult(), m_doc.sharedTables(), o);
         done(path, r.error, tr(" (%1 pages)").arg(r.pages));
     });
     menuAction(exportMenu, tr("One-line &SVG…"), QKeySequence(), this, [this, done] {
@@ -245,6 +246,7 @@ void MainWindow::printPreview() {
                 SubmittalOptions o;
                 o.paper = p->pageLayout().pageSize();
                 o.orientation = p->pageLayout().orientation();
+                flagRevisions(o);
                 paintSubmittal(*p, m_doc.sharedResult(), m_doc.sharedTables(), o);
             }));
     preview.exec();
@@ -260,6 +262,7 @@ void MainWindow::printSubmittal() {
     SubmittalOptions o;
     o.paper = printer.pageLayout().pageSize();
     o.orientation = printer.pageLayout().orientation();
+    flagRevisions(o);
     auto r = paintSubmittal(printer, m_doc.sharedResult(), m_doc.sharedTables(), o);
     if (!r.error.isEmpty())
         plainMessage(this, QMessageBox::Warning, tr("Print failed"), r.error);

@@ -10,6 +10,7 @@
 #include "part_item.h"
 #include "sheet_scene.h"
 #include "sheet_view.h"
+#include "submittal.h"
 
 #include <QAction>
 #include <QDockWidget>
@@ -91,6 +92,13 @@ void MainWindow::refreshCompare() {
             .arg(c.partsChanged.size())
             .arg(c.findingsNew.size())
             .arg(c.findingsResolved.size()));
+}
+
+void MainWindow::flagRevisions(SubmittalOptions& o) const {
+    if (!m_compareBase)
+        return;
+    o.previous = m_compareBase;
+    o.previousName = m_compareFile;
 }
 
 void MainWindow::buildCompare() {

@@ -3,12 +3,15 @@
 // the one-line scaled or tiled with match lines, then text pages and curve sheets.
 #include "submittal.h"
 
+#include "compare/drawing_compare.h"
 #include "curves/curve_set.h"
 #include "curves/path_curves.h"
 #include "curves_plot.h"
 #include "document.h"
+#include "part_item.h"
 #include "report/report_format.h"
 #include "report/schedules.h"
+#include "revision_flag.h"
 #include "sheet_scene.h"
 #include "studies/study_view.h"
 
@@ -45,6 +48,7 @@ struct PageCtx {
     int pageNo = 0;
     int pageCount = 0;
     QString date;
+    QString revisionNote; ///< the revision flags' line of the revision table, if any
     QRectF page() const { return pageRect(dev); }
     QRectF body() const { return bodyRect(dev); }
 };
@@ -88,6 +92,7 @@ void titleBlock(PageCtx& c, const QString& sheetTitle) {
     for (const auto& r : c.d.sheet.revisions)
         revs += qs(r.rev).leftJustified(6) + qs(r.date).leftJustified(13) +
                 qs(r.by).leftJustified(14) + qs(r.note) + "\n";
+    revs += c.revisionNote;
     p.drawText(QRectF(x2 + 4, tb.top() + 3, x3 - x2 - 8, kTitleH - 6), Qt::TextWordWrap, revs);
     p.drawText(
         QRectF(x3 + 4, tb.top() + 3, tb.right() - x3 - 8, kTitleH - 6), Qt::TextWordWrap,
@@ -325,7 +330,36 @@ struct SubmittalData {
     SheetScene& scene;
     std::vector<PartId> curveParts;
     std::vector<TextTable> tables; ///< findings, accepted deviations, schedules
+    QString revisionNote;
 };
+
+// Flags each part added or changed since the previous revision; returns the revision table's
+// line about them (empty without a previous revision).
+QString flagRevisedParts(SheetScene& scene, const CheckResult& result, const SubmittalOptions& o,
+                         int& flags) {
+    flags = 0;
+    if (!o.previous)
+        return {};
+    const Drawing& d = *result.drawing;
+    const QString rev = !o.revision.isEmpty()       ? o.revision
+                        : d.sheet.revisions.empty() ? QString("1")
+                                                    : qs(d.sheet.revisions.back().rev);
+    const DrawingComparison c = compareDrawings(*o.previous, result);
+    std::vector<PartId> revised;
+    for (const auto& p : c.partsAdded)
+        revised.push_back(p.part.id);
+    for (const auto& p : c.partsChanged)
+        revised.push_back(p.newId);
+    for (auto id : revised)
+        if (PartItem* item = scene.itemFor(id)) {
+            scene.addItem(new RevisionFlag(rev, item->symbolSceneRect()));
+            ++flags;
+        }
+    return QString("FLAG %1: %2 PARTS ADDED OR CHANGED SINCE %3\n")
+        .arg(rev)
+        .arg(flags)
+        .arg(o.previousName.isEmpty() ? QString("THE PREVIOUS REVISION") : o.previousName);
+}
 
 std::vector<TextTable> submittalTables(const std::vector<std::vector<QStringList>>& findings,
                                        const std::vector<Schedule>& schedules) {
@@ -370,7 +404,7 @@ int paintPages(QPagedPaintDevice& dev, const SubmittalData& s, const SubmittalOp
         error = "cannot start painting on the output";
         return 0;
     }
-    PageCtx c{painter, dev, s.d, 0, pageCount, date};
+    PageCtx c{painter, dev, s.d, 0, pageCount, date, s.revisionNote};
     paintOneLine(c, s.scene, oneLineSheets, o);
     for (const auto& t : s.tables)
         textPages(c, t.title, t.rows, t.widths);
@@ -402,13 +436,15 @@ SubmittalResult paintSubmittal(QPagedPaintDevice& dev, std::shared_ptr<const Che
     SheetScene scene(doc);
     scene.setPrinting(true);
     scene.routeWires();
+    const QString revisionNote = flagRevisedParts(scene, *result, o, res.revisionFlags);
     const Drawing& d = *result->drawing;
     const auto view = result->view();
     SubmittalData data{d,
                        view ? &*view : nullptr,
                        scene,
                        {},
-                       submittalTables(findingRows(d, result->report), buildSchedules(*result))};
+                       submittalTables(findingRows(d, result->report), buildSchedules(*result)),
+                       revisionNote};
     if (o.curveParts)
         data.curveParts = *o.curveParts;
     else

@@ -23,6 +23,12 @@ struct SubmittalOptions {
     /// The one-line is tiled when fitting it on one page would shrink it below this scale.
     double minScale = 0.45;
     QString date; ///< printed in the title block; empty: today
+    /// The previous revision's check: each part added or changed since it (core/compare) gets
+    /// our revision flag on the one-line, and the revision table a line saying so. Nothing: no
+    /// flags.
+    std::shared_ptr<const CheckResult> previous;
+    QString previousName; ///< the previous revision's file, named in that line
+    QString revision;     ///< the flags' revision; empty: the newest row of the revision table
 };
 
 /// Paper by name ("letter", "legal", "tabloid", "a4", "a3"); nothing for other names.
@@ -32,6 +38,7 @@ std::optional<QPageSize> paperByName(const QString& name);
 struct SubmittalResult {
     int pages = 0;
     int oneLineSheets = 0;
+    int revisionFlags = 0; ///< parts flagged as added or changed since the previous revision
     QString error;
 };
 /// Everything below reads one check result (the editor's newest, or the command line's one

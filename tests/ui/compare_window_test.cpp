@@ -13,6 +13,7 @@
 
 #include <QDockWidget>
 #include <QFile>
+#include <QProcess>
 #include <QTest>
 #include <QTreeWidget>
 #include <gtest/gtest.h>
@@ -180,4 +181,32 @@ TEST(CompareWindow, OpeningAnotherDrawingLeavesCompareMode) {
     EXPECT_EQ(marksOf(w.scene(), CompareMark::Kind::Removed), 0);
     EXPECT_EQ(marksOf(w.scene(), CompareMark::Kind::Changed), 0);
     EXPECT_EQ(w.changes()->list()->topLevelItemCount(), 0);
+}
+
+// The Submittal exported while comparing flags each part added or changed since the compared
+// revision, and its revision table says how many and since which file.
+TEST(CompareWindow, SubmittalExportedWhileComparingFlagsTheRevisedParts) {
+    MainWindow w(test::sharedTables());
+    const QString issued = test::samplePath("kestrel-mill-mcc1.lineward");
+    const QString review = test::samplePath("kestrel-mill-mcc1-review.lineward");
+    ASSERT_TRUE(w.openFile(issued, true).isEmpty());
+    test::User user(w);
+    user.answerFileDialogWith(review);
+    user.chooseMenu({"File", "Compare With…"});
+    ASSERT_TRUE(w.comparing());
+    auto older = io::loadDrawing(review.toStdString());
+    ASSERT_TRUE(older);
+    const auto c = compareDrawings(*older.drawing, w.document().drawing(), *test::sharedTables());
+    const std::size_t revised = c.partsAdded.size() + c.partsChanged.size();
+    ASSERT_GT(revised, 0u);
+    const QString pdf = test::tempDir("compare-submittal") + "/revised.pdf";
+    user.answerFileDialogWith(pdf);
+    user.chooseMenu({"File", "Export", "Submittal PDF…"});
+    ASSERT_TRUE(QFile::exists(pdf));
+    QProcess p;
+    p.start("pdftotext", {"-f", "1", "-l", "1", pdf, "-"});
+    p.waitForFinished(60000);
+    const QString page1 = QString::fromUtf8(p.readAllStandardOutput()).simplified();
+    // Revision B is the newest row of the issued sample's revision table.
+    EXPECT_TRUE(page1.contains(QString("FLAG B: %1 PARTS").arg(revised))) << page1.toStdString();
 }
