@@ -21,6 +21,7 @@ int main(int argc, char** argv) {
     lineward::cli::addCheckCommand(app, tables, exitCode);
     lineward::cli::addSizeCommand(app, tables, exitCode);
     lineward::cli::addStudyCommand(app, tables, exitCode);
+    lineward::cli::addArcFlashCommand(app, tables, exitCode);
     lineward::cli::addTripCommand(app, exitCode);
 #ifdef LINEWARD_WITH_QT
     lineward::cli::addCurvesCommand(app, tables, exitCode);

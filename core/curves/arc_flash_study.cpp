@@ -152,10 +152,11 @@ ArcFlashEquipment evaluateAt(const StudyView& ctx, const Part& bus, std::string_
                           ": arcing time cut to " + capText +
                           " (arc-flash time cap setting, common practice: a worker can move away)");
     if (dev && !bucket) {
-        const std::string above =
-            devices.size() > 1 ? devices[1].part->tag : std::string("no device in the drawing");
+        const std::string byWhom = devices.size() > 1
+                                       ? "is cleared only by " + devices[1].part->tag
+                                       : std::string("is cleared by no device in the drawing");
         e.notes.push_back("an arc on the line side of " + dev->part->tag +
-                          " (the equipment's own main or feeder) is cleared only by " + above +
+                          " (the equipment's own main or feeder) " + byWhom +
                           "; this result holds for its load side");
     }
     if (bucket)

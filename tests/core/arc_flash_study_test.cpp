@@ -4,9 +4,11 @@
 #include "check/check.h"
 #include "curves/arc_flash_study.h"
 #include "curves/trip_curve.h"
+#include "io/drawing_file.h"
 #include "model/ratings.h"
 #include "test_support.h"
 
+#include <algorithm>
 #include <gtest/gtest.h>
 
 using namespace lineward;
@@ -191,4 +193,32 @@ TEST(ArcFlashStudy, FindingsOnlyWhereTheDrawingAsksForThem) {
     d.settings.arcFlashFindings = true;
     r = checked(d);
     EXPECT_EQ(findings(*r, "arcflash.energy.caution").size(), 2u);
+}
+
+TEST(ArcFlashStudy, CurrentSeenAcrossATransformerIsReferredByTheVoltageRatio) {
+    // Clean sample: panelboard LP-1 (208 V) is fed by TX-LP1 from CB-LP1 on the 480 V MCC, the
+    // first breaker on its line side. CB-LP1 sees the arcing current times 208/480.
+    auto loaded = io::loadDrawing(sourcePath("samples/kestrel-mill-mcc1.lineward"));
+    ASSERT_TRUE(loaded) << loaded.error->text();
+    const auto r = checked(*loaded.drawing);
+    const auto* lp = find(*r, "LP-1");
+    ASSERT_NE(lp, nullptr);
+    ASSERT_TRUE(lp->result.range.ok()) << lp->result.range.outside.front();
+    ASSERT_NE(lp->clearing, nullptr);
+    EXPECT_EQ(lp->clearing->tag, "CB-LP1");
+    EXPECT_EQ(lp->kind, "panelboard");
+    EXPECT_NEAR(lp->input.vocKv, 0.208, 1e-9);
+    const auto curve = TripCurve::of(*lp->clearing);
+    ASSERT_TRUE(curve);
+    const double seen = lp->result.currents.iarc * 1000 * 208.0 / 480.0;
+    const double t = std::min(curve->maxTime(seen), loaded.drawing->settings.arcFlashMaxTimeS);
+    EXPECT_NEAR(lp->tFullS, t, 1e-12);
+    // Every bus and every bucket of the sample has a result with its clearing device.
+    std::size_t buckets = 0;
+    for (const auto& e : *r->arcFlash) {
+        EXPECT_NE(e.clearing, nullptr) << e.tag;
+        EXPECT_TRUE(e.energyCal()) << e.tag;
+        buckets += e.bucket ? 1 : 0;
+    }
+    EXPECT_EQ(buckets, loaded.drawing->buckets().size());
 }
