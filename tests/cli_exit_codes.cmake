@@ -143,3 +143,27 @@ string(FIND "${LAST_ERR}" "${esc}" at)
 if(NOT at EQUAL -1)
   message(FATAL_ERROR "a syntax error quoted ESC raw: ${LAST_ERR}")
 endif()
+
+# arcflash: every bus and bucket of the clean sample has a clearing device and an energy; the
+# JSON carries the issue's keys; a missing file is refused.
+expect_exit(0 ${CLI} arcflash ${SAMPLES}/kestrel-mill-mcc1.lineward --json)
+string(JSON n LENGTH "${LAST_OUT}" equipment)
+if(n LESS 16) # SWBD-1, MCC-1, 13 buckets, LP-1
+  message(FATAL_ERROR "arcflash lists ${n} pieces of equipment: ${LAST_OUT}")
+endif()
+math(EXPR last "${n} - 1")
+foreach(i RANGE ${last})
+  foreach(key id tag kind voc_kv ibf_ka config gap_mm working_distance_mm enclosure_mm iarc_ka
+              iarc_min_ka clearing_tag t_arc_s t_arc_min_s e_cal_cm2 afb_mm governing)
+    string(JSON type ERROR_VARIABLE err TYPE "${LAST_OUT}" equipment ${i} ${key})
+    if(err OR type STREQUAL "NULL")
+      message(FATAL_ERROR "arcflash equipment ${i} has no ${key}: ${LAST_OUT}")
+    endif()
+  endforeach()
+endforeach()
+expect_exit(0 ${CLI} arcflash ${SAMPLES}/kestrel-mill-mcc1-review.lineward)
+string(FIND "${LAST_OUT}" "does not replace" caution)
+if(caution EQUAL -1)
+  message(FATAL_ERROR "arcflash printed no safety caution: ${LAST_OUT}")
+endif()
+expect_exit(2 ${CLI} arcflash ${SAMPLES}/no-such-file.lineward)
