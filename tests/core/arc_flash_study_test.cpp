@@ -6,7 +6,9 @@
 #include "curves/trip_curve.h"
 #include "io/drawing_file.h"
 #include "model/ratings.h"
+#include "report/schedules.h"
 #include "test_support.h"
+#include "util/trace.h"
 
 #include <algorithm>
 #include <gtest/gtest.h>
@@ -221,4 +223,24 @@ TEST(ArcFlashStudy, CurrentSeenAcrossATransformerIsReferredByTheVoltageRatio) {
         buckets += e.bucket ? 1 : 0;
     }
     EXPECT_EQ(buckets, loaded.drawing->buckets().size());
+}
+
+TEST(ArcFlashStudy, ScheduleShowsTheOneResult) {
+    // The arc-flash schedule (Schedules panel, CSV, Submittal) reads the check result's study:
+    // one row per bus and bucket, the same numbers.
+    const auto r = checked(smallLineup());
+    const auto schedules = buildSchedules(*r);
+    const Schedule* s = nullptr;
+    for (const auto& x : schedules)
+        if (x.name == "arcflash")
+            s = &x;
+    ASSERT_NE(s, nullptr);
+    ASSERT_EQ(s->rows.size(), r->arcFlash->size());
+    const auto energy = std::find(s->headers.begin(), s->headers.end(), "Incident energy cal/cm²");
+    ASSERT_NE(energy, s->headers.end());
+    const auto col = static_cast<std::size_t>(energy - s->headers.begin());
+    for (std::size_t i = 0; i < s->rows.size(); ++i) {
+        EXPECT_EQ(s->rows[i][0], (*r->arcFlash)[i].tag);
+        EXPECT_EQ(s->rows[i][col], fmt(*(*r->arcFlash)[i].energyCal(), 2));
+    }
 }
