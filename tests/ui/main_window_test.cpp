@@ -148,3 +148,32 @@ TEST(MainWindow, InspectorShowsTheBusArcFlashResultAndFollowsAnEdit) {
     user.settle();
     EXPECT_TRUE(label->isHidden());
 }
+
+TEST(MainWindow, EachBusCarriesItsArcFlashMark) {
+    // The mark on the sheet shows the check result's energy, and follows an edit.
+    MainWindow w(sharedTables());
+    ASSERT_TRUE(w.openFile(sample("kestrel-mill-mcc1.lineward"), true).isEmpty());
+    test::User user(w);
+    const auto& af = *w.document().result().arcFlash;
+    int buses = 0;
+    for (const auto& e : af) {
+        if (e.bucket)
+            continue;
+        ++buses;
+        PartItem* item = w.scene()->itemFor(e.part);
+        ASSERT_NE(item, nullptr);
+        EXPECT_EQ(item->arcFlashMark().toStdString(), "AF " + fmt(*e.energyCal(), 1) + " cal/cm²");
+    }
+    EXPECT_EQ(buses, 3); // SWBD-1, MCC-1, LP-1
+    // Motors carry no mark.
+    EXPECT_TRUE(w.scene()
+                    ->itemFor(w.document().drawing().partByTag("P-101")->id)
+                    ->arcFlashMark()
+                    .isEmpty());
+    const PartId mcc = w.document().drawing().partByTag("MCC-1")->id;
+    const QString before = w.scene()->itemFor(mcc)->arcFlashMark();
+    user.clickPart(mcc);
+    user.type("af_working_distance_mm", "914.4", Commit::Enter);
+    user.settle();
+    EXPECT_NE(w.scene()->itemFor(mcc)->arcFlashMark(), before);
+}
