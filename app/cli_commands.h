@@ -37,5 +37,7 @@ void addExportCommand(CLI::App& app, const TablesRef& tables, int& exitCode);
 void ensureGuiApplication();
 /// `study FILE [--json]`
 void addStudyCommand(CLI::App& app, const TablesRef& tables, int& exitCode);
+/// `arcflash FILE [--json]`
+void addArcFlashCommand(CLI::App& app, const TablesRef& tables, int& exitCode);
 
 } // namespace lineward::cli

@@ -32,7 +32,8 @@ void addExportCommand(CLI::App& app, const TablesRef& tables, int& exitCode) {
     cmd->add_option("--dxf", a->dxf,
                     "the one-line as DXF (R12, inches): a layer per part kind, wires, tags, "
                     "ratings, badges, buckets, title block");
-    cmd->add_option("--csv", a->csv, "folder for motors.csv, cables.csv and devices.csv");
+    cmd->add_option("--csv", a->csv,
+                    "folder for motors.csv, cables.csv, devices.csv and arcflash.csv");
     cmd->add_option("--paper", a->paper, "letter, legal, tabloid (default), a4 or a3")
         ->check(CLI::IsMember({"letter", "legal", "tabloid", "a4", "a3"}));
     cmd->add_flag("--portrait", a->portrait, "portrait pages (default landscape)");
@@ -98,7 +99,8 @@ void addExportCommand(CLI::App& app, const TablesRef& tables, int& exitCode) {
             if (auto why = ui::writeScheduleCsvs(QString::fromStdString(a->csv), *result);
                 !why.isEmpty())
                 return fail(why);
-            std::cout << "wrote motors.csv, cables.csv, devices.csv in " << a->csv << "\n";
+            std::cout << "wrote motors.csv, cables.csv, devices.csv, arcflash.csv in " << a->csv
+                      << "\n";
         }
     });
 }

@@ -22,6 +22,7 @@ int main(int argc, char** argv) {
     lineward::cli::addCompareCommand(app, tables, exitCode);
     lineward::cli::addSizeCommand(app, tables, exitCode);
     lineward::cli::addStudyCommand(app, tables, exitCode);
+    lineward::cli::addArcFlashCommand(app, tables, exitCode);
     lineward::cli::addTripCommand(app, exitCode);
 #ifdef LINEWARD_WITH_QT
     lineward::cli::addCurvesCommand(app, tables, exitCode);

@@ -3,7 +3,10 @@
 // before anything is applied.
 #include "inspector.h"
 
+#include "check/check.h"
+#include "curves/arc_flash_study.h"
 #include "guard.h"
+#include "util/trace.h"
 
 #include <QCheckBox>
 #include <QComboBox>
@@ -48,7 +51,7 @@ constexpr const char* kRefusedStyle = "color: #b23a1e;";
 
 Inspector::Inspector(Document& doc, QWidget* parent)
     : QWidget(parent), m_doc(doc), m_form(new QFormLayout), m_title(new QLabel),
-      m_message(new QLabel) {
+      m_message(new QLabel), m_arcFlash(new QLabel) {
     setObjectName("inspector");
     m_title->setObjectName("inspectorTitle");
     m_title->setTextFormat(Qt::PlainText); // the tag comes from the file
@@ -68,7 +71,12 @@ Inspector::Inspector(Document& doc, QWidget* parent)
     auto* lay = new QVBoxLayout(this);
     lay->addWidget(m_title);
     lay->addWidget(scroll, 1);
+    m_arcFlash->setObjectName("inspectorArcFlash");
+    m_arcFlash->setTextFormat(Qt::PlainText); // tags come from the file
+    m_arcFlash->setWordWrap(true);
+    lay->addWidget(m_arcFlash);
     lay->addWidget(m_message);
+    connect(&doc, &Document::reportChanged, this, [this] { refreshArcFlash(); });
     setMinimumWidth(360); // narrower than this the form scrolls sideways
     connect(&doc, &Document::partChanged, this, [this](PartId id) {
         if (m_part && *m_part == id)
@@ -123,6 +131,7 @@ void Inspector::showPart(std::optional<PartId> id) {
     }
     clearForm(); // before the part changes: nothing of the old form may reach the new part
     m_part = p ? id : std::nullopt;
+    refreshArcFlash();
     m_message->clear();
     if (!p) {
         m_title->setText(tr("Select a part to see its ratings."));
@@ -410,6 +419,38 @@ void Inspector::refreshRow(Row& row, const Part& p) {
     } else if (row.check) {
         row.check->setChecked(std::holds_alternative<bool>(v) && std::get<bool>(v));
     }
+}
+
+void Inspector::refreshArcFlash() {
+    const Part* p = current();
+    const auto& af = m_doc.result().arcFlash;
+    const ArcFlashEquipment* e = nullptr;
+    if (p && p->kind == PartKind::Bus && af)
+        for (const auto& x : *af)
+            if (x.part == p->id && !x.bucket)
+                e = &x;
+    m_arcFlash->setVisible(e != nullptr);
+    if (!e) {
+        m_arcFlash->clear();
+        return;
+    }
+    // Every number is the check result's (curves/arc_flash_study.h); nothing is computed here.
+    QString text = tr("Arc flash (IEEE 1584-2018): ");
+    if (auto cal = e->energyCal()) {
+        const auto& g = e->result.governing();
+        text += QString::fromStdString(
+            fmt(*cal, 2) + " cal/cm² at " + fmt(e->input.workingDistanceMm, 0) + " mm, boundary " +
+            fmt(*e->boundaryMm(), 0) + " mm; " + (e->result.reducedGoverns ? "reduced" : "full") +
+            " arcing current " +
+            fmt(e->result.reducedGoverns ? e->result.currents.iarcMin : e->result.currents.iarc,
+                2) +
+            " kA cleared by " + (e->clearing ? e->clearing->tag : std::string("no device")) +
+            " in " + fmt(g.timeMs / 1000.0, 3) + " s.");
+    } else {
+        text += QString::fromStdString("not computed: " + e->result.range.outside.front() + ".");
+    }
+    text += tr(" The study supports, and does not replace, an engineer's assessment.");
+    m_arcFlash->setText(text);
 }
 
 } // namespace lineward::ui

@@ -48,6 +48,8 @@ private:
     void buildForm(const Part& p);
     void clearForm();
     void refreshValues(const Part& p);
+    /// A bus's arc-flash result from the check result (plain text), or nothing for other parts.
+    void refreshArcFlash();
     void refreshRow(Row& row, const Part& p);
     QWidget* makeTextRow(std::size_t index);
     QWidget* makeChoiceRow(std::size_t index);
@@ -73,6 +75,7 @@ private:
     QFormLayout* m_form;
     QLabel* m_title;
     QLabel* m_message;
+    QLabel* m_arcFlash;
 };
 
 } // namespace lineward::ui

@@ -9,6 +9,7 @@
 
 #include <QFontMetricsF>
 #include <QPainter>
+#include <QPainterPath>
 #include <QStyleOptionGraphicsItem>
 #include <QSvgRenderer>
 #include <cmath>
@@ -111,6 +112,20 @@ void PartItem::setBarSpan(qreal left, qreal right) {
     m_barRight = right;
 }
 
+void PartItem::setArcFlashMark(const QString& text) {
+    if (text == m_arcFlashMark)
+        return;
+    prepareGeometryChange(); // the mark widens the painted area
+    m_arcFlashMark = text;
+    update();
+}
+
+QRectF PartItem::arcFlashRect() const {
+    // Under the tag and ratings beside the bar's end, clear of the wires that drop from it.
+    const QRectF label = labelRect();
+    return QRectF(label.left(), label.bottom() + 2, 84, 13);
+}
+
 void PartItem::setBadge(std::optional<Severity> worst, const QString& tooltip) {
     // Most parts keep their badge across an edit: only the ones that change are redrawn (a
     // refresh of every label was most of an edit's cost on a large drawing).
@@ -202,7 +217,10 @@ QRectF PartItem::labelRect() const {
 
 QRectF PartItem::boundingRect() const {
     // Painted in the upright frame: map that back into the item's rotated one.
-    const QRectF upright = uprightSymbolRect().united(labelRect()).adjusted(-8, -8, 8, 8);
+    QRectF upright = uprightSymbolRect().united(labelRect());
+    if (!m_arcFlashMark.isEmpty())
+        upright = upright.united(arcFlashRect());
+    upright.adjust(-8, -8, 8, 8);
     return QTransform().rotate(-m_part.rotation).mapRect(upright);
 }
 
@@ -380,6 +398,26 @@ void PartItem::paint(QPainter* p, const QStyleOptionGraphicsItem* option, QWidge
     }
     if (m_badge)
         paintBadge(p);
+    if (!m_arcFlashMark.isEmpty() && lod >= 0.45) {
+        // Our arc-flash mark: a dark amber frame with a notched corner and the energy inside.
+        const QRectF r = arcFlashRect();
+        QPainterPath frame;
+        frame.moveTo(r.left() + 4, r.top());
+        frame.lineTo(r.right(), r.top());
+        frame.lineTo(r.right(), r.bottom());
+        frame.lineTo(r.left(), r.bottom());
+        frame.lineTo(r.left(), r.top() + 4);
+        frame.closeSubpath();
+        p->setPen(QPen(QColor(0x9a, 0x5b, 0x00), 1.0));
+        p->setBrush(QColor(0xff, 0xf3, 0xd6));
+        p->drawPath(frame);
+        QFont f = labelFont(false);
+        f.setPixelSize(9);
+        p->setFont(f);
+        p->setPen(QColor(0x5a, 0x35, 0x00));
+        p->drawText(r.adjusted(3, 0, -2, 0), Qt::AlignVCenter | Qt::AlignLeft,
+                    QFontMetricsF(f).elidedText(m_arcFlashMark, Qt::ElideRight, r.width() - 5));
+    }
     p->restore();
 }
 

@@ -31,6 +31,10 @@ public:
     /// Worst open finding on this part (drawn as a badge) and its tooltip text.
     void setBadge(std::optional<Severity> worst, const QString& tooltip);
     std::optional<Severity> badge() const { return m_badge; }
+    /// A bus's arc-flash mark: its incident energy from the check result ("6.0 cal/cm²"),
+    /// drawn in a small frame of our own under the bar; empty: none.
+    void setArcFlashMark(const QString& text);
+    const QString& arcFlashMark() const { return m_arcFlashMark; }
     /// Free width (scene units) beside the symbol, right and left, up to the next part; the
     /// label goes to the side with room and is shortened to fit.
     void setLabelRoom(qreal right, qreal left);
@@ -59,8 +63,9 @@ private:
     void paintSymbol(QPainter* p) const;
     void paintLabel(QPainter* p) const;
     void paintBadge(QPainter* p) const;
-    void refreshText();        ///< tooltip and the label's measured width, after the part changes
-    QRectF symbolRect() const; ///< item coordinates
+    QRectF arcFlashRect() const; ///< upright frame: where the arc-flash mark goes
+    void refreshText();          ///< tooltip and the label's measured width, after the part changes
+    QRectF symbolRect() const;   ///< item coordinates
     QRectF uprightSymbolRect() const; ///< the symbol in the text's upright frame
     QRectF labelRect() const;         ///< upright frame: where the tag and ratings go
     qreal labelWidth() const { return m_labelWidth; }
@@ -76,6 +81,7 @@ private:
     QStringList m_ratingHalves;         ///< the two halves, or empty when there is no gap
     std::optional<Severity> m_badge;
     QString m_badgeTip;
+    QString m_arcFlashMark;
 };
 
 } // namespace lineward::ui

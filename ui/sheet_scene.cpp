@@ -2,6 +2,7 @@
 #include "sheet_scene.h"
 
 #include "bucket_item.h"
+#include "curves/arc_flash_study.h"
 #include "part_item.h"
 #include "report/report_format.h"
 #include "wire_item.h"
@@ -262,6 +263,19 @@ void SheetScene::refreshBadges() {
             item->setBadge(std::nullopt, {});
         else
             item->setBadge(it->second.first, it->second.second);
+    }
+    // Each bus's arc-flash energy from the check result (curves/arc_flash_study.h).
+    std::unordered_map<PartId, QString> marks;
+    if (const auto& af = m_doc.result().arcFlash)
+        for (const auto& e : *af)
+            if (!e.bucket)
+                marks[e.part] =
+                    e.energyCal()
+                        ? QString::fromStdString("AF " + fmt(*e.energyCal(), 1) + " cal/cm²")
+                        : QStringLiteral("AF not computed");
+    for (auto& [id, item] : m_parts) {
+        auto it = marks.find(id);
+        item->setArcFlashMark(it == marks.end() ? QString() : it->second);
     }
 }
 

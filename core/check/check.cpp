@@ -2,8 +2,10 @@
 // marks accepted deviations and orders the findings.
 #include "check/check.h"
 
+#include "curves/arc_flash_study.h"
 #include "curves/path_curves.h"
 #include "model/ratings.h"
+#include "rules/arc_flash_rules.h"
 #include "rules/drawing_rules.h"
 #include "rules/rule_catalog.h"
 #include "rules/rule_context.h"
@@ -128,6 +130,12 @@ void analyse(CheckResult& r, std::vector<Finding>& out) {
     runStage("voltage", out, [&] { checkVoltage(ctx, out); });
     runStage("time-current curve", out, [&] { checkCurves(ctx, out); });
     runStage("study", out, [&] { reportStudyIssues(ctx, out); });
+    runStage("arc flash", out, [&] {
+        auto af = std::make_shared<const std::vector<ArcFlashEquipment>>(arcFlashStudy(view));
+        if (drawing.settings.arcFlashFindings)
+            checkArcFlash(view, *af, out);
+        r.arcFlash = std::move(af);
+    });
 }
 
 void finishReport(const Drawing& drawing, CheckReport& report) {

@@ -26,6 +26,7 @@ class Network;
 class Flow;
 struct StudyResults;
 struct StudyView;
+struct ArcFlashEquipment;
 
 /// Everything one check of a drawing found.
 struct CheckReport {
@@ -52,6 +53,9 @@ struct CheckResult {
     /// Each energized cable's ampacity (NEC Table 310.16 with its conditions), where the table
     /// has its size: what the schedules show.
     std::unordered_map<PartId, double> cableAmpacityA;
+    /// The arc-flash study (IEEE 1584-2018) at every energized bus and bucket
+    /// (curves/arc_flash_study.h); empty when no study could run.
+    std::shared_ptr<const std::vector<ArcFlashEquipment>> arcFlash;
     CheckReport report;
 
     CheckResult();

@@ -115,7 +115,8 @@ private:
         checkKeys(j, "/settings",
                   {"vdrop_branch_pct", "vdrop_total_pct", "start_dip_pct", "start_terminal_pct",
                    "coordination_margin_s", "ambient_c", "asymmetry_factor", "start_pf",
-                   "motor_contribution_x"});
+                   "motor_contribution_x", "arc_flash_caution_cal", "arc_flash_max_time_s",
+                   "arc_flash_findings"});
         setting(j, "vdrop_branch_pct", s.vdropBranchPct, 0.1, 50);
         setting(j, "vdrop_total_pct", s.vdropTotalPct, 0.1, 50);
         setting(j, "start_dip_pct", s.startDipPct, 1, 90);
@@ -125,6 +126,14 @@ private:
         setting(j, "asymmetry_factor", s.asymmetryFactor, 1, 3);
         setting(j, "start_pf", s.startPf, 0.05, 1);
         setting(j, "motor_contribution_x", s.motorContributionX, 0, 20);
+        setting(j, "arc_flash_caution_cal", s.arcFlashCautionCal, 1.2, 100);
+        setting(j, "arc_flash_max_time_s", s.arcFlashMaxTimeS, 0.01, 10);
+        if (j.contains("arc_flash_findings")) {
+            if (!j.at("arc_flash_findings").is_boolean())
+                throw Failure{"/settings/arc_flash_findings",
+                              "arc_flash_findings must be true or false"};
+            s.arcFlashFindings = j.at("arc_flash_findings").get<bool>();
+        }
     }
 
     FieldValue fieldValue(const FieldSpec& spec, const json& j, const std::string& ptr) {

@@ -70,6 +70,14 @@ ojson settingsJson(const Settings& s) {
     j["asymmetry_factor"] = fieldValueJson(s.asymmetryFactor);
     j["start_pf"] = fieldValueJson(s.startPf);
     j["motor_contribution_x"] = fieldValueJson(s.motorContributionX);
+    // Written only where set, so that files made before these settings keep their bytes.
+    const Settings defaults;
+    if (s.arcFlashCautionCal != defaults.arcFlashCautionCal)
+        j["arc_flash_caution_cal"] = fieldValueJson(s.arcFlashCautionCal);
+    if (s.arcFlashMaxTimeS != defaults.arcFlashMaxTimeS)
+        j["arc_flash_max_time_s"] = fieldValueJson(s.arcFlashMaxTimeS);
+    if (s.arcFlashFindings)
+        j["arc_flash_findings"] = true;
     return j;
 }
 

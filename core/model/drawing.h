@@ -39,6 +39,12 @@ struct Settings {
     double asymmetryFactor = 1.5;     ///< common practice
     double startPf = 0.3;             ///< common practice
     double motorContributionX = 4.0;  ///< common practice: running motor feeds ~4 x FLC
+    /// Arc flash: incident energy above which the equipment is marked with a caution, cal/cm².
+    double arcFlashCautionCal = 8.0; ///< common practice (a drawing setting)
+    /// Arc flash: longest arcing time taken, s (a worker can move away; common practice).
+    double arcFlashMaxTimeS = 2.0;
+    /// Arc flash: report the arcflash.* findings in the check (the study itself always runs).
+    bool arcFlashFindings = false;
     bool operator==(const Settings&) const = default;
 };
 

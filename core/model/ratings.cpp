@@ -164,13 +164,20 @@ BusRatings BusRatings::of(const Part& p) {
     static constexpr std::pair<std::string_view, BusType> kWords[] = {
         {"switchboard", BusType::Switchboard},
         {"mcc", BusType::Mcc},
-        {"panelboard", BusType::Panelboard}};
+        {"panelboard", BusType::Panelboard},
+        {"cable_junction", BusType::CableJunction}};
     BusRatings r;
     r.type = choice(p, SLOT(kType), kWords);
     r.volts = num(p, SLOT(kVolts));
     r.amps = num(p, SLOT(kAmps));
     r.bracingKa = opt(p, SLOT(kBracingKa));
     r.phases = whole(p, SLOT(kPhases));
+    r.afConfig = text(p, SLOT(kAfConfig));
+    r.afGapMm = opt(p, SLOT(kAfGapMm));
+    r.afWorkingMm = opt(p, SLOT(kAfWorkingMm));
+    r.afHeightMm = opt(p, SLOT(kAfHeightMm));
+    r.afWidthMm = opt(p, SLOT(kAfWidthMm));
+    r.afDepthMm = opt(p, SLOT(kAfDepthMm));
     return r;
 }
 

@@ -15,7 +15,7 @@
 
 namespace lineward {
 
-enum class BusType { Switchboard, Mcc, Panelboard };
+enum class BusType { Switchboard, Mcc, Panelboard, CableJunction };
 enum class TripType { ThermalMagnetic, Electronic };
 enum class FuseType { TimeDelay, Fast };
 enum class Rotor { SquirrelCage, WoundRotor, Synchronous };
@@ -40,11 +40,20 @@ struct TransformerRatings {
 
 struct BusRatings {
     static constexpr std::string_view kType = "bus_type", kVolts = "volts", kAmps = "amps",
-                                      kBracingKa = "bracing_ka", kPhases = "phases";
+                                      kBracingKa = "bracing_ka", kPhases = "phases",
+                                      kAfConfig = "af_electrodes", kAfGapMm = "af_gap_mm",
+                                      kAfWorkingMm = "af_working_distance_mm",
+                                      kAfHeightMm = "af_enclosure_height_mm",
+                                      kAfWidthMm = "af_enclosure_width_mm",
+                                      kAfDepthMm = "af_enclosure_depth_mm";
     BusType type = BusType::Mcc;
     double volts = 0, amps = 0;
     std::optional<double> bracingKa;
     int phases = 3;
+    /// Arc-flash equipment data; blank: the typical value of IEEE 1584-2018 Tables 8 and 10 for
+    /// the equipment type. The electrode configuration is a key ("VCB", ...); empty: typical.
+    std::string afConfig;
+    std::optional<double> afGapMm, afWorkingMm, afHeightMm, afWidthMm, afDepthMm;
     static BusRatings of(const Part& p);
 };
 

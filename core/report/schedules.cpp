@@ -1,6 +1,7 @@
 // Schedules are views of the core's results; every number comes from sizing or the studies.
 #include "report/schedules.h"
 
+#include "curves/arc_flash_study.h"
 #include "model/ratings.h"
 #include "sizing/motor_sizing.h"
 #include "studies/study.h"
@@ -65,9 +66,31 @@ std::vector<Schedule> buildSchedules(const CheckResult& result) {
     Schedule devices{"devices",
                      {"Tag", "Kind", "Rating", "Interrupting kA", "Line-side fault kA", "Duty %"},
                      {}};
+    // IEEE 1584-2018 arc-flash study of every bus and bucket (the governing case).
+    Schedule arcflash{"arcflash",
+                      {"Equipment", "Kind", "Volts", "Bolted kA", "Arcing kA", "Reduced kA",
+                       "Clearing device", "Time s", "Reduced time s", "Working distance mm",
+                       "Incident energy cal/cm²", "Arc-flash boundary mm", "Case", "Remark"},
+                      {}};
+    if (result.arcFlash)
+        for (const auto& e : *result.arcFlash) {
+            const auto& r = e.result;
+            const bool ok = e.energyCal().has_value();
+            std::string remark = ok ? "" : "outside the model: " + r.range.outside.front();
+            if (ok && (e.cappedFull || e.cappedReduced))
+                remark = "arcing time cut to the cap";
+            arcflash.rows.push_back(
+                {e.tag, e.kind, fmt(e.input.vocKv * 1000, 0),
+                 e.input.ibfKa > 0 ? fmt(e.input.ibfKa, 2) : "", ok ? fmt(r.currents.iarc, 2) : "",
+                 ok ? fmt(r.currents.iarcMin, 2) : "", e.clearing ? e.clearing->tag : "",
+                 ok ? fmt(e.tFullS, 3) : "", ok ? fmt(e.tReducedS, 3) : "",
+                 fmt(e.input.workingDistanceMm, 0), ok ? fmt(*e.energyCal(), 2) : "",
+                 ok ? fmt(*e.boundaryMm(), 0) : "",
+                 ok ? (r.reducedGoverns ? "reduced" : "full") : "", remark});
+        }
     // Without a network and studies the schedules have their headers and no rows.
     if (!result.view())
-        return {motors, cables, devices};
+        return {motors, cables, devices, arcflash};
     const Network& net = *result.net;
     const Flow& flow = *result.flow;
     const StudyResults& r = *result.study;
@@ -113,7 +136,7 @@ std::vector<Schedule> buildSchedules(const CheckResult& result) {
                                     f && ic ? fmt(f->ikKa / *ic * 100, 0) : ""});
         }
     }
-    return {motors, cables, devices};
+    return {motors, cables, devices, arcflash};
 }
 
 namespace {

@@ -11,12 +11,12 @@ namespace lineward {
 
 /// One schedule: a name, column headers and rows of text cells.
 struct Schedule {
-    std::string name; ///< "motors", "cables", "devices"
+    std::string name; ///< "motors", "cables", "devices", "arcflash"
     std::vector<std::string> headers;
     std::vector<std::vector<std::string>> rows;
 };
 
-/// Motor, cable and device schedules of a drawing, read from its check result.
+/// Motor, cable, device and arc-flash schedules of a drawing, read from its check result.
 std::vector<Schedule> buildSchedules(const CheckResult& result);
 
 /// RFC 4180 CSV: CRLF line ends, fields quoted where they hold a comma, quote or line break.

@@ -184,6 +184,18 @@ inline constexpr std::array kRules{
              "no two parts share a tag"},
     RuleInfo{"topology.dangling", "unconnected terminal", "common practice", Severity::Caution,
              "every terminal of a part has at least one wire"},
+    RuleInfo{"arcflash.energy.caution", "arc-flash incident energy above the caution setting",
+             "NFPA 70E 2024 130.5; NEC 2023 110.16 (setting: common practice)", Severity::Caution,
+             "IEEE 1584-2018 incident energy at the working distance ≤ arc_flash_caution_cal "
+             "(worse of the full and the reduced arcing current)"},
+    RuleInfo{"arcflash.energy.limit", "arc-flash incident energy above 40 cal/cm²",
+             "NFPA 70E 2024 130.5 (40 cal/cm²: common practice)", Severity::Violation,
+             "IEEE 1584-2018 incident energy at the working distance ≤ 40 cal/cm² (above it, "
+             "energized work is not permitted: common practice)"},
+    RuleInfo{"arcflash.outside_model", "arc flash not computed: outside the model",
+             "IEEE 1584-2018 4.2", Severity::Caution,
+             "208 V ≤ Voc ≤ 15 kV; bolted fault, gap, working distance and enclosure within the "
+             "model's range; otherwise no incident energy is given"},
 };
 
 } // namespace catalog_data

@@ -25,6 +25,16 @@ FlcTable buildFlc(const CsvTable& t) {
     return f;
 }
 
+constexpr std::array<ElectrodeConfig, 5> kAllConfigs{ElectrodeConfig::VCB, ElectrodeConfig::VCBB,
+                                                     ElectrodeConfig::HCB, ElectrodeConfig::VOA,
+                                                     ElectrodeConfig::HOA};
+
+ElectrodeConfig configFrom(const CsvTable& t, std::size_t r, std::size_t col) {
+    if (auto c = electrodeConfigFromKey(t.rows[r][col]))
+        return *c;
+    t.fail(r, "unknown electrode configuration '" + t.rows[r][col] + "'");
+}
+
 MotorType motorTypeFrom(const CsvTable& t, std::size_t r) {
     const auto& k = t.rows[r][0];
     if (k == "single_phase")
@@ -143,6 +153,68 @@ void buildRest(Tables& tb, const CsvTable& t) {
         for (std::size_t r = 0; r < t.rows.size(); ++r)
             tb.tripClasses.push_back(
                 {t.rows[r][0], t.required(r, 1), t.required(r, 2), t.required(r, 3)});
+    } else if (n == "af_arcing_current" || n == "af_incident_energy") {
+        const bool current = n == "af_arcing_current";
+        const std::size_t nk = current ? 10 : 13;
+        std::map<ElectrodeConfig, int> seen;
+        for (std::size_t r = 0; r < t.rows.size(); ++r) {
+            const ElectrodeConfig c = configFrom(t, r, t.column("config"));
+            const double v = t.required(r, t.column("voc_v"));
+            const int col = v == 600 ? 0 : v == 2700 ? 1 : v == 14300 ? 2 : -1;
+            if (col < 0)
+                t.fail(r, "voc_v must be 600, 2700 or 14300");
+            for (std::size_t k = 0; k < nk; ++k) {
+                const double x = t.required(r, t.column("k" + std::to_string(k + 1)));
+                if (current)
+                    tb.arcFlash.arcingCurrent[c][col][k] = x;
+                else
+                    tb.arcFlash.energy[c][col][k] = x;
+            }
+            seen[c] |= 1 << col;
+        }
+        for (ElectrodeConfig c : kAllConfigs)
+            if (seen[c] != 7)
+                throw TableError(t.file, 0,
+                                 "configuration " + std::string(electrodeConfigKey(c)) +
+                                     " lacks a row for 600, 2700 or 14300 V");
+    } else if (n == "af_varcf") {
+        for (std::size_t r = 0; r < t.rows.size(); ++r) {
+            auto& row = tb.arcFlash.varCf[configFrom(t, r, t.column("config"))];
+            for (std::size_t k = 0; k < 7; ++k)
+                row[k] = t.required(r, t.column("k" + std::to_string(k + 1)));
+        }
+        for (ElectrodeConfig c : kAllConfigs)
+            if (!tb.arcFlash.varCf.count(c))
+                throw TableError(t.file, 0,
+                                 "configuration " + std::string(electrodeConfigKey(c)) +
+                                     " is missing");
+    } else if (n == "af_enclosure_cf") {
+        for (std::size_t r = 0; r < t.rows.size(); ++r) {
+            const auto& kind = t.rows[r][t.column("enclosure")];
+            if (kind != "typical" && kind != "shallow")
+                t.fail(r, "enclosure must be 'typical' or 'shallow'");
+            auto& row =
+                tb.arcFlash
+                    .enclosure[configFrom(t, r, t.column("config"))][kind == "typical" ? 0 : 1];
+            row = {t.required(r, t.column("b1")), t.required(r, t.column("b2")),
+                   t.required(r, t.column("b3")), t.required(r, t.column("a")),
+                   t.required(r, t.column("b"))};
+        }
+    } else if (n == "af_typical_equipment") {
+        for (std::size_t r = 0; r < t.rows.size(); ++r) {
+            ArcFlashTables::TypicalRow row;
+            row.kind = t.rows[r][t.column("kind")];
+            row.voltageClass = t.rows[r][t.column("voltage_class")];
+            if (row.voltageClass != "lv" && row.voltageClass != "5kv" && row.voltageClass != "15kv")
+                t.fail(r, "voltage_class must be 'lv', '5kv' or '15kv'");
+            row.gapMm = t.required(r, t.column("gap_mm"));
+            row.heightMm = t.required(r, t.column("height_mm"));
+            row.widthMm = t.required(r, t.column("width_mm"));
+            row.depthMm = t.required(r, t.column("depth_mm"));
+            row.workingDistanceMm = t.required(r, t.column("working_distance_mm"));
+            row.config = configFrom(t, r, t.column("config"));
+            tb.arcFlash.typical.push_back(row);
+        }
     } else {
         throw TableError(t.file, 0, "unknown table '" + n + "'");
     }
@@ -162,6 +234,38 @@ std::string_view scpdTypeKey(ScpdType t) {
         return "inverse_time_breaker";
     }
     return "";
+}
+
+std::string_view electrodeConfigKey(ElectrodeConfig c) {
+    switch (c) {
+    case ElectrodeConfig::VCB:
+        return "VCB";
+    case ElectrodeConfig::VCBB:
+        return "VCBB";
+    case ElectrodeConfig::HCB:
+        return "HCB";
+    case ElectrodeConfig::VOA:
+        return "VOA";
+    case ElectrodeConfig::HOA:
+        return "HOA";
+    }
+    return "";
+}
+
+std::optional<ElectrodeConfig> electrodeConfigFromKey(std::string_view key) {
+    for (ElectrodeConfig c : kAllConfigs)
+        if (electrodeConfigKey(c) == key)
+            return c;
+    return std::nullopt;
+}
+
+const ArcFlashTables::TypicalRow* ArcFlashTables::typicalFor(std::string_view kind,
+                                                             double systemVolts) const {
+    const std::string_view cls = systemVolts <= 1000 ? "lv" : systemVolts <= 5000 ? "5kv" : "15kv";
+    for (const auto& row : typical)
+        if (row.kind == kind && row.voltageClass == cls)
+            return &row;
+    return nullptr;
 }
 
 std::string_view scpdTypeName(ScpdType t) {
@@ -196,11 +300,27 @@ std::shared_ptr<const Tables> loadTables(std::span<const tables::EmbeddedFile> f
         else
             buildRest(*tb, t);
     }
-    for (const char* needed :
-         {"flc_3ph", "flc_1ph", "flc_3ph_sync", "scpd_pct", "code_letters", "ampacity",
-          "ambient_correction", "conductor_adjustment", "standard_ratings", "small_conductor",
-          "egc", "conductor_properties", "conductor_impedance", "transformer_protection",
-          "nema_sizes", "trip_classes"})
+    for (const char* needed : {"flc_3ph",
+                               "flc_1ph",
+                               "flc_3ph_sync",
+                               "scpd_pct",
+                               "code_letters",
+                               "ampacity",
+                               "ambient_correction",
+                               "conductor_adjustment",
+                               "standard_ratings",
+                               "small_conductor",
+                               "egc",
+                               "conductor_properties",
+                               "conductor_impedance",
+                               "transformer_protection",
+                               "nema_sizes",
+                               "trip_classes",
+                               "af_arcing_current",
+                               "af_varcf",
+                               "af_incident_energy",
+                               "af_enclosure_cf",
+                               "af_typical_equipment"})
         if (!tb->sources.count(needed))
             throw TableError("resources/tables", 0,
                              std::string("table '") + needed + "' is missing");

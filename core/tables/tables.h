@@ -56,6 +56,38 @@ struct NemaRow {
     std::map<int, double> hp1ph; ///< by voltage column 115, 230
 };
 
+/// Electrode configurations of IEEE 1584-2018 (3.1 and 4.4): vertical conductors in a box,
+/// vertical conductors in a box ending in an insulating barrier, horizontal conductors in a box,
+/// vertical and horizontal conductors in open air.
+enum class ElectrodeConfig { VCB, VCBB, HCB, VOA, HOA };
+std::string_view electrodeConfigKey(ElectrodeConfig c);
+std::optional<ElectrodeConfig> electrodeConfigFromKey(std::string_view key);
+
+/// IEEE 1584-2018 coefficient tables (Tables 1, 2, 3-5, 7; Tables 8 and 10 for typical values).
+struct ArcFlashTables {
+    /// Table 1, by configuration and voltage column (0: 600 V, 1: 2700 V, 2: 14 300 V): k1..k10.
+    std::map<ElectrodeConfig, std::array<std::array<double, 10>, 3>> arcingCurrent;
+    /// Table 2: k1..k7 of VarCf.
+    std::map<ElectrodeConfig, std::array<double, 7>> varCf;
+    /// Tables 3, 4, 5, by configuration and voltage column as arcingCurrent: k1..k13.
+    std::map<ElectrodeConfig, std::array<std::array<double, 13>, 3>> energy;
+    /// Table 7 b1..b3 and Table 6 A, B; [0] typical, [1] shallow. Enclosed configurations only.
+    struct EnclosureRow {
+        double b1 = 0, b2 = 0, b3 = 0, a = 0, b = 0;
+    };
+    std::map<ElectrodeConfig, std::array<EnclosureRow, 2>> enclosure;
+    /// Tables 8 and 10: typical gap, enclosure and working distance by equipment kind.
+    struct TypicalRow {
+        std::string kind, voltageClass; ///< "mcc"...; "lv", "5kv", "15kv"
+        double gapMm = 0, heightMm = 0, widthMm = 0, depthMm = 0, workingDistanceMm = 0;
+        ElectrodeConfig config = ElectrodeConfig::VCB;
+    };
+    std::vector<TypicalRow> typical;
+    /// The typical row of an equipment kind at a system voltage (lv up to 1 kV, 5kv up to
+    /// 5 kV, 15kv above); nothing for a kind the tables lack.
+    const TypicalRow* typicalFor(std::string_view kind, double systemVolts) const;
+};
+
 struct TripClassRow {
     std::string name;
     double tpMinS = 0, tpMaxS = 0, trip15xMaxMin = 0;
@@ -93,6 +125,7 @@ struct Tables {
     std::vector<TransformerProtectionRow> transformerProtection;
     std::vector<NemaRow> nema;
     std::vector<TripClassRow> tripClasses;
+    ArcFlashTables arcFlash;
     std::map<std::string, std::string> sources; ///< table name -> source line
 
     // --- lookups ---

@@ -28,8 +28,10 @@ std::set<std::string_view> declaredKeys(PartKind kind) {
         return {TransformerRatings::kKva, TransformerRatings::kPriV, TransformerRatings::kSecV,
                 TransformerRatings::kZPct, TransformerRatings::kXOverR};
     case PartKind::Bus:
-        return {BusRatings::kType, BusRatings::kVolts, BusRatings::kAmps, BusRatings::kBracingKa,
-                BusRatings::kPhases};
+        return {BusRatings::kType,      BusRatings::kVolts,       BusRatings::kAmps,
+                BusRatings::kBracingKa, BusRatings::kPhases,      BusRatings::kAfConfig,
+                BusRatings::kAfGapMm,   BusRatings::kAfWorkingMm, BusRatings::kAfHeightMm,
+                BusRatings::kAfWidthMm, BusRatings::kAfDepthMm};
     case PartKind::Breaker:
         return with({BreakerRatings::kTripType, BreakerRatings::kFrameA, BreakerRatings::kTripA,
                      BreakerRatings::kInstX, BreakerRatings::kLtPickupX, BreakerRatings::kLtDelayS,

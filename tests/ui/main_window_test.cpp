@@ -1,11 +1,15 @@
 // The real main window, offscreen: open the mistake sample, see badges and the Findings list,
 // locate a finding's part.
+#include "check/check.h"
+#include "curves/arc_flash_study.h"
 #include "findings_panel.h"
+#include "inspector.h"
 #include "main_window.h"
 #include "part_item.h"
 #include "sheet_scene.h"
 #include "ui_support.h"
 #include "user.h"
+#include "util/trace.h"
 
 #include <QApplication>
 #include <QGraphicsView>
@@ -17,6 +21,7 @@
 using namespace lineward;
 using namespace lineward::ui;
 
+using test::Commit;
 using test::sharedTables;
 namespace {
 QString sample(const char* name) {
@@ -102,4 +107,73 @@ TEST(MainWindow, SchedulesShownAfterEditsHoldTheNewValues) {
         if (cell(r, 0) == "P-101")
             again = cell(r, 7) == "34";
     EXPECT_TRUE(again);
+}
+
+TEST(MainWindow, InspectorShowsTheBusArcFlashResultAndFollowsAnEdit) {
+    // Clicking a bus shows its arc-flash result, the check result's numbers as plain text; a
+    // working distance typed into the Inspector changes it after the re-check.
+    MainWindow w(sharedTables());
+    ASSERT_TRUE(w.openFile(sample("kestrel-mill-mcc1.lineward"), true).isEmpty());
+    test::User user(w);
+    const Part* mcc = w.document().drawing().partByTag("MCC-1");
+    ASSERT_NE(mcc, nullptr);
+    const PartId id = mcc->id;
+    user.clickPart(id);
+    user.settle();
+    auto* label = w.inspector()->findChild<QLabel*>("inspectorArcFlash");
+    ASSERT_NE(label, nullptr);
+    EXPECT_EQ(label->textFormat(), Qt::PlainText);
+    EXPECT_FALSE(label->isHidden());
+    auto energyOf = [&] {
+        for (const auto& e : *w.document().result().arcFlash)
+            if (e.part == id && !e.bucket)
+                return *e.energyCal();
+        return -1.0;
+    };
+    const double before = energyOf();
+    ASSERT_GT(before, 0.0);
+    EXPECT_TRUE(label->text().contains(QString::fromStdString(fmt(before, 2) + " cal/cm²")))
+        << label->text().toStdString();
+    EXPECT_TRUE(label->text().contains("CB-F1"));
+    EXPECT_TRUE(label->text().contains("does not replace"));
+    user.type("af_working_distance_mm", "914.4", Commit::Enter);
+    user.settle();
+    const double after = energyOf();
+    EXPECT_LT(after, before); // farther away, less energy
+    EXPECT_TRUE(label->text().contains(QString::fromStdString(fmt(after, 2) + " cal/cm²")))
+        << label->text().toStdString();
+    EXPECT_TRUE(label->text().contains("at 914 mm"));
+    // A motor has no arc-flash result: the line is hidden.
+    user.clickPart(w.document().drawing().partByTag("P-101")->id);
+    user.settle();
+    EXPECT_TRUE(label->isHidden());
+}
+
+TEST(MainWindow, EachBusCarriesItsArcFlashMark) {
+    // The mark on the sheet shows the check result's energy, and follows an edit.
+    MainWindow w(sharedTables());
+    ASSERT_TRUE(w.openFile(sample("kestrel-mill-mcc1.lineward"), true).isEmpty());
+    test::User user(w);
+    const auto& af = *w.document().result().arcFlash;
+    int buses = 0;
+    for (const auto& e : af) {
+        if (e.bucket)
+            continue;
+        ++buses;
+        PartItem* item = w.scene()->itemFor(e.part);
+        ASSERT_NE(item, nullptr);
+        EXPECT_EQ(item->arcFlashMark().toStdString(), "AF " + fmt(*e.energyCal(), 1) + " cal/cm²");
+    }
+    EXPECT_EQ(buses, 3); // SWBD-1, MCC-1, LP-1
+    // Motors carry no mark.
+    EXPECT_TRUE(w.scene()
+                    ->itemFor(w.document().drawing().partByTag("P-101")->id)
+                    ->arcFlashMark()
+                    .isEmpty());
+    const PartId mcc = w.document().drawing().partByTag("MCC-1")->id;
+    const QString before = w.scene()->itemFor(mcc)->arcFlashMark();
+    user.clickPart(mcc);
+    user.type("af_working_distance_mm", "914.4", Commit::Enter);
+    user.settle();
+    EXPECT_NE(w.scene()->itemFor(mcc)->arcFlashMark(), before);
 }
