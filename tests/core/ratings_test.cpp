@@ -31,8 +31,9 @@ std::set<std::string_view> declaredKeys(PartKind kind) {
         return {BusRatings::kType, BusRatings::kVolts, BusRatings::kAmps, BusRatings::kBracingKa,
                 BusRatings::kPhases};
     case PartKind::Breaker:
-        return with({BreakerRatings::kTripType, BreakerRatings::kFrameA, BreakerRatings::kTripA,
-                     BreakerRatings::kInstX, BreakerRatings::kLtPickupX, BreakerRatings::kLtDelayS,
+        return with({BreakerRatings::kTripType, BreakerRatings::kConstruction,
+                     BreakerRatings::kFrameA, BreakerRatings::kTripA, BreakerRatings::kInstX,
+                     BreakerRatings::kLtPickupX, BreakerRatings::kLtDelayS,
                      BreakerRatings::kStPickupX, BreakerRatings::kStDelayS, BreakerRatings::kStI2t,
                      BreakerRatings::kOpen});
     case PartKind::InstBreaker:
@@ -47,9 +48,9 @@ std::set<std::string_view> declaredKeys(PartKind kind) {
     case PartKind::Contactor:
         return {ContactorRatings::kNemaSize, ContactorRatings::kAc3A, ContactorRatings::kOpen};
     case PartKind::Overload:
-        return {OverloadRatings::kSettingA, OverloadRatings::kRangeMinA,
-                OverloadRatings::kRangeMaxA, OverloadRatings::kTripClass,
-                OverloadRatings::kCurvePoints};
+        return {OverloadRatings::kSettingA,      OverloadRatings::kRangeMinA,
+                OverloadRatings::kRangeMaxA,     OverloadRatings::kTripClass,
+                OverloadRatings::kUltimateTripX, OverloadRatings::kCurvePoints};
     case PartKind::Cable:
         return {CableRatings::kMaterial,     CableRatings::kSize,        CableRatings::kSets,
                 CableRatings::kLengthFt,     CableRatings::kInsulationC, CableRatings::kRaceway,
