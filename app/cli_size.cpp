@@ -105,7 +105,8 @@ void printText(const BucketProposal& p, const SizeOptions& o) {
               << "proposed device        " << scpdTypeKey(o.device) << " "
               << fmt(p.deviceRatingA, 0) << " A\n"
               << "overload relay         setting " << fmt(p.overloadSettingA) << " A"
-              << (p.overloadMaxA ? ", at most " + fmt(*p.overloadMaxA) + " A"
+              << (p.overloadMaxA ? ", trip current at most " + fmt(*p.overloadMaxA) +
+                                       " A (430.32(A)(1))"
                                  : std::string(", give --fla to judge"))
               << ", class " << p.tripClass << "\n"
               << "disconnect             at least " << fmt(p.disconnectMinA)

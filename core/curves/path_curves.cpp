@@ -15,7 +15,8 @@ std::vector<PathDevice> devicesOnPath(const StudyView& ctx, PartId id, PathExten
         return out;
     auto add = [&](const Part* q) {
         if (auto c = TripCurve::of(*q))
-            out.push_back({q, *c});
+            out.push_back(
+                {q, *c, q->kind == PartKind::Overload ? overloadBreakingA(ctx, *q) : kNoTrip});
     };
     NodeIndex top = ctx.net.nodeOf(id, 0);
     if (isTwoTerminal(p->kind)) {
@@ -40,6 +41,38 @@ std::vector<PathDevice> devicesOnPath(const StudyView& ctx, PartId id, PathExten
         top = ctx.flow.lineNode(*dev);
     }
     return out;
+}
+
+double overloadBreakingA(const StudyView& ctx, const Part& overload, std::string* how) {
+    const Part* contactor = nullptr;
+    for (const auto& b : ctx.branches)
+        if (b.overload == &overload) {
+            contactor = b.contactor;
+            break;
+        }
+    const double x = kContactorBreakingX;
+    if (contactor) {
+        const auto k = ContactorRatings::of(*contactor);
+        std::optional<double> ie = k.ac3A;
+        std::string what = "AC-3 rating";
+        if (!ie && k.nemaSize)
+            if (const auto* row = ctx.tables.nemaRow(*k.nemaSize)) {
+                ie = row->continuousA;
+                what = "NEMA size " + *k.nemaSize + " continuous rating";
+            }
+        if (ie && *ie > 0) {
+            if (how)
+                *how = contactor->tag + " breaks " + fmt(x, 0) + " × its " + what + " " +
+                       fmt(*ie, 0) + " A = " + fmt(x * *ie, 0) +
+                       " A (IEC 60947-4-1 AC-3, from memory)";
+            return x * *ie;
+        }
+    }
+    const double setting = OverloadRatings::of(overload).settingA;
+    if (how)
+        *how = "no rated contactor: " + fmt(x, 0) + " × " + overload.tag + "'s setting " +
+               fmt(setting, 1) + " A = " + fmt(x * setting, 0) + " A (common practice)";
+    return x * setting;
 }
 
 std::optional<StartProfile> startProfile(const StudyView& ctx, const Part& m) {

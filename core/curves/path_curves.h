@@ -22,6 +22,11 @@ enum class PathExtent { ToSource, NearestUpstream, OwnProtection };
 std::vector<PathDevice> devicesOnPath(const StudyView& ctx, PartId part,
                                       PathExtent extent = PathExtent::ToSource);
 
+/// The current an overload relay's contactor can break (kContactorBreakingX × its AC-3 rating
+/// or NEMA size continuous current; the relay's setting where the branch has no rated
+/// contactor); `how` receives the reason in words.
+double overloadBreakingA(const StudyView& ctx, const Part& overload, std::string* how = nullptr);
+
 std::optional<StartProfile> startProfile(const StudyView& ctx, const Part& motor);
 
 /// Cable damage: the I²t it takes (ICEA P-32-382 / IEC adiabatic, per parallel set times sets²).

@@ -14,7 +14,16 @@ namespace lineward {
 struct PathDevice {
     const Part* part = nullptr;
     TripCurve curve;
+    /// The highest current the part can interrupt: unlimited for breakers and fuses; for an
+    /// overload relay, the breaking capability of the contactor it opens (it clears nothing
+    /// above that; the short-circuit device must).
+    double clearsUpToA = kNoTrip;
 };
+
+/// An AC-3 contactor breaks 8 × its rated operational current (IEC 60947-4-1 Table 7, for
+/// Ie ≤ 100 A, from memory; used for every size, which is generous above 100 A where the table
+/// asks less).
+inline constexpr double kContactorBreakingX = 8.0;
 
 /// A motor's starting current against time: (amps, seconds) corners of a step curve.
 struct StartProfile {

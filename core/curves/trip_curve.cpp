@@ -95,8 +95,12 @@ TripCurve TripCurve::ofOverload(const Part& p) {
     const double hot15 = (cls == "10A" ? 2 : cls == "10" ? 4 : cls == "20" ? 8 : 12) * 60.0;
     const double m = 7.2;
     c.m_a = tpMin / std::log(m * m / (m * m - 1.05 * 1.05));
-    c.m_b = std::min(tpMax / std::log(m * m / (m * m - 1.15 * 1.15)),
-                     hot15 / std::log((2.25 - 1.0) / (2.25 - 1.15 * 1.15)));
+    // The maximum band never trips below the relay's ultimate trip multiple u (1.15 × unless
+    // its data says otherwise; IEC 60947-4-1 requires a trip within 2 h at 1.2 ×).
+    const double u = ol.ultimateTripX;
+    c.m_c = u;
+    c.m_b = std::min(tpMax / std::log(m * m / (m * m - u * u)),
+                     hot15 / std::log((2.25 - 1.0) / (2.25 - u * u)));
     c.m_pickupA = 1.05 * c.m_ratingA;
     c.m_label = p.tag + " " + num(c.m_ratingA) + " A class " + cls;
     return c;
@@ -206,7 +210,7 @@ double TripCurve::maxTime(double amps) const {
         return std::max({t, 0.004, minTime(amps) * 1.2});
     }
     case Model::Overload:
-        return m <= 1.15 ? kNoTrip : m_b * std::log(m * m / (m * m - 1.3225));
+        return m <= m_c ? kNoTrip : m_b * std::log(m * m / (m * m - m_c * m_c));
     }
     return kNoTrip;
 }
@@ -223,7 +227,7 @@ double TripCurve::maxTimeHot(double amps) const {
     if (m_model != Model::Overload)
         return maxTime(amps);
     const double m = amps / m_ratingA;
-    return m <= 1.15 ? kNoTrip : m_b * std::log((m * m - 1.0) / (m * m - 1.3225));
+    return m <= m_c ? kNoTrip : m_b * std::log((m * m - 1.0) / (m * m - m_c * m_c));
 }
 
 } // namespace lineward

@@ -115,7 +115,8 @@ private:
         checkKeys(j, "/settings",
                   {"vdrop_branch_pct", "vdrop_total_pct", "start_dip_pct", "start_terminal_pct",
                    "coordination_margin_s", "ambient_c", "asymmetry_factor", "start_pf",
-                   "motor_contribution_x", "arc_flash_caution_cal", "arc_flash_max_time_s",
+                   "motor_contribution_x", "fault_c_max", "fault_conductor_c", "tx_z_tolerance_pct",
+                   "fault_c_min", "arc_flash_caution_cal", "arc_flash_max_time_s",
                    "arc_flash_findings"});
         setting(j, "vdrop_branch_pct", s.vdropBranchPct, 0.1, 50);
         setting(j, "vdrop_total_pct", s.vdropTotalPct, 0.1, 50);
@@ -126,6 +127,10 @@ private:
         setting(j, "asymmetry_factor", s.asymmetryFactor, 1, 3);
         setting(j, "start_pf", s.startPf, 0.05, 1);
         setting(j, "motor_contribution_x", s.motorContributionX, 0, 20);
+        setting(j, "fault_c_max", s.faultCMax, 0.9, 1.2);
+        setting(j, "fault_conductor_c", s.faultConductorC, -40, 250);
+        setting(j, "tx_z_tolerance_pct", s.txZTolerancePct, 0, 20);
+        setting(j, "fault_c_min", s.faultCMin, 0.8, 1.1);
         setting(j, "arc_flash_caution_cal", s.arcFlashCautionCal, 1.2, 100);
         setting(j, "arc_flash_max_time_s", s.arcFlashMaxTimeS, 0.01, 10);
         if (j.contains("arc_flash_findings")) {

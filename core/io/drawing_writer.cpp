@@ -70,6 +70,10 @@ ojson settingsJson(const Settings& s) {
     j["asymmetry_factor"] = fieldValueJson(s.asymmetryFactor);
     j["start_pf"] = fieldValueJson(s.startPf);
     j["motor_contribution_x"] = fieldValueJson(s.motorContributionX);
+    j["fault_c_max"] = fieldValueJson(s.faultCMax);
+    j["fault_conductor_c"] = fieldValueJson(s.faultConductorC);
+    j["tx_z_tolerance_pct"] = fieldValueJson(s.txZTolerancePct);
+    j["fault_c_min"] = fieldValueJson(s.faultCMin);
     // Written only where set, so that files made before these settings keep their bytes.
     const Settings defaults;
     if (s.arcFlashCautionCal != defaults.arcFlashCautionCal)

@@ -39,6 +39,16 @@ struct Settings {
     double asymmetryFactor = 1.5;     ///< common practice
     double startPf = 0.3;             ///< common practice
     double motorContributionX = 4.0;  ///< common practice: running motor feeds ~4 x FLC
+    /// Maximum fault current, for duty: the voltage factor c (IEC 60909-0 c_max; 1.0 is the
+    /// usual NEC-practice prefault voltage), conductors at this temperature (20 °C: cold
+    /// conductors give the highest current) and transformer impedance this % below nameplate.
+    double faultCMax = 1.0;
+    double faultConductorC = 20.0;
+    double txZTolerancePct = 0.0;
+    /// Minimum fault current, for the checks that need the least current: voltage factor c
+    /// (IEC 60909-0 c_min, 0.95 for low voltage, from memory), conductors at their insulation
+    /// rating, no motor contribution.
+    double faultCMin = 0.95;
     /// Arc flash: incident energy above which the equipment is marked with a caution, cal/cm².
     double arcFlashCautionCal = 8.0; ///< common practice (a drawing setting)
     /// Arc flash: longest arcing time taken, s (a worker can move away; common practice).

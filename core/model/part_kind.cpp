@@ -179,7 +179,7 @@ const std::array<FieldSpec, 11> kBusFields{{
      "blank: IEEE 1584-2018 Table 8 typical size"},
 }};
 
-const std::array<FieldSpec, 14> kBreakerFields{{
+const std::array<FieldSpec, 15> kBreakerFields{{
     {"trip_type",
      "Trip unit",
      "",
@@ -190,6 +190,18 @@ const std::array<FieldSpec, 14> kBreakerFields{{
      true,
      std::string("thermal_magnetic"),
      {"thermal_magnetic", "electronic"}},
+    {"construction",
+     "Construction",
+     "",
+     FT::Choice,
+     0,
+     0,
+     false,
+     true,
+     std::string("molded_case"),
+     {"molded_case", "power", "power_fused"},
+     "sets the test circuit of the interrupting rating: molded or insulated case (UL 489), "
+     "low-voltage power breaker unfused or fused (IEEE C37.13)"},
     {"frame_a", "Frame", "A", FT::Number, 1, 6000, false, false},
     {"trip_a", "Trip rating", "A", FT::Number, 0.5, 6000, false, true},
     {"interrupting_ka", "Interrupting rating", "kA", FT::Number, 1, 300, false, true},
@@ -288,7 +300,7 @@ const std::array<FieldSpec, 3> kContactorFields{{
     kOpen,
 }};
 
-const std::array<FieldSpec, 5> kOverloadFields{{
+const std::array<FieldSpec, 6> kOverloadFields{{
     {"setting_a", "Setting", "A", FT::Number, 0.1, 3000, false, true},
     {"range_min_a", "Lowest setting", "A", FT::Number, 0.1, 3000, false, false},
     {"range_max_a", "Highest setting", "A", FT::Number, 0.1, 3000, false, false},
@@ -302,6 +314,18 @@ const std::array<FieldSpec, 5> kOverloadFields{{
      true,
      std::string("10"),
      {"10A", "10", "20", "30"}},
+    {"ultimate_trip_x",
+     "Ultimate trip",
+     "x setting",
+     FT::Number,
+     1.05,
+     1.3,
+     false,
+     false,
+     1.15,
+     {},
+     "the multiple of the setting above which the relay surely trips (manufacturer's data; "
+     "1.15 is common practice for a dial marked in motor full-load amperes)"},
     kCurvePoints,
 }};
 

@@ -188,6 +188,11 @@ BreakerRatings BreakerRatings::of(const Part& p) {
     BreakerRatings r;
     protective(p, r);
     r.tripType = choice(p, SLOT(kTripType), kWords);
+    static constexpr std::pair<std::string_view, BreakerConstruction> kBuilt[] = {
+        {"molded_case", BreakerConstruction::MoldedCase},
+        {"power", BreakerConstruction::Power},
+        {"power_fused", BreakerConstruction::PowerFused}};
+    r.construction = choice(p, SLOT(kConstruction), kBuilt);
     r.frameA = opt(p, SLOT(kFrameA));
     r.tripA = num(p, SLOT(kTripA));
     r.instX = opt(p, SLOT(kInstX));
@@ -250,6 +255,7 @@ OverloadRatings OverloadRatings::of(const Part& p) {
     r.rangeMinA = opt(p, SLOT(kRangeMinA));
     r.rangeMaxA = opt(p, SLOT(kRangeMaxA));
     r.tripClass = text(p, SLOT(kTripClass));
+    r.ultimateTripX = num(p, SLOT(kUltimateTripX));
     r.curvePoints = text(p, SLOT(kCurvePoints));
     return r;
 }

@@ -17,6 +17,8 @@ namespace lineward {
 
 enum class BusType { Switchboard, Mcc, Panelboard, CableJunction };
 enum class TripType { ThermalMagnetic, Electronic };
+/// What a breaker's interrupting rating was tested as: the test circuit's X/R differs.
+enum class BreakerConstruction { MoldedCase, Power, PowerFused };
 enum class FuseType { TimeDelay, Fast };
 enum class Rotor { SquirrelCage, WoundRotor, Synchronous };
 enum class Material { Cu, Al };
@@ -72,12 +74,13 @@ struct ProtectiveData {
 std::optional<ProtectiveData> protectiveDataOf(const Part& p);
 
 struct BreakerRatings : ProtectiveData {
-    static constexpr std::string_view kTripType = "trip_type", kFrameA = "frame_a",
-                                      kTripA = "trip_a", kInstX = "inst_x",
+    static constexpr std::string_view kTripType = "trip_type", kConstruction = "construction",
+                                      kFrameA = "frame_a", kTripA = "trip_a", kInstX = "inst_x",
                                       kLtPickupX = "lt_pickup_x", kLtDelayS = "lt_delay_s",
                                       kStPickupX = "st_pickup_x", kStDelayS = "st_delay_s",
                                       kStI2t = "st_i2t", kOpen = "open";
     TripType tripType = TripType::ThermalMagnetic;
+    BreakerConstruction construction = BreakerConstruction::MoldedCase;
     std::optional<double> frameA;
     double tripA = 0;
     std::optional<double> instX, ltPickupX, ltDelayS, stPickupX, stDelayS;
@@ -123,8 +126,12 @@ struct ContactorRatings {
 struct OverloadRatings {
     static constexpr std::string_view kSettingA = "setting_a", kRangeMinA = "range_min_a",
                                       kRangeMaxA = "range_max_a", kTripClass = "trip_class",
+                                      kUltimateTripX = "ultimate_trip_x",
                                       kCurvePoints = "curve_points";
     double settingA = 0;
+    double ultimateTripX = 1.15; ///< surely trips above this multiple of the setting
+    /// The current above which the relay surely trips: what NEC 430.32 limits.
+    double tripCurrentA() const { return ultimateTripX * settingA; }
     std::optional<double> rangeMinA, rangeMaxA;
     std::string tripClass; ///< "10A", "10", "20" or "30"
     std::string curvePoints;

@@ -111,10 +111,17 @@ void cableDamage(const RuleContext& ctx, const Part& c, std::vector<Finding>& ou
         const double i = lo * std::pow(fault / lo, k / 24.0);
         if (i >= fault || i <= 0)
             break;
+        // An overload relay acts through its bucket's contactor, so only up to the current
+        // the contactor can break; above it only the short-circuit device clears.
         double combined = kNoTrip;
-        for (const auto& d :
-             devices) // an overload relay acts through its bucket's listed contactor
+        bool relayBeyondContactor = false;
+        for (const auto& d : devices) {
+            if (i > d.clearsUpToA) {
+                relayBeyondContactor = true;
+                continue;
+            }
             combined = std::min(combined, d.curve.maxTime(i));
+        }
         if (combined <= 0.05)
             break; // instantaneous region: duty.withstand's domain
         const double damage = *i2t / (i * i);
@@ -128,6 +135,13 @@ void cableDamage(const RuleContext& ctx, const Part& c, std::vector<Finding>& ou
         f.limit = damage;
         f.unit = "s";
         f.trace = {{"damage curve", fmt(*i2t, 0) + " A²s (ICEA P-32-382)"}, {"current", kA(i)}};
+        if (relayBeyondContactor)
+            for (const auto& d : devices)
+                if (d.part->kind == PartKind::Overload) {
+                    std::string how;
+                    overloadBreakingA(ctx, *d.part, &how);
+                    f.trace.push_back({d.part->tag + " not credited above its contactor", how});
+                }
         f.fix = Fix{"use a larger cable or faster protection", {}};
         out.push_back(std::move(f));
         return;
@@ -140,6 +154,79 @@ double nominalV(const RuleContext& ctx, const Part& p) {
         .nominalV;
 }
 
+// The current from which a device clears in its instantaneous or short-time region, with the
+// band's upper tolerance (the generic bands of trip_curve.cpp: 1.2 × a thermal-magnetic or
+// instantaneous-only pickup, 1.1 × an electronic short-time or instantaneous pickup); nothing
+// for fuses and for breakers without such a region.
+std::optional<std::pair<double, std::string>> fastRegionFromA(const Part& d) {
+    if (d.kind == PartKind::InstBreaker) {
+        const double p = InstBreakerRatings::of(d).pickupA;
+        return std::pair{1.2 * p, "instantaneous pickup " + fmt(p, 0) + " A × 1.2 (tolerance)"};
+    }
+    if (d.kind != PartKind::Breaker)
+        return std::nullopt;
+    const auto b = BreakerRatings::of(d);
+    if (b.tripType == TripType::ThermalMagnetic) {
+        const double x = b.instX.value_or(kAssumedThermalMagneticInstX);
+        return std::pair{1.2 * x * b.tripA,
+                         "instantaneous pickup " + fmt(x, 1) + " × " + fmt(b.tripA, 0) + " A" +
+                             (b.instX ? "" : " (assumed)") + " × 1.2 (tolerance)"};
+    }
+    std::optional<std::pair<double, std::string>> best;
+    auto consider = [&](std::optional<double> x, const char* what) {
+        if (!x)
+            return;
+        const double a = 1.1 * *x * b.tripA;
+        if (!best || a < best->first)
+            best = std::pair{a, std::string(what) + " pickup " + fmt(*x, 1) + " × " +
+                                    fmt(b.tripA, 0) + " A × 1.1 (tolerance)"};
+    };
+    consider(b.stPickupX, "short-time");
+    consider(b.instX, "instantaneous");
+    return best;
+}
+
+// A fault at the far end of a cable at the least current the system gives must reach its
+// protection's instantaneous or short-time region, or it lasts the long-time band.
+void minimumFaultReach(const RuleContext& ctx, const Part& c, std::vector<Finding>& out) {
+    const auto devId = ctx.flow.protectionAbove(ctx.flow.lineNode(c.id));
+    const auto imin = ctx.study.minFaultAtNode(ctx.flow.loadNode(c.id));
+    if (!devId || !imin)
+        return;
+    const Part& dev = *ctx.drawing.part(*devId);
+    const auto fast = fastRegionFromA(dev);
+    const double vc = nominalV(ctx, c), vd = nominalV(ctx, dev);
+    const double ratio = vc > 0 && vd > 0 ? vc / vd : 1.0; // referred across a transformer
+    const double amps = *imin * 1000.0 * ratio;
+    if (!fast || amps >= fast->first)
+        return;
+    const auto curve = TripCurve::of(dev);
+    const double t = curve ? curve->maxTime(amps) : kNoTrip;
+    auto f =
+        makeFinding("curve.min_fault.reach", {dev.id, c.id},
+                    dev.tag + "'s fast region (from " + kA(fast->first) +
+                        ") is not reached by the " + kA(amps) + " minimum fault at the end of " +
+                        c.tag + ": it clears that fault in " + secs(t));
+    f.computed = amps / 1000.0;
+    f.limit = fast->first / 1000.0;
+    f.unit = "kA";
+    const auto& s = ctx.settings();
+    f.trace = {{"minimum-fault conditions",
+                "voltage factor c = " + fmt(s.faultCMin, 2) +
+                    " (drawing setting); conductors at their insulation rating; no motor "
+                    "contribution"},
+               {"minimum fault at the end of " + c.tag,
+                kA(*imin * 1000.0) + (ratio != 1.0
+                                          ? " (× " + fmt(ratio, 3) + " as " + dev.tag + " sees it)"
+                                          : std::string())},
+               {dev.tag + " fast region", fast->second + " = " + kA(fast->first)},
+               {"clearing time at the minimum fault", secs(t)}};
+    f.fix = Fix{"lower " + dev.tag + "'s instantaneous or short-time pickup below " + kA(amps) +
+                    " (within the inrush and selectivity limits), or use a larger cable",
+                {}};
+    out.push_back(std::move(f));
+}
+
 // `overloadBelow`: the overload relay of the motor branch `d` heads, if any; it and `d` act
 // together as the downstream protection.
 void selectivity(const RuleContext& ctx, const Part& d, const Part* overloadBelow,
@@ -149,6 +236,9 @@ void selectivity(const RuleContext& ctx, const Part& d, const Part* overloadBelo
         return;
     const TripCurve& down = path.front().curve;
     auto olCurve = overloadBelow ? TripCurve::of(*overloadBelow) : std::nullopt;
+    std::string olBreakHow;
+    const double olBreakA =
+        overloadBelow ? overloadBreakingA(ctx, *overloadBelow, &olBreakHow) : kNoTrip;
     const PathDevice* up = nullptr;
     for (std::size_t i = 1; i < path.size(); ++i)
         if (path[i].part->kind != PartKind::Overload) {
@@ -168,7 +258,9 @@ void selectivity(const RuleContext& ctx, const Part& d, const Part* overloadBelo
         return;
     auto downMax = [&](double i) {
         double t = down.maxTime(i);
-        if (olCurve) // relay, contactor and device act together as one listed combination
+        // Relay, contactor and device act together as one listed combination, the relay only
+        // up to what its contactor can break.
+        if (olCurve && i <= olBreakA)
             t = std::min(t, olCurve->maxTime(i));
         return t;
     };
@@ -193,6 +285,8 @@ void selectivity(const RuleContext& ctx, const Part& d, const Part* overloadBelo
                                                            : "")},
             {"at " + kA(i), "downstream clears by " + secs(dmax) + ", upstream may trip in " +
                                 secs(umin) + " (margin " + fmt(margin, 2) + " s)"}};
+        if (olCurve)
+            f.trace.push_back({overloadBelow->tag + " credited up to " + kA(olBreakA), olBreakHow});
         f.fix =
             Fix{"raise " + up->part->tag + "'s short-time or instantaneous setting, or add a delay",
                 {}};
@@ -213,10 +307,11 @@ void checkCurves(const RuleContext& ctx, std::vector<Finding>& out) {
             continue;
         if (p.kind == PartKind::Motor)
             motorChecks(ctx, p, out);
-        else if (p.kind == PartKind::Cable)
+        else if (p.kind == PartKind::Cable) {
             cableDamage(ctx, p, out);
-        else if (p.kind == PartKind::Breaker || p.kind == PartKind::Fuse ||
-                 p.kind == PartKind::InstBreaker)
+            minimumFaultReach(ctx, p, out);
+        } else if (p.kind == PartKind::Breaker || p.kind == PartKind::Fuse ||
+                   p.kind == PartKind::InstBreaker)
             selectivity(ctx, p, overloadOf.count(p.id) ? overloadOf.at(p.id) : nullptr, out);
     }
 }

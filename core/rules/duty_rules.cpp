@@ -3,6 +3,7 @@
 #include "curves/trip_curve.h"
 #include "model/conductor.h"
 #include "model/ratings.h"
+#include "rules/interrupting_test.h"
 #include "rules/rule_catalog.h"
 #include "rules/rule_context.h"
 #include "sizing/motor_sizing.h"
@@ -24,25 +25,62 @@ TraceStep motorContributionStep(const RuleContext& ctx) {
                                       " (drawing setting and X/R assumed, common practice)"};
 }
 
+// The conservatism of the maximum fault current, from the drawing's settings.
+TraceStep maxFaultStep(const RuleContext& ctx) {
+    const auto& s = ctx.settings();
+    return {"maximum-fault conditions",
+            "voltage factor c = " + fmt(s.faultCMax, 2) + "; conductors at " +
+                fmt(s.faultConductorC, 0) + " °C (NEC Table 9 resistance × " +
+                fmt(resistanceFactorFrom75C(false, s.faultConductorC), 3) + " copper, × " +
+                fmt(resistanceFactorFrom75C(true, s.faultConductorC), 3) +
+                " aluminium); transformer %Z " +
+                (s.txZTolerancePct > 0 ? "− " + fmt(s.txZTolerancePct, 1) + " % (tolerance)"
+                                       : std::string("at nameplate")) +
+                " (drawing settings)"};
+}
+
 void interrupting(const RuleContext& ctx, const Part& d, std::vector<Finding>& out) {
     const auto* f = ctx.study.faultAtNode(ctx.flow.lineNode(d.id));
     const auto data = protectiveDataOf(d);
     if (!f || !data)
         return;
     const double rating = data->interruptingKa;
-    if (rating >= f->ikKa - 1e-9)
+    // A system X/R above the rating's test circuit makes the first peak (or the asymmetrical
+    // current) larger than the test's at the same symmetrical current: the rating is worth
+    // less (IEEE Std 1015 method, from memory).
+    const auto test = interruptingTest(d, rating);
+    const double mf = test ? asymmetryFactor(*test, f->xOverR) : 1.0;
+    const double worth = rating / mf;
+    if (worth >= f->ikKa - 1e-9)
         return;
-    auto x = makeFinding("duty.interrupting", {d.id},
-                         d.tag + " interrupting rating " + fmt(rating) + " kA is below the " +
-                             fmt(f->ikKa, 2) + " kA available at its line side");
+    const bool derated = mf > 1.0;
+    auto x =
+        makeFinding("duty.interrupting", {d.id},
+                    d.tag + " interrupting rating " + fmt(rating) + " kA" +
+                        (derated ? " (" + fmt(worth, 2) + " kA at X/R " + fmt(f->xOverR, 1) + ")"
+                                 : std::string()) +
+                        " is below the " + fmt(f->ikKa, 2) + " kA available at its line side");
     x.computed = f->ikKa;
-    x.limit = rating;
+    x.limit = worth;
     x.unit = "kA";
     x.trace = {
         {"available fault current", fmt(f->ikKa, 2) + " kA symmetrical, X/R " + fmt(f->xOverR, 1)},
+        maxFaultStep(ctx),
         motorContributionStep(ctx),
         {"interrupting rating", fmt(rating) + " kA"}};
-    const double next = std::ceil(f->ikKa / 5.0) * 5.0 < 10 ? 10 : std::ceil(f->ikKa / 5.0) * 5.0;
+    if (test) {
+        x.trace.push_back({"rating's test circuit", test->standard + ": power factor " +
+                                                        fmt(test->powerFactorPct, 0) + " %, X/R " +
+                                                        fmt(test->xOverR, 2) + " (from memory)"});
+        x.trace.push_back(
+            {"X/R multiplying factor", derated ? asymmetryFactorText(*test, f->xOverR)
+                                               : "1 (system X/R at or below the test circuit's)"});
+        if (derated)
+            x.trace.push_back({"rating at this X/R",
+                               fmt(rating) + " / " + fmt(mf, 3) + " = " + fmt(worth, 2) + " kA"});
+    }
+    const double need = f->ikKa * mf;
+    const double next = std::max(10.0, std::ceil(need / 5.0 - 1e-9) * 5.0);
     x.fix = Fix{"use a device rated " + fmt(next, 0) + " kA or more (or series-rated, listed)",
                 {{d.id, ProtectiveData::kInterruptingKa, next}}};
     out.push_back(std::move(x));
@@ -61,6 +99,7 @@ void bracing(const RuleContext& ctx, const Part& bus, std::vector<Finding>& out)
     x.unit = "kA";
     x.trace = {{"available fault current",
                 fmt(f->ikKa, 2) + " kA symmetrical, peak " + fmt(f->peakKa, 2) + " kA"},
+               maxFaultStep(ctx),
                motorContributionStep(ctx)};
     const double next = std::ceil(f->ikKa / 5.0) * 5.0;
     x.fix =
@@ -89,6 +128,7 @@ void sccr(const RuleContext& ctx, const Bucket& b, std::vector<Finding>& out) {
     x.unit = "kA";
     x.trace = {{"bucket", b.tag},
                {"available fault current", fmt(worst->ikKa, 2) + " kA"},
+               maxFaultStep(ctx),
                motorContributionStep(ctx)};
     x.fix =
         Fix{"use a combination listed for " + fmt(std::ceil(worst->ikKa / 5) * 5, 0) + " kA", {}};
@@ -189,6 +229,7 @@ void withstand(const RuleContext& ctx, const Part& cable, std::vector<Finding>& 
     x.unit = "A²s";
     x.trace = {{"fault current at the cable",
                 fmt(f->ikKa, 2) + " kA" + (sets > 1 ? ", per set " + fmt(perSet, 0) + " A" : "")},
+               maxFaultStep(ctx),
                {"cable withstand", cableHow + " = " + fmt(*limit, 0) + " A²s"},
                {"let-through of " + dev.tag, devHow + " = " + fmt(*let, 0) + " A²s"}};
     auto cur = ctx.tables.areaCmil(CableRatings::of(cable).size);

@@ -36,32 +36,38 @@ void overload(BranchCheck& c) {
                    {"430.32(A)(1) upper limit",
                     fmt(lim.pctA, 0) + " % × " + fmt(*fla) + " = " + fmt(lim.maxA) + " A"}};
         const double fixTo = std::ceil(*fla * 10.0) / 10.0;
-        if ((!relay.rangeMaxA || fixTo <= *relay.rangeMaxA) && fixTo <= lim.maxA + 1e-9)
+        if ((!relay.rangeMaxA || fixTo <= *relay.rangeMaxA) &&
+            fixTo * relay.ultimateTripX <= lim.maxA + 1e-9)
             f.fix = Fix{"set " + ol->tag + " to " + fmt(fixTo) + " A",
                         {{ol->id, OverloadRatings::kSettingA, fixTo}}};
         else
             f.fix = Fix{"choose a relay whose range reaches " + fmt(fixTo) + " A", {}};
         return;
     }
-    if (setting <= lim.maxA + 1e-9)
+    // 430.32 limits the current at which the relay trips, not its dial: the relay surely
+    // trips only above its ultimate trip multiple of the setting.
+    const double trips = relay.tripCurrentA();
+    if (trips <= lim.maxA + 1e-9)
         return;
-    const bool withinC = setting <= lim.maxC + 1e-9;
+    const bool withinC = trips <= lim.maxC + 1e-9;
     auto& f = c.add(
         withinC ? RuleId("branch.overload.exception") : RuleId("branch.overload.setting"), *ol,
-        ol->tag + " set at " + fmt(setting) + " A exceeds " + fmt(lim.pctA, 0) + " % of FLA " +
-            fmt(*fla) + " A = " + fmt(lim.maxA) + " A" +
+        ol->tag + " set at " + fmt(setting) + " A trips at " + fmt(trips, 2) + " A, above " +
+            fmt(lim.pctA, 0) + " % of FLA " + fmt(*fla) + " A = " + fmt(lim.maxA) + " A" +
             (withinC ? "; 430.32(C) allows up to " + fmt(lim.maxC) +
                            " A only where the lower setting will not let the motor start"
                      : ""));
     f.trace = {
         {"nameplate FLA", fmt(*fla) + " A (NEC 430.6(A)(2))"},
         {"basis", lim.basis},
+        {"trip current", fmt(relay.ultimateTripX, 2) + " × " + fmt(setting) +
+                             " A = " + fmt(trips, 2) + " A (the relay's ultimate trip multiple)"},
         {"430.32(A)(1)", fmt(lim.pctA, 0) + " % × " + fmt(*fla) + " = " + fmt(lim.maxA) + " A"},
         {"430.32(C)", fmt(lim.pctC, 0) + " % × " + fmt(*fla) + " = " + fmt(lim.maxC) + " A"}};
-    f.computed = setting;
+    f.computed = trips;
     f.limit = withinC ? lim.maxC : lim.maxA;
     f.unit = "A";
-    const double fixTo = std::floor(lim.maxA * 10.0) / 10.0;
+    const double fixTo = std::floor(lim.maxA / relay.ultimateTripX * 10.0) / 10.0;
     if (!relay.rangeMinA || fixTo >= *relay.rangeMinA)
         f.fix = Fix{"set " + ol->tag + " to " + fmt(fixTo) + " A",
                     {{ol->id, OverloadRatings::kSettingA, fixTo}}};

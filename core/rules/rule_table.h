@@ -77,9 +77,10 @@ inline constexpr std::array kRules{
              "setting ≥ nameplate FLA: a relay set lower trips the motor at full load"},
     RuleInfo{"branch.overload.setting", "overload setting too high", "NEC 2023 430.32(A)(1)",
              Severity::Violation,
-             "setting ≤ 125 % FLA (SF ≥ 1.15 or rise ≤ 40 °C), else ≤ 115 % FLA"},
+             "trip current (ultimate trip multiple × setting) ≤ 125 % FLA (SF ≥ 1.15 or rise ≤ "
+             "40 °C), else ≤ 115 % FLA"},
     RuleInfo{"branch.overload.exception", "overload setting under 430.32(C)", "NEC 2023 430.32(C)",
-             Severity::Caution, "setting above 430.32(A)(1) but ≤ 140 % (130 %) FLA"},
+             Severity::Caution, "trip current above 430.32(A)(1) but ≤ 140 % (130 %) FLA"},
     RuleInfo{"branch.contactor.size", "contactor too small", "NEMA ICS 2 Table 2-4-1",
              Severity::Violation,
              "NEMA size hp at the motor voltage ≥ motor hp and continuous A ≥ "
@@ -132,7 +133,9 @@ inline constexpr std::array kRules{
              "number"},
     RuleInfo{"duty.interrupting", "interrupting rating below available fault", "NEC 2023 110.9",
              Severity::Violation,
-             "interrupting rating ≥ symmetrical fault current at the line side"},
+             "interrupting rating ≥ symmetrical fault current at the line side; the rating is "
+             "divided by the X/R multiplying factor where the system X/R exceeds the X/R of the "
+             "rating's test circuit (IEEE Std 1015 method)"},
     RuleInfo{"duty.sccr", "bucket SCCR below available fault", "NEC 2023 110.10; 430.8; 409.22",
              Severity::Violation,
              "bucket short-circuit current rating ≥ fault current at its line side"},
@@ -175,6 +178,12 @@ inline constexpr std::array kRules{
              "NEC 2023 110.10; ICEA P-32-382", Severity::Caution,
              "combined maximum clearing time < I²t / I² at every current from 2 × ampacity to the "
              "instantaneous region (below the available fault)"},
+    RuleInfo{"curve.min_fault.reach", "minimum fault below the fast region",
+             "common practice; IEC 60909-0 c_min (setting)", Severity::Caution,
+             "minimum fault at the cable's far end (c_min, conductors at their insulation "
+             "rating, no motors) ≥ the current from which its protection's instantaneous or "
+             "short-time region clears (1.2 × a thermal-magnetic or instantaneous-only pickup, "
+             "1.1 × an electronic pickup)"},
     RuleInfo{"curve.selectivity", "devices not selective", "common practice (setting)",
              Severity::Caution,
              "upstream minimum time > downstream maximum time + coordination margin for every "

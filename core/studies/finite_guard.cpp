@@ -51,6 +51,13 @@ void guardStudyResults(StudyResults& r, const Network& net) {
         note(r, at ? std::vector{*at} : std::vector<PartId>{},
              "the fault current at " + (at ? tagOf(d, *at) : "a bus"));
     }
+    for (std::size_t b = 0; b < r.minFaultKa.size(); ++b)
+        if (!std::isfinite(r.minFaultKa[b])) {
+            r.minFaultKa[b] = 0; // 0: unknown; no pickup check passes or fails on it
+            const auto at = partAtBus(r, net, b);
+            note(r, at ? std::vector{*at} : std::vector<PartId>{},
+                 "the minimum fault current at " + (at ? tagOf(d, *at) : "a bus"));
+        }
     bool voltageBad = false;
     for (std::size_t b = 0; b < r.voltage.size(); ++b)
         if (!finite(r.voltage[b])) {

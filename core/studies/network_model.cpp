@@ -62,6 +62,10 @@ std::optional<Complex> cableOhms(const Part& cable, const Tables& t) {
     return Complex(*r, x) * (lengthFt / 1000.0) / sets;
 }
 
+double resistanceFactorFrom75C(bool aluminium, double tempC) {
+    return 1.0 + (aluminium ? 0.00330 : 0.00323) * (tempC - 75.0);
+}
+
 namespace {
 
 // Closed zero-impedance devices join nodes into one solve bus; each energized bus takes its
@@ -94,7 +98,7 @@ void mergeBuses(NetworkModel& m, const Network& net) {
 }
 
 // Transformers and cables between solve buses.
-void addBranches(NetworkModel& m, const Network& net, const Tables& t) {
+void addBranches(NetworkModel& m, const Network& net, const Tables& t, const Settings& s) {
     const Drawing& d = net.drawing();
     const auto& g = net.graph();
     for (auto [e, end] = boost::edges(g); e != end; ++e) {
@@ -102,22 +106,29 @@ void addBranches(NetworkModel& m, const Network& net, const Tables& t) {
         const int a = m.busOfNode[boost::source(*e, g)], b = m.busOfNode[boost::target(*e, g)];
         if (!g[*e].closed || !hasImpedance(p.kind) || a < 0 || b < 0)
             continue;
-        Complex z;
+        Complex z, zMax, zMin;
         if (p.kind == PartKind::Transformer) {
             // kVA and %Z are required ratings: every drawing read or edited has them.
             const auto tx = TransformerRatings::of(p);
             const double zpu = tx.zPct / 100.0 * kBaseMva / (tx.kva / 1000.0);
             z = fromMagnitude(zpu, tx.xOverR);
+            zMax = z * (1.0 - s.txZTolerancePct / 100.0);
+            zMin = z;
         } else if (auto ohms = cableOhms(p, t)) {
             z = *ohms / zBase(m.baseV[static_cast<std::size_t>(a)]);
+            const auto cable = CableRatings::of(p);
+            const bool al = cable.material == Material::Al;
+            zMax = Complex(z.real() * resistanceFactorFrom75C(al, s.faultConductorC), z.imag());
+            zMin = Complex(z.real() * resistanceFactorFrom75C(al, cable.insulationC), z.imag());
         } else {
             m.issues.push_back({StudyIssueKind::CableNoData,
                                 {p.id},
                                 p.tag + ": no impedance data for " + CableRatings::of(p).size +
                                     "; the studies treat it as having none"});
             z = Complex(kNoDataCablePu, kNoDataCablePu);
+            zMax = zMin = z;
         }
-        m.branches.push_back({a, b, z, p.id});
+        m.branches.push_back({a, b, z, p.id, zMax, zMin});
     }
 }
 
@@ -163,7 +174,7 @@ void addShunts(NetworkModel& m, const Network& net, const Tables& t, const Setti
 NetworkModel buildNetworkModel(const Network& net, const Tables& t, const Settings& s) {
     NetworkModel m;
     mergeBuses(m, net);
-    addBranches(m, net, t);
+    addBranches(m, net, t, s);
     addShunts(m, net, t, s);
     return m;
 }

@@ -22,7 +22,17 @@ struct ModelBranch {
     int from = -1, to = -1;
     Complex z; ///< per unit on kBaseMva and the buses' nominal voltage
     PartId part;
+    /// The same for the maximum fault current: conductors at the drawing's fault temperature,
+    /// transformers at nameplate %Z less the drawing's tolerance.
+    Complex zMaxFault;
+    /// The same for the minimum fault current: conductors at their insulation rating.
+    Complex zMinFault;
 };
+
+/// A conductor's resistance at `tempC` over its resistance at 75 °C, the temperature of NEC
+/// Chapter 9 Table 9: R2 = R1·[1 + α(T2 − 75)] with α = 0.00323 for copper and 0.00330 for
+/// aluminium (NEC Chapter 9 Table 8, Note 2, from memory).
+double resistanceFactorFrom75C(bool aluminium, double tempC);
 
 /// A source or motor seen as an EMF of 1 per unit behind an impedance to ground.
 struct ModelShunt {

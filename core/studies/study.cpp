@@ -29,6 +29,14 @@ const FaultAtBus* StudyResults::faultAtNode(NodeIndex n) const {
                : nullptr;
 }
 
+std::optional<double> StudyResults::minFaultAtNode(NodeIndex n) const {
+    const int b = busOf(n);
+    if (b < 0 || static_cast<std::size_t>(b) >= minFaultKa.size() ||
+        !(minFaultKa[static_cast<std::size_t>(b)] > 0))
+        return std::nullopt;
+    return minFaultKa[static_cast<std::size_t>(b)];
+}
+
 namespace {
 
 // Z entries from the loop solver (the tree solver corrected for each loop), or from the sparse
@@ -51,9 +59,45 @@ struct ZSource {
     }
 };
 
-void faultStudy(StudyResults& r) {
+// The model for the maximum fault current: every branch at its maximum-fault impedance, each
+// source's impedance c·U²/S (IEC 60909-0: the stated fault level holds at the source with a
+// prefault voltage of c).
+NetworkModel faultModel(const NetworkModel& m, double c, bool maximum) {
+    NetworkModel f;
+    f.busOfNode = m.busOfNode;
+    f.baseV = m.baseV;
+    f.branches = m.branches;
+    for (auto& b : f.branches)
+        b.z = maximum ? b.zMaxFault : b.zMinFault;
+    f.sources = m.sources;
+    for (auto& s : f.sources)
+        s.z *= c;
+    if (maximum)
+        f.motors = m.motors;
+    return f;
+}
+
+// The least current a bolted three-phase fault draws at each bus: what an instantaneous or
+// short-time pickup must reach to clear quickly.
+void minimumFaultStudy(StudyResults& r, const Settings& s) {
+    const double c = s.faultCMin;
+    const NetworkModel model = faultModel(r.model, c, false);
+    const ZSource z(model, false);
+    if (z.failed)
+        return; // the maximum study has reported the matrix
+    r.minFaultKa.resize(static_cast<std::size_t>(r.model.busCount()));
+    for (int k = 0; k < r.model.busCount(); ++k) {
+        const Complex zth = z.loops ? z.loops->zth(k) : z.lu->zColumn(k)[k];
+        r.minFaultKa[static_cast<std::size_t>(k)] =
+            c / std::abs(zth) * r.model.baseAmps(k) / 1000.0;
+    }
+}
+
+void faultStudy(StudyResults& r, const Settings& s) {
     r.fault.assign(static_cast<std::size_t>(r.model.busCount()), {});
-    const ZSource z(r.model, true);
+    const double c = s.faultCMax;
+    const NetworkModel model = faultModel(r.model, c, true); // outlives the solver built on it
+    const ZSource z(model, true);
     if (z.failed) {
         r.fault.clear(); // no fault current anywhere: no duty check may pass on a zero
         r.faultSolved = false;
@@ -70,7 +114,7 @@ void faultStudy(StudyResults& r) {
         // networks (more than LoopSolver::kMaxChordsPerTree loops in one tree) take it.
         const Complex zth = z.loops ? z.loops->zth(k) : z.lu->zColumn(k)[k];
         FaultAtBus f;
-        f.ikKa = 1.0 / std::abs(zth) * r.model.baseAmps(k) / 1000.0;
+        f.ikKa = c / std::abs(zth) * r.model.baseAmps(k) / 1000.0;
         f.xOverR = zth.real() > 0 ? zth.imag() / zth.real() : 1e6;
         f.kappa = peakFactor(f.xOverR);
         f.peakKa = f.kappa * std::sqrt(2.0) * f.ikKa;
@@ -226,8 +270,11 @@ void motorStarting(StudyResults& r, const Network& net, const Flow& flow, const 
         const Complex vTerm = vOpen - *zth * iStart;
         ms.terminalPctOfRated = std::abs(vTerm) * vb / rated * 100.0;
         if (ms.bus >= 0) {
-            const Complex before = r.voltage[static_cast<std::size_t>(ms.bus)];
-            const Complex during = before - *zbm * (iStart - iRun);
+            // The dip is measured from the bus voltage just before the start: the other loads
+            // running, this motor not yet (its running current taken out of the load flow's
+            // state), to the voltage while it is at locked rotor.
+            const Complex before = r.voltage[static_cast<std::size_t>(ms.bus)] + *zbm * iRun;
+            const Complex during = before - *zbm * iStart;
             ms.busDipPct = (std::abs(before) - std::abs(during)) / std::abs(before) * 100.0;
         }
         r.starts[p.id] = ms;
@@ -242,7 +289,9 @@ StudyResults runStudies(const Network& net, const Flow& flow, const Tables& t, c
     r.issues = r.model.issues;
     if (r.model.busCount() == 0)
         return r;
-    faultStudy(r);
+    faultStudy(r, s);
+    if (r.faultSolved)
+        minimumFaultStudy(r, s);
     // The load flow and starting use Y without motor shunts.
     const ZSource z(r.model, false);
     if (z.failed) {

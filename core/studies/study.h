@@ -29,7 +29,10 @@ struct MotorStart {
 
 struct StudyResults {
     NetworkModel model;
-    std::vector<FaultAtBus> fault;       ///< by solve bus
+    std::vector<FaultAtBus> fault; ///< by solve bus: maximum (duty) conditions
+    /// Minimum fault current in kA by solve bus (c_min, conductors at their insulation
+    /// rating, no motors); empty when it could not be solved.
+    std::vector<double> minFaultKa;
     std::vector<Complex> voltage;        ///< steady state, per unit, by solve bus
     std::vector<double> originVoltagePu; ///< |V| at the bus's supplying transformer or source
     bool loadFlowConverged = false;
@@ -43,6 +46,8 @@ struct StudyResults {
     /// Solve bus of a network node, or −1.
     int busOf(NodeIndex n) const;
     const FaultAtBus* faultAtNode(NodeIndex n) const;
+    /// Minimum fault current at a node in kA; nothing where it is unknown.
+    std::optional<double> minFaultAtNode(NodeIndex n) const;
 };
 
 /// Runs the fault, load-flow and motor-starting studies.

@@ -4,7 +4,9 @@
 #include "test_support.h"
 
 #include <cmath>
+#include <complex>
 #include <gtest/gtest.h>
+#include <optional>
 
 using namespace lineward;
 using namespace lineward::test;
@@ -269,4 +271,110 @@ TEST(CableDamage, AFastOwnDeviceProtectsTheCable) {
     const Part down =
         device(PartKind::Breaker, {{"trip_a", 100.0}, {"interrupting_ka", 65.0}, {"inst_x", 10.0}});
     EXPECT_TRUE(cableDamageOf(up, down).empty());
+}
+
+namespace {
+// A 10 hp motor bucket on a bus with 1.5 kA available: a 100 A electronic breaker without
+// instantaneous (long-time 10 s at 6 ×), contactor, class 10 relay set 16 A, 10 AWG cable.
+Drawing relayGuardedBucket(std::initializer_list<std::pair<const char*, FieldValue>> contactor) {
+    DrawingBuilder b;
+    auto src = b.add(PartKind::Source, "U", {{"kv", 0.48}, {"fault_ka", 1.5}, {"x_over_r", 3.0}});
+    auto bus = b.add(PartKind::Bus, "MCC", {{"volts", 480.0}, {"amps", 600.0}});
+    auto cb = b.add(PartKind::Breaker, "CB",
+                    {{"trip_type", std::string("electronic")},
+                     {"trip_a", 100.0},
+                     {"interrupting_ka", 65.0},
+                     {"lt_delay_s", 10.0}});
+    auto k = b.add(PartKind::Contactor, "K", contactor);
+    auto ol =
+        b.add(PartKind::Overload, "OL", {{"setting_a", 16.0}, {"trip_class", std::string("10")}});
+    auto c = b.add(PartKind::Cable, "C", {{"size", std::string("10 AWG")}, {"length_ft", 30.0}});
+    auto m = b.add(PartKind::Motor, "M", {{"hp", 10.0}, {"volts", 460.0}});
+    b.wire(src, 0, bus, 0);
+    b.wire(bus, 0, cb, 0);
+    b.wire(cb, 1, k, 0);
+    b.wire(k, 1, ol, 0);
+    b.wire(ol, 1, c, 0);
+    b.wire(c, 1, m, 0);
+    return b.drawing();
+}
+} // namespace
+
+TEST(CableDamage, AnOverloadRelayIsCreditedOnlyUpToItsContactorsBreakingCurrent) {
+    // 10 AWG copper (10,380 cmil, NEC Chapter 9 Table 8) lasts I²t ≈ 6 × 10⁵ A²s (ICEA
+    // P-32-382), 1 s at about 0.8 kA. The class 10 relay would clear every current from there
+    // to the 1.5 kA available faster than the cable heats (both fall as 1/I²), but a NEMA
+    // size 1 contactor (27 A continuous, NEMA ICS 2 from memory) breaks only 8 × 27 = 216 A
+    // (IEC 60947-4-1 AC-3, from memory): above that only the breaker clears, and its
+    // long-time band takes seconds — the cable is not protected.
+    const auto small = relayGuardedBucket({{"nema_size", std::string("1")}});
+    const Finding* f = nullptr;
+    const auto r = checkDrawing(small, testTables());
+    for (const auto& x : r.findings)
+        if (x.ruleId == "curve.cable.damage")
+            f = &x;
+    ASSERT_NE(f, nullptr);
+    const auto step = std::find_if(f->trace.begin(), f->trace.end(), [](const TraceStep& s) {
+        return s.name == "OL not credited above its contactor";
+    });
+    ASSERT_NE(step, f->trace.end());
+    EXPECT_NE(step->value.find("8 × its NEMA size 1 continuous rating 27 A = 216 A"),
+              std::string::npos)
+        << step->value;
+    // A contactor that breaks 8 × 200 A = 1.6 kA, more than is available, lets the relay clear
+    // every current the cable could see: no damage.
+    const auto big = relayGuardedBucket({{"ac3_a", 200.0}});
+    for (const auto& x : checkDrawing(big, testTables()).findings)
+        EXPECT_NE(x.ruleId, "curve.cable.damage") << x.message;
+}
+
+TEST(MinimumFault, APickupTheLeastFaultAtTheCableEndDoesNotReachIsACaution) {
+    // 30 kA at X/R 8 on a 480 V bus; 100 A thermal-magnetic breaker, instantaneous 10 × (clears
+    // from 1.2 × 1000 A = 1.2 kA); 500 ft of 6 AWG copper in steel conduit, 90 °C insulation.
+    DrawingBuilder b;
+    auto src = b.add(PartKind::Source, "U", {{"kv", 0.48}, {"fault_ka", 30.0}, {"x_over_r", 8.0}});
+    auto bus = b.add(PartKind::Bus, "SWBD", {{"volts", 480.0}, {"amps", 800.0}});
+    auto cb = b.add(PartKind::Breaker, "CB",
+                    {{"trip_a", 100.0}, {"interrupting_ka", 65.0}, {"inst_x", 10.0}});
+    auto c = b.add(PartKind::Cable, "C",
+                   {{"size", std::string("6 AWG")},
+                    {"length_ft", 500.0},
+                    {"raceway", std::string("steel")},
+                    {"insulation_c", 90.0}});
+    auto ld = b.add(PartKind::Load, "LD", {{"kva", 20.0}, {"volts", 480.0}});
+    b.wire(src, 0, bus, 0);
+    b.wire(bus, 0, cb, 0);
+    b.wire(cb, 1, c, 0);
+    b.wire(c, 1, ld, 0);
+    Drawing d = b.drawing();
+    // Independent series sum (IEC 60909-0 minimum: c_min 0.95 on the EMF and on the source
+    // impedance c·U²/S; cable resistance from NEC Chapter 9 Table 9 at 75 °C raised to 90 °C by
+    // 1 + 0.00323 × 15, Table 8 Note 2, from memory).
+    const auto* row = testTables().impedanceRow("6 AWG");
+    ASSERT_NE(row, nullptr);
+    ASSERT_TRUE(row->cuR[2]);
+    const double v = 480.0 / std::sqrt(3.0);
+    const std::complex<double> zSrc = 0.95 * std::polar(v / 30000.0, std::atan(8.0));
+    const std::complex<double> zCable(*row->cuR[2] * (1 + 0.00323 * 15) * 0.5, row->xlSteel * 0.5);
+    const double imin = 0.95 * v / std::abs(zSrc + zCable);
+    ASSERT_LT(imin, 1200.0); // the case is what the test is about
+    auto reach = [&](const Drawing& x) -> std::optional<Finding> {
+        for (const auto& f : checkDrawing(x, testTables()).findings)
+            if (f.ruleId == "curve.min_fault.reach")
+                return f;
+        return std::nullopt;
+    };
+    const auto f = reach(d);
+    ASSERT_TRUE(f);
+    EXPECT_NEAR(*f->computed, imin / 1000.0, imin / 1000.0 * 1e-6);
+    EXPECT_NEAR(*f->limit, 1.2, 1e-9);
+    EXPECT_EQ(f->parts, (std::vector<PartId>{cb, c}));
+    // Instantaneous at 5 × (clears from 600 A): reached.
+    ASSERT_FALSE(d.part(cb)->set("inst_x", 5.0));
+    EXPECT_FALSE(reach(d));
+    // A lower c_min (0.8) brings the least fault below 600 A again only if it scales so:
+    // 0.8 / 0.95 × imin.
+    d.settings.faultCMin = 0.8;
+    const double imin08 = 0.8 * v / std::abs(zSrc / 0.95 * 0.8 + zCable);
+    EXPECT_EQ(static_cast<bool>(reach(d)), imin08 < 600.0);
 }

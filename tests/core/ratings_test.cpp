@@ -33,8 +33,9 @@ std::set<std::string_view> declaredKeys(PartKind kind) {
                 BusRatings::kAfGapMm,   BusRatings::kAfWorkingMm, BusRatings::kAfHeightMm,
                 BusRatings::kAfWidthMm, BusRatings::kAfDepthMm};
     case PartKind::Breaker:
-        return with({BreakerRatings::kTripType, BreakerRatings::kFrameA, BreakerRatings::kTripA,
-                     BreakerRatings::kInstX, BreakerRatings::kLtPickupX, BreakerRatings::kLtDelayS,
+        return with({BreakerRatings::kTripType, BreakerRatings::kConstruction,
+                     BreakerRatings::kFrameA, BreakerRatings::kTripA, BreakerRatings::kInstX,
+                     BreakerRatings::kLtPickupX, BreakerRatings::kLtDelayS,
                      BreakerRatings::kStPickupX, BreakerRatings::kStDelayS, BreakerRatings::kStI2t,
                      BreakerRatings::kOpen});
     case PartKind::InstBreaker:
@@ -49,9 +50,9 @@ std::set<std::string_view> declaredKeys(PartKind kind) {
     case PartKind::Contactor:
         return {ContactorRatings::kNemaSize, ContactorRatings::kAc3A, ContactorRatings::kOpen};
     case PartKind::Overload:
-        return {OverloadRatings::kSettingA, OverloadRatings::kRangeMinA,
-                OverloadRatings::kRangeMaxA, OverloadRatings::kTripClass,
-                OverloadRatings::kCurvePoints};
+        return {OverloadRatings::kSettingA,      OverloadRatings::kRangeMinA,
+                OverloadRatings::kRangeMaxA,     OverloadRatings::kTripClass,
+                OverloadRatings::kUltimateTripX, OverloadRatings::kCurvePoints};
     case PartKind::Cable:
         return {CableRatings::kMaterial,     CableRatings::kSize,        CableRatings::kSets,
                 CableRatings::kLengthFt,     CableRatings::kInsulationC, CableRatings::kRaceway,

@@ -119,19 +119,38 @@ TEST(BranchRules, MissingShortCircuitDevice) {
 }
 
 TEST(BranchRules, OverloadSettingLimits) {
-    Drawing d = smallLineup(); // FLA 32 A, SF 1.15 default → 125 % = 40 A, 140 % = 44.8 A
-    set(d, 7, "setting_a", 40.0);
+    // NEC 430.32(A)(1) limits the current at which the relay trips: FLA 32 A, SF 1.15 default →
+    // 125 % = 40 A, 430.32(C) 140 % = 44.8 A. The relay surely trips above its ultimate trip
+    // multiple (default 1.15 ×, common practice) of the setting, so the dial may go to
+    // 40 / 1.15 = 34.78 A.
+    Drawing d = smallLineup();
+    set(d, 7, "setting_a", 34.7);
     EXPECT_TRUE(findings(d, "branch.overload.setting").empty());
-    set(d, 7, "setting_a", 42.0);
-    EXPECT_EQ(findings(d, "branch.overload.exception").size(), 1u);
-    set(d, 7, "setting_a", 45.0);
+    EXPECT_TRUE(findings(d, "branch.overload.exception").empty());
+    set(d, 7, "setting_a", 36.0); // trips at 41.4 A: between 40 and 44.8
+    auto c = findings(d, "branch.overload.exception");
+    ASSERT_EQ(c.size(), 1u);
+    EXPECT_NEAR(*c[0].computed, 41.4, 1e-9);
+    set(d, 7, "setting_a", 40.0); // the dial at 125 % trips at 46 A: a violation
     auto f = findings(d, "branch.overload.setting");
     ASSERT_EQ(f.size(), 1u);
+    EXPECT_NEAR(*f[0].computed, 46.0, 1e-9);
+    EXPECT_DOUBLE_EQ(*f[0].limit, 40.0);
     applyFix(d, f[0]);
-    EXPECT_DOUBLE_EQ(*d.part(PartId(7))->number("setting_a"), 40);
-    // SF 1.0 and no marked rise: 115 % = 36.8 A (NEC 430.32(A)(1))
+    EXPECT_DOUBLE_EQ(*d.part(PartId(7))->number("setting_a"), 34.7); // ⌊40 / 1.15⌋ to 0.1 A
+    EXPECT_TRUE(findings(d, "branch.overload.setting").empty());
+    // A relay whose data says it trips by 1.25 × is judged on that: 34.7 × 1.25 = 43.4 A.
+    set(d, 7, "ultimate_trip_x", 1.25);
+    EXPECT_EQ(findings(d, "branch.overload.exception").size(), 1u);
+    set(d, 7, "ultimate_trip_x", 1.15);
+    // SF 1.0 and no marked rise: 115 % = 36.8 A (NEC 430.32(A)(1)); 34.7 × 1.15 = 39.9 A is
+    // within 430.32(C)'s 130 % = 41.6 A.
     set(d, 9, "sf", 1.0);
     EXPECT_EQ(findings(d, "branch.overload.exception").size(), 1u);
+    // Set at the nameplate current, 32 × 1.15 = 36.8 A: exactly the limit, compliant.
+    set(d, 7, "setting_a", 32.0);
+    EXPECT_TRUE(findings(d, "branch.overload.exception").empty());
+    EXPECT_TRUE(findings(d, "branch.overload.setting").empty());
     d.part(PartId(9))->values[*fieldIndex(PartKind::Motor, "fla")] = FieldValue{};
     EXPECT_EQ(findings(d, "branch.overload.no_fla").size(), 1u);
 }
