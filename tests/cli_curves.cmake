@@ -31,16 +31,16 @@ if(NOT rc EQUAL 0 OR NOT EXISTS ${OUT}/export/review.pdf OR NOT EXISTS ${OUT}/ex
   message(FATAL_ERROR "export failed (${rc}): ${out} ${err}")
 endif()
 # Revision flags: the issued revision against the colleague's earlier layout flags each part
-# added or changed since (22: 1 added, 21 changed, as `compare` lists them), and the revision
+# added or changed since (23: 1 added, 22 changed, as `compare` lists them), and the revision
 # table says so on the one-line sheet; a previous revision that cannot be read exits 2.
 execute_process(COMMAND ${CLI} export ${SAMPLES}/kestrel-mill-mcc1.lineward --pdf ${OUT}/export/revised.pdf
                         --since ${SAMPLES}/kestrel-mill-mcc1-review.lineward
                 RESULT_VARIABLE rc OUTPUT_VARIABLE out ERROR_VARIABLE err)
-if(NOT rc EQUAL 0 OR NOT out MATCHES "22 part\\(s\\) flagged as revised")
+if(NOT rc EQUAL 0 OR NOT out MATCHES "23 part\\(s\\) flagged as revised")
   message(FATAL_ERROR "export --since: (${rc}) ${out} ${err}")
 endif()
 execute_process(COMMAND pdftotext -f 1 -l 1 ${OUT}/export/revised.pdf - OUTPUT_VARIABLE page1 RESULT_VARIABLE rc)
-if(NOT rc EQUAL 0 OR NOT page1 MATCHES "FLAG B: 22 PARTS")
+if(NOT rc EQUAL 0 OR NOT page1 MATCHES "FLAG B: 23 PARTS")
   message(FATAL_ERROR "the one-line sheet lacks the revision flags' line:\n${page1}")
 endif()
 file(WRITE ${OUT}/export/broken.lineward "{\n  \"format\": \"lineward\",\n")
