@@ -191,13 +191,15 @@ std::shared_ptr<const Tables> loadTables(std::span<const tables::EmbeddedFile> f
             tb->flc1 = buildFlc(t);
         else if (t.name == "flc_3ph_sync")
             tb->flcSync = buildFlc(t);
+        else if (t.name == "lra_3ph")
+            tb->lra3 = buildFlc(t);
         else if (t.name == "scpd_pct")
             tb->scpd = buildScpd(t);
         else
             buildRest(*tb, t);
     }
     for (const char* needed :
-         {"flc_3ph", "flc_1ph", "flc_3ph_sync", "scpd_pct", "code_letters", "ampacity",
+         {"flc_3ph", "flc_1ph", "flc_3ph_sync", "lra_3ph", "scpd_pct", "code_letters", "ampacity",
           "ambient_correction", "conductor_adjustment", "standard_ratings", "small_conductor",
           "egc", "conductor_properties", "conductor_impedance", "transformer_protection",
           "nema_sizes", "trip_classes"})
