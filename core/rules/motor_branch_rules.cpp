@@ -52,6 +52,7 @@ void ratedDevice(BranchCheck& c, const Part& d, ScpdType type, const ScpdLimit& 
         f.unit = "A";
         f.trace.push_back({"running current", fmt(running) + " A (the larger of table FLC " +
                                                   fmt(c.flc.amps) + " A and nameplate FLA)"});
+        f.trace.push_back(scpdRowStep(*c.b.motor));
         f.trace.push_back({"Table 430.52(C)(1)", fmt(lim.pct, 0) + " % × " + fmt(c.flc.amps) +
                                                      " A = " + fmt(lim.rawA) + " A → " +
                                                      fmt(lim.maxA, 0) + " A (Exc. No. 1)"});
@@ -76,6 +77,7 @@ void ratedDevice(BranchCheck& c, const Part& d, ScpdType type, const ScpdLimit& 
     f.computed = rating;
     f.limit = withinExc && hard ? lim.excMaxA : lim.maxA;
     f.unit = "A";
+    f.trace.push_back(scpdRowStep(*c.b.motor));
     f.trace.push_back({"Table 430.52(C)(1)", fmt(lim.pct, 0) + " % × " + fmt(c.flc.amps) +
                                                  " A = " + fmt(lim.rawA) + " A"});
     f.trace.push_back({"next standard size (Exc. No. 1, 240.6(A))", fmt(lim.maxA, 0) + " A"});
@@ -108,6 +110,7 @@ void instantaneous(BranchCheck& c, const Part& d, const ScpdLimit& lim) {
         f.computed = setting;
         f.limit = allowed;
         f.unit = "A";
+        f.trace.push_back(scpdRowStep(*c.b.motor));
         f.trace.push_back({"Table 430.52(C)(1)", fmt(lim.pct, 0) + " % × " + fmt(c.flc.amps) +
                                                      " A = " + fmt(lim.maxA) + " A"});
         f.trace.insert(f.trace.end(), inrushTrace.begin(), inrushTrace.end());

@@ -30,6 +30,32 @@ MotorType motorTypeOf(const Part& motor) {
     return MotorType::SquirrelCage;
 }
 
+TraceStep scpdRowStep(const Part& motor) {
+    const auto m = MotorRatings::of(motor);
+    std::string row;
+    switch (motorTypeOf(motor)) {
+    case MotorType::SinglePhase:
+        row = "single-phase motors";
+        break;
+    case MotorType::SquirrelCage:
+        row = "AC polyphase squirrel cage, other than Design B premium efficiency";
+        break;
+    case MotorType::DesignBPremium:
+        row = m.design == "E" && !m.premiumEff
+                  ? "Design B premium efficiency — the motor is marked Design E, which the 2023 "
+                    "table has no row for; judged on the row written for high starting current"
+                  : "Design B premium efficiency";
+        break;
+    case MotorType::Synchronous:
+        row = "synchronous";
+        break;
+    case MotorType::WoundRotor:
+        row = "wound rotor";
+        break;
+    }
+    return {"Table 430.52(C)(1) row", row};
+}
+
 std::optional<MotorFlc> motorFlc(const Part& motor, const Tables& t, bool withTrace) {
     MotorFlc r;
     const auto m = MotorRatings::of(motor);
@@ -136,13 +162,28 @@ std::optional<double> lockedRotorA(const Part& motor, const Tables& t,
         return *lra;
     }
     const auto& letter = m.codeLetter;
-    if (!letter || letter->empty())
-        return std::nullopt;
-    auto kvaHp = t.codeLetterKvaPerHp((*letter)[0]);
-    if (!kvaHp)
-        return std::nullopt;
     const double hp = motorHp(motor), v = m.volts;
     const bool one = m.phases == 1;
+    auto kvaHp = letter && !letter->empty() ? t.codeLetterKvaPerHp((*letter)[0]) : std::nullopt;
+    if (!kvaHp) {
+        // No code letter: a polyphase Design B, C or D induction motor takes the maximum of its
+        // design from Table 430.251(B) (the table's own use is selecting disconnects and
+        // controllers; its maximum errs on the side of a deeper starting dip).
+        const bool designBcd = m.design == "B" || m.design == "C" || m.design == "D";
+        if (one || !designBcd || m.rotor != Rotor::SquirrelCage)
+            return std::nullopt;
+        double column = 0;
+        const auto lra = t.maxLockedRotorA(hp, v, &column);
+        if (!lra)
+            return std::nullopt;
+        if (trace)
+            trace->push_back({"locked-rotor current",
+                              fmt(*lra, 1) + " A (Design " + m.design + ", " + fmt(hp, 2) +
+                                  " hp, " + fmt(column, 0) +
+                                  " V column of NEC Table 430.251(B), the design's maximum; no "
+                                  "code letter given)"});
+        return *lra;
+    }
     const double lra = *kvaHp * hp * 1000.0 / (one ? v : std::sqrt(3.0) * v);
     if (trace)
         trace->push_back({"locked-rotor current",

@@ -35,6 +35,9 @@ struct ScpdLimit {
     std::string excNote; ///< why the ceiling is not excPct × FLC, where it is not
 };
 ScpdLimit scpdLimit(ScpdType type, MotorType motor, double flc, const Tables& t);
+/// The row of Table 430.52(C)(1) a motor is judged on, in words, for a trace (a motor marked
+/// Design E, which the 2023 table has no row for, says so).
+TraceStep scpdRowStep(const Part& motor);
 std::optional<ScpdType> scpdTypeOf(const Part& device);
 
 /// Locked-rotor current: the given LRA, else from the code letter (upper end of its range).

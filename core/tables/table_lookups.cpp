@@ -29,9 +29,8 @@ int conductorColumn(int c) {
 
 } // namespace
 
-std::optional<double> Tables::flc(double hp, double ratedVolts, int phases, double* columnV,
-                                  bool synchronous) const {
-    const FlcTable& t = phases == 1 ? flc1 : synchronous ? flcSync : flc3;
+namespace {
+std::optional<double> hpLookup(const FlcTable& t, double hp, double ratedVolts, double* columnV) {
     auto col = columnFor(ratedVolts, t.volts);
     if (!col)
         return std::nullopt;
@@ -44,6 +43,17 @@ std::optional<double> Tables::flc(double hp, double ratedVolts, int phases, doub
             return t.amps[r][c];
         }
     return std::nullopt;
+}
+} // namespace
+
+std::optional<double> Tables::maxLockedRotorA(double hp, double ratedVolts, double* columnV) const {
+    return hpLookup(lra3, hp, ratedVolts, columnV);
+}
+
+std::optional<double> Tables::flc(double hp, double ratedVolts, int phases, double* columnV,
+                                  bool synchronous) const {
+    const FlcTable& t = phases == 1 ? flc1 : synchronous ? flcSync : flc3;
+    return hpLookup(t, hp, ratedVolts, columnV);
 }
 
 const ScpdRow& Tables::scpdRow(MotorType m) const {

@@ -295,6 +295,8 @@ std::shared_ptr<const Tables> loadTables(std::span<const tables::EmbeddedFile> f
             tb->flc1 = buildFlc(t);
         else if (t.name == "flc_3ph_sync")
             tb->flcSync = buildFlc(t);
+        else if (t.name == "lra_3ph")
+            tb->lra3 = buildFlc(t);
         else if (t.name == "scpd_pct")
             tb->scpd = buildScpd(t);
         else
@@ -303,6 +305,7 @@ std::shared_ptr<const Tables> loadTables(std::span<const tables::EmbeddedFile> f
     for (const char* needed : {"flc_3ph",
                                "flc_1ph",
                                "flc_3ph_sync",
+                               "lra_3ph",
                                "scpd_pct",
                                "code_letters",
                                "ampacity",

@@ -109,6 +109,7 @@ struct TransformerProtectionRow {
 struct Tables {
     FlcTable flc3, flc1;
     FlcTable flcSync; ///< three-phase synchronous motors, unity power factor
+    FlcTable lra3;    ///< Table 430.251(B): Design B, C and D maximum locked-rotor current
     std::vector<ScpdRow> scpd;
     std::vector<std::pair<char, std::array<double, 2>>> codeLetters; ///< letter -> kVA/hp min, max
     std::vector<AmpacityRow> ampacity;
@@ -133,6 +134,10 @@ struct Tables {
     /// `synchronous`: the three-phase synchronous (unity power factor) columns.
     std::optional<double> flc(double hp, double ratedVolts, int phases, double* columnV = nullptr,
                               bool synchronous = false) const;
+    /// Table 430.251(B) maximum locked-rotor current of a polyphase Design B, C or D motor;
+    /// `columnV` receives the table column used.
+    std::optional<double> maxLockedRotorA(double hp, double ratedVolts,
+                                          double* columnV = nullptr) const;
     const ScpdRow& scpdRow(MotorType m) const;
     /// kVA/hp (upper bound of the letter's range); nothing for an unknown letter.
     std::optional<double> codeLetterKvaPerHp(char letter) const;

@@ -468,3 +468,27 @@ INSTANTIATE_TEST_SUITE_P(SeveralMotors, ProposalChecksClean,
                                            ProposalCase{75, 460, ScpdType::InverseTimeBreaker},
                                            ProposalCase{150, 460, ScpdType::TimeDelayFuse},
                                            ProposalCase{40, 575, ScpdType::InstantaneousBreaker}));
+
+TEST(BranchRules, ADesignEMotorIsJudgedOnThePremiumRowAndTheTraceSaysSo) {
+    // NEC 2023 Table 430.52(C)(1) has no Design E row (from memory): the trace names the row
+    // used. 25 hp, 460 V: FLC 34 A (Table 430.250); a 150 A inverse-time breaker is above
+    // 250 % × 34 = 85 A → 90 A on either row.
+    Drawing d = smallLineup();
+    set(d, 9, "design", std::string("E"));
+    set(d, 5, "trip_a", 150.0);
+    auto f = findings(d, "branch.scpd.rating");
+    ASSERT_EQ(f.size(), 1u);
+    const auto row = std::find_if(f[0].trace.begin(), f[0].trace.end(), [](const TraceStep& s) {
+        return s.name == "Table 430.52(C)(1) row";
+    });
+    ASSERT_NE(row, f[0].trace.end());
+    EXPECT_NE(row->value.find("marked Design E"), std::string::npos) << row->value;
+    set(d, 9, "design", std::string("B"));
+    f = findings(d, "branch.scpd.rating");
+    ASSERT_EQ(f.size(), 1u);
+    const auto rowB = std::find_if(f[0].trace.begin(), f[0].trace.end(), [](const TraceStep& s) {
+        return s.name == "Table 430.52(C)(1) row";
+    });
+    ASSERT_NE(rowB, f[0].trace.end());
+    EXPECT_EQ(rowB->value, "AC polyphase squirrel cage, other than Design B premium efficiency");
+}

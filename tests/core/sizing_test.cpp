@@ -139,6 +139,30 @@ TEST(Sizing, LockedRotorCurrentFromCodeLetter) {
     EXPECT_DOUBLE_EQ(*lockedRotorA(given, testTables(), nullptr), 210);
 }
 
+TEST(Sizing, LockedRotorCurrentFromTheDesignLetterTable) {
+    // No code letter: a Design B 25 hp motor at 460 V takes Table 430.251(B)'s 183 A (NEC,
+    // as the 2008 edition prints it), at 200 V 420 A; 7.5 hp at 575 V 50.8 A.
+    std::vector<TraceStep> trace;
+    EXPECT_DOUBLE_EQ(*lockedRotorA(motor(25, 460), testTables(), &trace), 183);
+    ASSERT_FALSE(trace.empty());
+    EXPECT_NE(trace.back().value.find("Table 430.251(B)"), std::string::npos);
+    EXPECT_DOUBLE_EQ(*lockedRotorA(motor(25, 200), testTables(), nullptr), 420);
+    EXPECT_DOUBLE_EQ(*lockedRotorA(motor(7.5, 575), testTables(), nullptr), 50.8);
+    const auto viaStudies = lockedRotor(motor(25, 460), testTables(), nullptr);
+    ASSERT_TRUE(viaStudies);
+    EXPECT_FALSE(viaStudies->assumed);
+    // A Design A motor is not limited by the table: the assumed 6 × FLC (34 A) remains.
+    const auto a =
+        lockedRotor(motor(25, 460, {{"design", std::string("A")}}), testTables(), nullptr);
+    ASSERT_TRUE(a);
+    EXPECT_TRUE(a->assumed);
+    EXPECT_DOUBLE_EQ(a->amps, 6 * 34);
+    // A code letter on the nameplate is the motor's own and comes first.
+    EXPECT_NEAR(
+        *lockedRotorA(motor(25, 460, {{"code_letter", std::string("G")}}), testTables(), nullptr),
+        197.4, 0.1);
+}
+
 TEST(Sizing, ProportionalEgcIncrease) {
     // NEC 2023 250.122(B) with Chapter 9 Table 8 areas: phase 6 AWG (26,240 cmil) instead of
     // the minimum 8 AWG (16,510): ratio 1.589 × 10 AWG (10,380 cmil) = 16,497 cmil → 8 AWG.

@@ -502,6 +502,8 @@ TEST(OneAssumption, StudyAndCurvesAssumeTheSameLockedRotorCurrent) {
     ASSERT_NE(motor, nullptr);
     ASSERT_FALSE(motor->set("lra", FieldValue{}));
     ASSERT_FALSE(motor->set("code_letter", FieldValue{}));
+    // Design A: Table 430.251(B) covers only Designs B, C and D, so nothing states the current.
+    ASSERT_FALSE(motor->set("design", std::string("A")));
     const auto flc = motorFlc(*motor, testTables(), false);
     ASSERT_TRUE(flc);
     ASSERT_FALSE(motor->set("fla", 0.85 * flc->amps));

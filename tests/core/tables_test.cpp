@@ -171,7 +171,7 @@ TEST(Tables, ConductorPropertiesImpedanceTransformerNemaTripClasses) {
 TEST(Tables, EveryTableNamesItsSource) {
     for (const auto& [name, source] : testTables().sources)
         EXPECT_FALSE(source.empty()) << name;
-    EXPECT_EQ(testTables().sources.size(), 21u);
+    EXPECT_EQ(testTables().sources.size(), 22u);
 }
 
 TEST(Tables, MalformedTablesStopWithFileAndLine) {
