@@ -103,9 +103,10 @@ FeederSize sizeFeeder(const BucketPlan& plan, const Tables& t, double volts,
     basis.push_back(
         {"motor load (430.24)",
          "1.25 × " + fmt(largest) + " A + " + fmt(sum - largest) + " A = " + fmt(f.needA) + " A"});
-    basis.push_back(
-        {"main breaker (430.62(A))", "largest branch device + other FLCs = " + fmt(f.limitA) +
-                                         " A at most → " + fmt(f.tripA, 0) + " A"});
+    basis.push_back({"main breaker", "at least the " + fmt(f.needA) + " A load, at most " +
+                                         fmt(f.limitA) +
+                                         " A (430.62(A): largest branch device + other FLCs) → " +
+                                         fmt(f.tripA, 0) + " A"});
     const double perKva = 1000.0 / (std::sqrt(3.0) * volts);
     for (double kva : kTxKva) {
         const double is = kva * perKva;
@@ -119,7 +120,8 @@ FeederSize sizeFeeder(const BucketPlan& plan, const Tables& t, double volts,
                                  "5000 kVA; split the list over more than one lineup");
     basis.push_back({"transformer", fmt(f.kva, 1) + " kVA: rated secondary " + fmt(f.kva * perKva) +
                                         " A ≥ " + fmt(f.needA) +
-                                        " A; main at most 125 % of it (Table 450.3(B))"});
+                                        " A; the main at most 125 % of it (secondary protection of "
+                                        "Table 450.3(A), or 450.3(B) at 1000 V and less)"});
     f.busA = firstAtOrAbove(kMccBusA, std::max(f.needA, f.tripA)).value_or(0);
     if (f.busA == 0)
         throw std::runtime_error("the load needs an MCC bus above 3000 A");
@@ -189,7 +191,9 @@ Lineup buildLineup(const std::vector<LoadRow>& rows, const LineupOptions& o, con
                                            "contribution) → bracing, interrupting ratings and "
                                            "bucket SCCR " +
                                            fmt(*duty, 0) + " kA"});
-    out.notes.push_back("TX-1 impedance " + fmt(kAssumedTxZPct) + " % and X/R " +
+    out.notes.push_back("TX-1 primary protection (Table 450.3(A) above 1000 V) is not drawn; "
+                        "add the service's primary fuses or breaker");
+    out.notes.push_back("TX-1 impedance " + fmt(kAssumedTxZPct, 2) + " % and X/R " +
                         fmt(kAssumedTxXr) + " are assumed; enter the nameplate values");
     return out;
 }
