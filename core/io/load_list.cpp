@@ -171,7 +171,7 @@ bool setMotorNumber(Part& motor, const RowReader& r, const char* column, std::st
     if (!v)
         return false;
     if (auto err = motor.set(key, *v)) {
-        r.fail(bad, column, std::string(column) + ": " + *err);
+        r.fail(bad, column, *err); // the field check names the field
         return false;
     }
     return true;

@@ -2,11 +2,7 @@
 // sized around them (NEC 2023 430.24, 430.62(A), 450.3) and its fault duty read from the check.
 #include "lineup/lineup_builder.h"
 
-#include "check/check.h"
 #include "model/ratings.h"
-#include "studies/study.h"
-#include "topology/flow.h"
-#include "topology/network.h"
 
 #include <algorithm>
 #include <cmath>
@@ -22,12 +18,6 @@ constexpr double kFrames[] = {100,  150,  225,  250,  400,  600, 800,
                               1200, 1600, 2000, 2500, 3000, 4000};
 constexpr double kMcpAmps[] = {3, 7, 15, 30, 50, 100, 150, 250, 400, 600, 800, 1200};
 constexpr double kSwitchAmps[] = {30, 60, 100, 200, 400, 600, 800, 1200};
-// Three-phase transformer ratings, kVA (IEEE C57.12.00 preferred ratings, from memory).
-constexpr double kTxKva[] = {45,   75,   112.5, 150,  225,  300,  500, 750,
-                             1000, 1500, 2000,  2500, 3000, 3750, 5000};
-// MCC horizontal bus ratings and bracing (common practice, from memory).
-constexpr double kMccBusA[] = {600, 800, 1000, 1200, 1600, 2000, 2500, 3000};
-constexpr double kDutyKa[] = {42, 65, 85, 100, 150, 200};
 // Bucket layout on the Sheet, as the samples draw it (grid units below the bus).
 constexpr double kPitchX = 110, kDeviceDy = 70, kFuseDy = 115, kContactorDy = 160,
                  kOverloadDy = 210, kCableDy = 260, kMotorDy = 320;

@@ -15,6 +15,8 @@
 
 namespace lineward {
 
+struct CheckResult;
+
 /// One row's bucket: the proposal it was sized from and the parts, wires and bucket to add.
 struct PlannedBucket {
     int line = 0; ///< the load list's line
@@ -40,6 +42,14 @@ struct BucketPlan {
 /// interrupting rating and bucket SCCR given to the new devices.
 BucketPlan planBuckets(const Drawing& d, PartId bus, const std::vector<LoadRow>& rows,
                        double interruptingKa, const Tables& t);
+
+/// Standard duty ratings (kA) for bus bracing, breaker interrupting ratings and bucket SCCR
+/// (common practice, from memory).
+inline constexpr double kDutyKa[] = {42, 65, 85, 100, 150, 200};
+
+/// The duty new buckets on `bus` need: the next of kDutyKa at or above the bus's available
+/// fault in the check; nothing when the check has no fault there or it is above 200 kA.
+std::optional<double> bucketDutyKa(const CheckResult& r, PartId bus);
 
 /// Choices of `lineward-cli new`.
 struct LineupOptions {

@@ -20,7 +20,6 @@ constexpr double kFrames[] = {100,  150,  225,  250,  400,  600, 800,
 constexpr double kTxKva[] = {45,   75,   112.5, 150,  225,  300,  500, 750,
                              1000, 1500, 2000,  2500, 3000, 3750, 5000};
 constexpr double kMccBusA[] = {600, 800, 1000, 1200, 1600, 2000, 2500, 3000};
-constexpr double kDutyKa[] = {42, 65, 85, 100, 150, 200};
 constexpr double kServiceY = -80, kTxY = 0, kMainY = 80, kBusY = 150;
 /// Interrupting rating used while the fault duty is not yet known (replaced after the check).
 constexpr double kProvisionalKa = 65;
@@ -160,6 +159,15 @@ void applyDuty(Drawing& d, double kA) {
 }
 
 } // namespace
+
+std::optional<double> bucketDutyKa(const CheckResult& r, PartId bus) {
+    if (!r.study || !r.net || !r.drawing->part(bus))
+        return std::nullopt;
+    const auto* f = r.study->faultAtNode(r.net->nodeOf(bus, 0));
+    if (!f)
+        return std::nullopt;
+    return firstAtOrAbove(kDutyKa, f->ikKa);
+}
 
 Lineup buildLineup(const std::vector<LoadRow>& rows, const LineupOptions& o, const Tables& t) {
     Lineup out;
