@@ -106,6 +106,8 @@ void MainWindow::buildFileMenu() {
     file->addSeparator();
     menuAction(file, tr("&Title Block…"), QKeySequence(), this, [this] { editTitleBlock(); });
     file->addSeparator();
+    menuAction(file, tr("Import &Load List…"), QKeySequence(tr("Ctrl+Shift+L")), this,
+               [this] { importLoadList(); });
     addCompareActions(file);
     file->addSeparator();
     menuAction(file, tr("Print Pre&view…"), QKeySequence(), this, [this] { printPreview(); });
