@@ -39,7 +39,7 @@ void put(Part& p, const std::vector<std::pair<std::string_view, FieldValue>>& va
 // Service, transformer, main breaker and bus with provisional ratings; ids 1–4.
 Drawing skeleton(const LineupOptions& o) {
     Drawing d;
-    d.sheet.title = "MCC-1 one-line";
+    d.sheet.title = "MCC-1 lineup";
     Part src = Part::make(PartKind::Source, PartId(1), "UTIL-1");
     put(src, {{SourceRatings::kKv, o.serviceKv},
               {SourceRatings::kFaultMva, o.serviceMva},
