@@ -107,3 +107,51 @@ TEST(LineupBuilder, BucketsForAnExistingBusGoRightOfItsBuckets) {
     EXPECT_EQ(checkDrawing(after, testTables()).openCounts[2], 0)
         << violations(checkDrawing(after, testTables()));
 }
+
+TEST(LineupBuilder, ImportOntoTheSameBusGivesTheSameBuckets) {
+    // The window's Import (planBuckets onto a bus) and `lineward-cli new` (buildLineup) share one
+    // function: importing the list onto the new lineup's empty bus gives the same parts, wires
+    // and buckets.
+    const auto list = sampleList();
+    const auto lineup = buildLineup(list.rows, {}, testTables());
+    Drawing empty = lineup.drawing;
+    std::vector<PartId> bucketParts;
+    for (const auto& p : lineup.drawing.parts())
+        if (p.id.value > 4)
+            bucketParts.push_back(p.id);
+    empty.removeParts(bucketParts);
+    for (const auto& b : lineup.drawing.buckets())
+        empty.removeBucket(b.id);
+    const Part* bus = empty.partByTag("MCC-1");
+    ASSERT_NE(bus, nullptr);
+    const double duty = *lineup.drawing.buckets().front().sccrKa;
+    const auto plan = planBuckets(empty, bus->id, list.rows, duty, testTables());
+    Drawing imported = empty;
+    imported.addParts(plan.allParts());
+    imported.addWires(plan.allWires());
+    imported.addBuckets(plan.allBuckets());
+    // Ids differ (a drawing never reuses a removed part's id); everything else is equal.
+    auto sameButId = [](Part a, Part b) {
+        a.id = b.id;
+        return a == b;
+    };
+    for (const auto& p : lineup.drawing.parts()) {
+        const Part* q = imported.partByTag(p.tag);
+        ASSERT_NE(q, nullptr) << p.tag;
+        EXPECT_TRUE(sameButId(*q, p)) << p.tag;
+    }
+    auto tagsOf = [](const Drawing& d, const Bucket& b) {
+        std::vector<std::string> tags;
+        for (PartId id : b.parts)
+            tags.push_back(d.part(id)->tag);
+        return tags;
+    };
+    ASSERT_EQ(imported.buckets().size(), lineup.drawing.buckets().size());
+    for (std::size_t i = 0; i < imported.buckets().size(); ++i) {
+        const Bucket &a = imported.buckets()[i], &b = lineup.drawing.buckets()[i];
+        EXPECT_EQ(a.tag, b.tag);
+        EXPECT_EQ(a.sccrKa, b.sccrKa);
+        EXPECT_EQ(tagsOf(imported, a), tagsOf(lineup.drawing, b));
+    }
+    EXPECT_EQ(imported.wires().size(), lineup.drawing.wires().size());
+}
