@@ -185,6 +185,7 @@ std::optional<LoadRow> readRow(const RowReader& r, int line, LoadListIssue& bad)
         return std::nullopt;
     }
     row.motor = Part::make(PartKind::Motor, PartId(1), *r.text("tag"));
+    row.tagColumn = r.column("tag");
     if (r.given("description"))
         row.description = *r.text("description");
     const bool hp = r.given("hp"), kw = r.given("kw");

@@ -22,6 +22,7 @@ std::string_view loadStarterKey(LoadStarter s);
 /// One accepted row: the motor (validated as a motor in a drawing is) and the bucket's choices.
 struct LoadRow {
     int line = 0;            ///< 1-based line of the row in the file
+    int tagColumn = 1;       ///< 1-based column of the tag cell (where a tag clash is reported)
     std::string description; ///< free text, never interpreted
     Part motor;              ///< tag, hp or kW, volts, phases and FLA set; other ratings default
     LoadProtection protection = LoadProtection::Breaker;

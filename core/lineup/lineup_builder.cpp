@@ -6,6 +6,7 @@
 
 #include <algorithm>
 #include <cmath>
+#include <set>
 #include <stdexcept>
 
 namespace lineward {
@@ -177,6 +178,18 @@ std::string bucketTag(const Drawing& d, const Part& bus, int& n) {
     return t;
 }
 
+// Why a bucket's tags cannot be used: one is in the drawing or in an earlier row's bucket.
+std::optional<std::string> tagClash(const Drawing& d, const std::set<std::string>& planned,
+                                    const std::vector<Part>& parts) {
+    for (const auto& p : parts) {
+        if (d.partByTag(p.tag))
+            return "tag '" + p.tag + "' is already used in the drawing";
+        if (planned.count(p.tag))
+            return "tag '" + p.tag + "' is already used by an earlier row's bucket";
+    }
+    return std::nullopt;
+}
+
 } // namespace
 
 std::vector<Part> BucketPlan::allParts() const {
@@ -210,12 +223,8 @@ BucketPlan planBuckets(const Drawing& d, PartId busId, const std::vector<LoadRow
     std::uint32_t bucketId = d.nextBucketId().value;
     double x = firstBucketX(d, *bus, rows.size());
     int bucketNo = static_cast<int>(d.buckets().size());
+    std::set<std::string> planned; // tags of the buckets planned so far
     for (const auto& row : rows) {
-        if (d.partByTag(row.motor.tag)) {
-            plan.refused.push_back(
-                {row.line, 1, "tag '" + row.motor.tag + "' is already used in the drawing"});
-            continue;
-        }
         SizeOptions o;
         o.device = deviceFor(row.protection);
         o.ambientC = d.settings.ambientC;
@@ -228,9 +237,17 @@ BucketPlan planBuckets(const Drawing& d, PartId busId, const std::vector<LoadRow
         }
         PlannedBucket b;
         b.line = row.line;
-        b.parts = scpdParts(row, *p, interruptingKa, ids, x, bus->y);
-        auto rest = starterParts(row, *p, ids, x, bus->y);
+        IdSource trial = ids; // ids are taken only when the row is kept
+        b.parts = scpdParts(row, *p, interruptingKa, trial, x, bus->y);
+        auto rest = starterParts(row, *p, trial, x, bus->y);
         b.parts.insert(b.parts.end(), rest.begin(), rest.end());
+        if (auto why = tagClash(d, planned, b.parts)) {
+            plan.refused.push_back({row.line, row.tagColumn, *why});
+            continue;
+        }
+        ids = trial;
+        for (const auto& part : b.parts)
+            planned.insert(part.tag);
         b.wires.push_back({ids.nextWire(), {bus->id, 0}, {b.parts.front().id, 0}});
         for (std::size_t i = 0; i + 1 < b.parts.size(); ++i)
             b.wires.push_back({ids.nextWire(), {b.parts[i].id, 1}, {b.parts[i + 1].id, 0}});

@@ -155,3 +155,15 @@ TEST(LineupBuilder, ImportOntoTheSameBusGivesTheSameBuckets) {
     }
     EXPECT_EQ(imported.wires().size(), lineup.drawing.wires().size());
 }
+
+TEST(LineupBuilder, ARowWhoseBucketTagsClashIsRefused) {
+    // "K-X" is the contactor tag of motor "X": the later row is refused, the earlier one kept.
+    const auto list = readLoadList("hp,tag,volts\n10,K-X,460\n10,X,460\n");
+    ASSERT_TRUE(list.ok());
+    const auto lineup = buildLineup(list.rows, {}, testTables());
+    ASSERT_EQ(lineup.refused.size(), 1u);
+    EXPECT_EQ(lineup.refused[0].line, 3);
+    EXPECT_EQ(lineup.refused[0].column, 4);
+    EXPECT_NE(lineup.refused[0].reason.find("'K-X'"), std::string::npos);
+    EXPECT_EQ(lineup.drawing.buckets().size(), 1u);
+}
