@@ -221,6 +221,7 @@ void MainWindow::buildEditMenu() {
                [this] { rotateSelection(); });
     menuAction(edit, tr("&Group as Bucket"), QKeySequence(tr("Ctrl+G")), this,
                [this] { groupSelectionAsBucket(); });
+    menuAction(edit, tr("Add &Bucket…"), QKeySequence(tr("Ctrl+B")), this, [this] { addBucket(); });
     menuAction(edit, tr("Cancel Placing"), QKeySequence::Cancel, this,
                [this] { m_view->setPlaceKind(std::nullopt); });
 }

@@ -366,6 +366,18 @@ LoadList readLoadList(std::string_view text) {
     return out;
 }
 
+std::optional<LoadRow> loadRowFrom(const std::vector<std::pair<std::string, std::string>>& cells,
+                                   LoadListIssue& bad) {
+    Columns cols;
+    std::vector<Cell> row;
+    for (const auto& [name, text] : cells) {
+        cols.index.emplace(lower(name), row.size());
+        row.push_back({trim(text), static_cast<int>(row.size()) + 1});
+    }
+    bad = {};
+    return readRow(RowReader(cols, row, static_cast<int>(row.size()) + 1), 0, bad);
+}
+
 std::string locatedIssue(std::string_view file, const LoadListIssue& issue) {
     return std::string(file) + ":" + std::to_string(issue.line) + ":" +
            std::to_string(issue.column) + ": " + issue.reason;

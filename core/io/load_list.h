@@ -4,6 +4,7 @@
 
 #include "model/part.h"
 
+#include <optional>
 #include <string>
 #include <string_view>
 #include <vector>
@@ -54,6 +55,12 @@ struct LoadList {
 /// Reads a load list. Never throws on bad text: every problem becomes a refused entry with its
 /// line and column. An empty list (no rows) is refused at line 1.
 LoadList readLoadList(std::string_view text);
+
+/// One row from named cells (column name → text, as a load list's header names them): the
+/// same checks and defaults as a row of a file, for a row typed into a form (Add Bucket).
+/// Returns the reason in `bad` (its line 0) when refused.
+std::optional<LoadRow> loadRowFrom(const std::vector<std::pair<std::string, std::string>>& cells,
+                                   LoadListIssue& bad);
 
 /// "file:line:column: reason", the located message the command line prints.
 std::string locatedIssue(std::string_view file, const LoadListIssue& issue);

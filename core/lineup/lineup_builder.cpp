@@ -266,3 +266,72 @@ BucketPlan planBuckets(const Drawing& d, PartId busId, const std::vector<LoadRow
 }
 
 } // namespace lineward
+
+namespace lineward {
+
+namespace {
+
+ProposalLine deviceLine(const Part& p, const BucketProposal& b) {
+    switch (p.kind) {
+    case PartKind::Breaker:
+        return {p.tag, "inverse-time breaker " + fmt(b.deviceRatingA, 0) + " A",
+                "largest rating NEC 2023 Table 430.52(C)(1) permits, next standard rating of "
+                "240.6(A) (430.52(C)(1) Exception No. 1)"};
+    case PartKind::InstBreaker:
+        return {p.tag, "instantaneous setting " + fmt(b.deviceRatingA, 0) + " A",
+                "lowest setting above the asymmetrical inrush (common practice), within the "
+                "430.52(C)(3) limit"};
+    case PartKind::Disconnect:
+        return {p.tag, "fused switch " + fmt(DisconnectRatings::of(p).amps, 0) + " A",
+                "at least 115 % of the FLC (" + fmt(b.disconnectMinA) +
+                    " A, 430.110(A)) and the fuses; hp rating at least the motor's (430.109)"};
+    case PartKind::Fuse:
+        return {p.tag, "time-delay fuses " + fmt(b.deviceRatingA, 0) + " A",
+                "largest rating NEC 2023 Table 430.52(C)(1) permits, next standard fuse rating"};
+    default:
+        return {p.tag, "", ""};
+    }
+}
+
+} // namespace
+
+std::vector<ProposalLine> describeBucket(const PlannedBucket& b) {
+    const BucketProposal& p = b.proposal;
+    std::vector<ProposalLine> out;
+    for (const auto& part : b.parts) {
+        switch (part.kind) {
+        case PartKind::Contactor:
+            out.push_back({part.tag,
+                           "NEMA size " + (p.nemaSize.empty() ? "(none fits)" : p.nemaSize),
+                           "smallest size rated for the hp and current (NEMA ICS 2 Table 2-4-1)"});
+            break;
+        case PartKind::Overload:
+            out.push_back(
+                {part.tag, "set " + fmt(p.overloadSettingA) + " A, class " + p.tripClass,
+                 (p.overloadMaxA
+                      ? "nameplate FLA, at most " + fmt(*p.overloadMaxA) + " A (430.32(A)(1)); "
+                      : std::string("no nameplate FLA: set at the FLC; "
+                                    "enter the FLA (430.6(A)(2)); ")) +
+                     "class that outlasts the acceleration time (IEC 60947-4-1 Table 3)"});
+            break;
+        case PartKind::Cable:
+            out.push_back(
+                {part.tag,
+                 p.conductorSize + " Cu" + (p.egcSize.empty() ? "" : ", EGC " + p.egcSize),
+                 "125 % of FLC = " + fmt(p.conductorMinA) + " A (430.22), Table 310.16 at " +
+                     std::to_string(p.terminationC) +
+                     " °C terminations (110.14(C)); EGC Table 250.122"});
+            break;
+        case PartKind::Motor:
+            out.push_back({part.tag, "FLC " + fmt(p.flc.amps) + " A",
+                           p.flc.fromTable ? "NEC 2023 Table 430.250 (430.6(A)(1))"
+                                           : "nameplate: the table has no row (430.6(A)(1))"});
+            break;
+        default:
+            out.push_back(deviceLine(part, p));
+        }
+    }
+    return out;
+}
+
+} // namespace lineward

@@ -27,6 +27,13 @@ struct PlannedBucket {
     std::vector<std::string> notes; ///< what the bucket lacks (soft starter and drive rows)
 };
 
+/// One line of a proposed bucket as a designer reads it: the part, its rating or setting, and
+/// the clause or table that set it.
+struct ProposalLine {
+    std::string tag, value, basis;
+};
+std::vector<ProposalLine> describeBucket(const PlannedBucket& b);
+
 /// Buckets for a bus, ready to add as one edit; rows that could not be sized are refused.
 struct BucketPlan {
     std::vector<PlannedBucket> buckets;
