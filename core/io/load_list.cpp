@@ -177,6 +177,48 @@ bool setMotorNumber(Part& motor, const RowReader& r, const char* column, std::st
     return true;
 }
 
+// The bucket's columns of a row: protection, starter and cable length, with their defaults.
+bool readBucketChoices(const RowReader& r, LoadRow& row, LoadListIssue& bad) {
+    if (r.given("protection")) {
+        auto p = choiceOf(
+            *r.text("protection"),
+            std::array{LoadProtection::Breaker, LoadProtection::InstBreaker, LoadProtection::Fuse},
+            loadProtectionKey);
+        if (!p) {
+            r.fail(bad, "protection",
+                   "protection: " + quoted(*r.text("protection")) +
+                       " is not one of breaker, inst_breaker, fuse");
+            return false;
+        }
+        row.protection = *p;
+    }
+    if (r.given("starter")) {
+        auto s = choiceOf(
+            *r.text("starter"),
+            std::array{LoadStarter::Fvnr, LoadStarter::Fvr, LoadStarter::Soft, LoadStarter::Vfd},
+            loadStarterKey);
+        if (!s) {
+            r.fail(bad, "starter",
+                   "starter: " + quoted(*r.text("starter")) +
+                       " is not one of fvnr, fvr, soft, vfd");
+            return false;
+        }
+        row.starter = *s;
+    }
+    row.lengthFt = kLoadListDefaultLengthFt;
+    if (r.given("length_ft")) {
+        auto v = r.number("length_ft", bad);
+        if (!v)
+            return false;
+        if (*v <= 0 || *v > 10000) {
+            r.fail(bad, "length_ft", "length_ft: must be above 0 and at most 10000 ft");
+            return false;
+        }
+        row.lengthFt = *v;
+    }
+    return true;
+}
+
 std::optional<LoadRow> readRow(const RowReader& r, int line, LoadListIssue& bad) {
     LoadRow row;
     row.line = line;
@@ -207,43 +249,8 @@ std::optional<LoadRow> readRow(const RowReader& r, int line, LoadListIssue& bad)
         return std::nullopt;
     if (r.given("fla") && !setMotorNumber(row.motor, r, "fla", MotorRatings::kFla, bad))
         return std::nullopt;
-    if (r.given("protection")) {
-        auto p = choiceOf(
-            *r.text("protection"),
-            std::array{LoadProtection::Breaker, LoadProtection::InstBreaker, LoadProtection::Fuse},
-            loadProtectionKey);
-        if (!p) {
-            r.fail(bad, "protection",
-                   "protection: " + quoted(*r.text("protection")) +
-                       " is not one of breaker, inst_breaker, fuse");
-            return std::nullopt;
-        }
-        row.protection = *p;
-    }
-    if (r.given("starter")) {
-        auto s = choiceOf(
-            *r.text("starter"),
-            std::array{LoadStarter::Fvnr, LoadStarter::Fvr, LoadStarter::Soft, LoadStarter::Vfd},
-            loadStarterKey);
-        if (!s) {
-            r.fail(bad, "starter",
-                   "starter: " + quoted(*r.text("starter")) +
-                       " is not one of fvnr, fvr, soft, vfd");
-            return std::nullopt;
-        }
-        row.starter = *s;
-    }
-    row.lengthFt = kLoadListDefaultLengthFt;
-    if (r.given("length_ft")) {
-        auto v = r.number("length_ft", bad);
-        if (!v)
-            return std::nullopt;
-        if (*v <= 0 || *v > 10000) {
-            r.fail(bad, "length_ft", "length_ft: must be above 0 and at most 10000 ft");
-            return std::nullopt;
-        }
-        row.lengthFt = *v;
-    }
+    if (!readBucketChoices(r, row, bad))
+        return std::nullopt;
     if (auto problems = validatePart(row.motor); !problems.empty()) {
         r.fail(bad, "tag", problems.front());
         return std::nullopt;

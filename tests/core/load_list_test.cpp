@@ -122,3 +122,16 @@ TEST(LoadList, SampleListIsReadWithoutRefusals) {
     EXPECT_EQ(l.rows.size(), 16u);
     EXPECT_TRUE(l.notes.empty());
 }
+
+TEST(LoadList, ARowTypedIntoAFormHasTheFileRowsChecksAndDefaults) {
+    LoadListIssue bad;
+    auto row = loadRowFrom({{"tag", "P-9"}, {"hp", "15"}, {"volts", "460"}, {"fla", ""}}, bad);
+    ASSERT_TRUE(row) << bad.reason;
+    EXPECT_EQ(MotorRatings::of(row->motor).hp, 15.0);
+    EXPECT_EQ(row->lengthFt, kLoadListDefaultLengthFt);
+    EXPECT_EQ(row->protection, LoadProtection::Breaker);
+    EXPECT_FALSE(loadRowFrom({{"tag", "P-9"}, {"hp", "15"}, {"volts", "460 V"}}, bad));
+    EXPECT_NE(bad.reason.find("'460 V' is not a number"), std::string::npos) << bad.reason;
+    EXPECT_FALSE(loadRowFrom({{"tag", "P-9"}, {"hp", ""}, {"kw", ""}, {"volts", "460"}}, bad));
+    EXPECT_NE(bad.reason.find("missing"), std::string::npos) << bad.reason;
+}
