@@ -25,6 +25,9 @@ using TablesRef = std::shared_ptr<const Tables>;
 void addCheckCommand(CLI::App& app, const TablesRef& tables, int& exitCode);
 /// `compare OLD NEW [--json]`
 void addCompareCommand(CLI::App& app, const TablesRef& tables, int& exitCode);
+/// `new --loads LIST.csv --out FILE [--system-volts V] [--service-kv KV] [--service-mva MVA]
+/// [--xr XR] [--force]`
+void addNewCommand(CLI::App& app, const TablesRef& tables, int& exitCode);
 /// `size --hp HP | --kw KW --volts V [...]`
 void addSizeCommand(CLI::App& app, const TablesRef& tables, int& exitCode);
 /// `trip FILE --part TAG --amps A [--json]`

@@ -20,6 +20,7 @@ int main(int argc, char** argv) {
     }
     lineward::cli::addCheckCommand(app, tables, exitCode);
     lineward::cli::addCompareCommand(app, tables, exitCode);
+    lineward::cli::addNewCommand(app, tables, exitCode);
     lineward::cli::addSizeCommand(app, tables, exitCode);
     lineward::cli::addStudyCommand(app, tables, exitCode);
     lineward::cli::addArcFlashCommand(app, tables, exitCode);

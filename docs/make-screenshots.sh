@@ -8,4 +8,8 @@ export QT_QPA_PLATFORM=offscreen
 export XDG_DATA_HOME="$(mktemp -d)"   # a clean settings/recovery folder for the shots
 "$bin" samples/kestrel-mill-mcc1.lineward --screenshot docs/images/editor-clean-sample.png
 "$bin" samples/kestrel-mill-mcc1-review.lineward --screenshot docs/images/editor-review-sample.png
-echo "wrote docs/images/editor-clean-sample.png and docs/images/editor-review-sample.png"
+# Import Load List: the preview dialog, from the ui test that drives it with real events.
+LINEWARD_SHOT_DIR=docs/images .build/release/tests/ui_tests \
+    --gtest_filter='ImportLoadList.PreviewShowsBucketsAndRefusalsAndImportIsOneUndoableEdit' >/dev/null
+rm -f docs/images/import-load-list-sheet.png
+echo "wrote docs/images/editor-clean-sample.png, editor-review-sample.png and import-load-list.png"

@@ -217,3 +217,40 @@ if(caution EQUAL -1)
   message(FATAL_ERROR "arcflash printed no safety caution: ${LAST_OUT}")
 endif()
 expect_exit(2 ${CLI} arcflash ${SAMPLES}/no-such-file.lineward)
+
+# new: the sample load list becomes a lineup that checks with no violation; every refused row
+# exits 2 with file:line:column and writes nothing.
+set(lineup ${CMAKE_CURRENT_BINARY_DIR}/new-pellet.lineward)
+file(REMOVE ${lineup})
+expect_exit(0 ${CLI} new --loads ${SAMPLES}/kestrel-mill-pellet-loads.csv --out ${lineup})
+if(NOT LAST_OUT MATCHES "16 buckets")
+  message(FATAL_ERROR "new did not report its 16 buckets:\n${LAST_OUT}")
+endif()
+expect_exit(0 ${CLI} check ${lineup})
+file(READ ${lineup} first)
+# An existing file is not replaced without --force, and is left as it was.
+expect_exit(2 ${CLI} new --loads ${SAMPLES}/kestrel-mill-pellet-loads.csv --out ${lineup})
+file(READ ${lineup} again)
+if(NOT first STREQUAL again)
+  message(FATAL_ERROR "new changed an existing file without --force")
+endif()
+# Each bad row: the exit, the located message, nothing written.
+set(badlist ${CMAKE_CURRENT_BINARY_DIR}/bad-loads.csv)
+set(badout ${CMAKE_CURRENT_BINARY_DIR}/bad-loads.lineward)
+foreach(case "P-2,-10,460,breaker|3:5:"       # negative hp
+              "P-2,,460,breaker|3:5:"         # missing hp
+              "P-2,10,460,mccb|3:12:"         # unknown protection
+              "P-2,ten,460,breaker|3:5:")     # text where a number belongs
+  string(REPLACE "|" ";" parts "${case}")
+  list(GET parts 0 row)
+  list(GET parts 1 where)
+  file(WRITE ${badlist} "tag,hp,volts,protection\nP-1,10,460,breaker\n${row}\n")
+  file(REMOVE ${badout})
+  expect_exit(2 ${CLI} new --loads ${badlist} --out ${badout})
+  if(NOT LAST_ERR MATCHES "bad-loads.csv:${where} ")
+    message(FATAL_ERROR "new on '${row}' lacks file:${where}: ${LAST_ERR}")
+  endif()
+  if(EXISTS ${badout})
+    message(FATAL_ERROR "new wrote ${badout} although row '${row}' was refused")
+  endif()
+endforeach()

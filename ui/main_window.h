@@ -53,6 +53,10 @@ public:
     void copySelection();
     void paste();
     void groupSelectionAsBucket();
+    /// File → Import Load List…: asks for the list, previews it for a bus, adds its buckets.
+    void importLoadList();
+    /// Edit → Add Bucket…: one sized bucket on the selected (or first) MCC bus.
+    void addBucket();
     void printPreview();
     void printSubmittal();
     /// Applies a finding's proposed fix as one edit, keeping the selection and the view;

@@ -106,6 +106,8 @@ void MainWindow::buildFileMenu() {
     file->addSeparator();
     menuAction(file, tr("&Title Block…"), QKeySequence(), this, [this] { editTitleBlock(); });
     file->addSeparator();
+    menuAction(file, tr("Import &Load List…"), QKeySequence(tr("Ctrl+Shift+L")), this,
+               [this] { importLoadList(); });
     addCompareActions(file);
     file->addSeparator();
     menuAction(file, tr("Print Pre&view…"), QKeySequence(), this, [this] { printPreview(); });
@@ -219,6 +221,7 @@ void MainWindow::buildEditMenu() {
                [this] { rotateSelection(); });
     menuAction(edit, tr("&Group as Bucket"), QKeySequence(tr("Ctrl+G")), this,
                [this] { groupSelectionAsBucket(); });
+    menuAction(edit, tr("Add &Bucket…"), QKeySequence(tr("Ctrl+B")), this, [this] { addBucket(); });
     menuAction(edit, tr("Cancel Placing"), QKeySequence::Cancel, this,
                [this] { m_view->setPlaceKind(std::nullopt); });
 }

@@ -3,6 +3,7 @@
 #include "commands/bucket_command.h"
 #include "commands/move_parts_command.h"
 #include "findings_panel.h"
+#include "import_loads_dialog.h"
 #include "inspector.h"
 #include "io/drawing_file.h"
 #include "main_window.h"
@@ -19,6 +20,7 @@
 #include <QFile>
 #include <QLabel>
 #include <QLineEdit>
+#include <QPushButton>
 #include <QTest>
 #include <QTimer>
 #include <QTreeWidget>
@@ -155,6 +157,19 @@ TEST(Editor, EveryCommandUndoesToTheSameBytes) {
         user.clickPart(d.partByTag("CB-101")->id);
         user.press(Qt::Key_C, Qt::ControlModifier);
         user.press(Qt::Key_V, Qt::ControlModifier);
+    });
+    check("import load list", [&] {
+        const QString list = test::tempDir("editor-import") + "/loads.csv";
+        QFile f(list);
+        ASSERT_TRUE(f.open(QIODevice::WriteOnly));
+        f.write("tag,hp,volts,fla\nP-130,10,460,13\nP-131,20,460,25\n");
+        f.close();
+        user.answerFileDialogWith(list);
+        User::whenModal<ImportLoadsDialog>([](ImportLoadsDialog* dialog) {
+            QTest::mouseClick(dialog->findChild<QPushButton*>("importButton"), Qt::LeftButton);
+        });
+        user.press(Qt::Key_L, Qt::ControlModifier | Qt::ShiftModifier);
+        EXPECT_NE(d.partByTag("P-131"), nullptr);
     });
 }
 
