@@ -2,6 +2,7 @@
 // sized around them (NEC 2023 430.24, 430.62(A), 450.3) and its fault duty read from the check.
 #include "lineup/lineup_builder.h"
 
+#include "lineup/lineup_detail.h"
 #include "model/ratings.h"
 
 #include <algorithm>
@@ -25,17 +26,8 @@ constexpr double kPitchX = 110, kDeviceDy = 70, kFuseDy = 115, kContactorDy = 16
 // Overload relay adjustment range around its setting (common practice: 0.75–1.3 ×).
 constexpr double kRelayLow = 0.75, kRelayHigh = 1.3;
 
-template <std::size_t N> std::optional<double> firstAtOrAbove(const double (&list)[N], double v) {
-    for (double x : list)
-        if (x >= v - 1e-9)
-            return x;
-    return std::nullopt;
-}
-
-void put(Part& p, const std::vector<std::pair<std::string_view, FieldValue>>& values) {
-    if (auto err = p.set(values)) // one change, so related values (frame, trip) move together
-        throw std::runtime_error(p.tag + ": " + *err);
-}
+using lineup_detail::firstAtOrAbove;
+using lineup_detail::put;
 
 ScpdType deviceFor(LoadProtection p) {
     switch (p) {

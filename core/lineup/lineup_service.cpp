@@ -2,6 +2,7 @@
 // a load list, and the lineup's fault duty read from the one check.
 #include "check/check.h"
 #include "lineup/lineup_builder.h"
+#include "lineup/lineup_detail.h"
 #include "model/ratings.h"
 #include "studies/study.h"
 #include "topology/flow.h"
@@ -24,17 +25,8 @@ constexpr double kServiceY = -80, kTxY = 0, kMainY = 80, kBusY = 150;
 /// Interrupting rating used while the fault duty is not yet known (replaced after the check).
 constexpr double kProvisionalKa = 65;
 
-template <std::size_t N> std::optional<double> firstAtOrAbove(const double (&list)[N], double v) {
-    for (double x : list)
-        if (x >= v - 1e-9)
-            return x;
-    return std::nullopt;
-}
-
-void put(Part& p, const std::vector<std::pair<std::string_view, FieldValue>>& values) {
-    if (auto err = p.set(values)) // one change, so related values (frame, trip) move together
-        throw std::runtime_error(p.tag + ": " + *err);
-}
+using lineup_detail::firstAtOrAbove;
+using lineup_detail::put;
 
 // Service, transformer, main breaker and bus with provisional ratings; ids 1–4.
 Drawing skeleton(const LineupOptions& o) {
