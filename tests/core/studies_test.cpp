@@ -380,7 +380,8 @@ TEST(DutyRules, LowRatedMoldedCaseUsesItsOwnTestCircuit) {
     // MF = (1 + e^(−π/3)) / (1 + e^(−π/1.732)) = 1.3509 / 1.1630 = 1.1616 → 8.61 kA, short.
     Drawing d = sourceOnBus(9.5, 3.0, PartKind::Breaker,
                             {{"trip_a", 100.0}, {"interrupting_ka", 10.0}, {"inst_x", 10.0}});
-    const Finding* f = findRule(checkDrawing(d, testTables()), "duty.interrupting");
+    const auto report = checkDrawing(d, testTables()); // the finding lives in the report
+    const Finding* f = findRule(report, "duty.interrupting");
     ASSERT_NE(f, nullptr);
     const double mf = (1 + std::exp(-M_PI / 3.0)) / (1 + std::exp(-M_PI / std::sqrt(3.0)));
     EXPECT_NEAR(*f->limit, 10.0 / mf, 0.01);
