@@ -1,5 +1,5 @@
 // `lineward-cli export FILE [--pdf OUT] [--svg OUT] [--dxf OUT] [--csv DIR] [--paper NAME]
-// [--portrait]`
+// [--portrait] [--half-scale] [--checked-by NAME] [--since OLD [--revision REV]]`
 #include "check/check.h"
 #include "cli_commands.h"
 #include "export/one_line_dxf.h"
@@ -16,8 +16,8 @@ namespace lineward::cli {
 
 namespace {
 struct ExportArgs {
-    std::string file, pdf, svg, dxf, csv, paper = "tabloid", since, revision;
-    bool portrait = false;
+    std::string file, pdf, svg, dxf, csv, paper = "tabloid", since, revision, checkedBy;
+    bool portrait = false, halfScale = false;
 };
 } // namespace
 
@@ -37,6 +37,12 @@ void addExportCommand(CLI::App& app, const TablesRef& tables, int& exitCode) {
     cmd->add_option("--paper", a->paper, "letter, legal, tabloid (default), a4 or a3")
         ->check(CLI::IsMember({"letter", "legal", "tabloid", "a4", "a3"}));
     cmd->add_flag("--portrait", a->portrait, "portrait pages (default landscape)");
+    cmd->add_flag("--half-scale", a->halfScale,
+                  "size the text for sheets printed at half size (at least 2 mm on the "
+                  "half-size print)");
+    cmd->add_option("--checked-by", a->checkedBy,
+                    "name printed as CHECKED in the title block (default: the drawing's "
+                    "checked_by)");
     cmd->add_option("--since", a->since,
                     "previous revision (.lineward): the Submittal flags each part added or "
                     "changed since it")
@@ -70,6 +76,8 @@ void addExportCommand(CLI::App& app, const TablesRef& tables, int& exitCode) {
             ui::SubmittalOptions o;
             o.paper = *ui::paperByName(QString::fromStdString(a->paper));
             o.orientation = a->portrait ? QPageLayout::Portrait : QPageLayout::Landscape;
+            o.printScale = a->halfScale ? 0.5 : 1.0;
+            o.checkedBy = QString::fromStdString(a->checkedBy);
             if (previous) {
                 o.previous = runCheck(*previous, *tables);
                 o.previousName = QFileInfo(QString::fromStdString(a->since)).fileName();

@@ -2,6 +2,8 @@
 // style), kept behind the parts.
 #include "bucket_item.h"
 
+#include "sheet_scene.h"
+
 #include <QFontMetricsF>
 #include <QPainter>
 #include <QStyleOptionGraphicsItem>
@@ -13,7 +15,7 @@ const QColor kFrame(0x4f, 0x7a, 0x5a);
 
 QFont tagFont() {
     QFont f;
-    f.setPixelSize(9);
+    f.setPixelSize(10); // as the labels: the Submittal sizes print by the smallest text
     f.setBold(true);
     return f;
 }
@@ -58,12 +60,12 @@ void BucketItem::paint(QPainter* p, const QStyleOptionGraphicsItem* option, QWid
     const qreal room = m_frame.right() - m_tagLeft - 4;
     const QString text = QFontMetricsF(f).elidedText(m_tag, Qt::ElideRight, room);
     const qreal w = QFontMetricsF(f).horizontalAdvance(text) + 6;
-    const QRectF tab(m_tagLeft, m_frame.top() - 6, w, 12);
+    const QRectF tab(m_tagLeft, m_frame.top() - 7, w, 14);
     p->setPen(Qt::NoPen);
     p->setBrush(QColor(0xfb, 0xfa, 0xf6));
     p->drawRect(tab);
     p->setFont(f);
-    p->setPen(kFrame);
+    p->setPen(SheetScene::printing(this) ? QColor(Qt::black) : kFrame);
     p->drawText(tab, Qt::AlignCenter, text);
 }
 

@@ -3,6 +3,7 @@
 #include "curves_plot.h"
 
 #include <QFileInfo>
+#include <QFontMetricsF>
 #include <QImage>
 #include <QPageSize>
 #include <QPainter>
@@ -37,9 +38,9 @@ QString ampsText(double a) {
                      : QString::number(a, 'g', 3) + " A";
 }
 
-void grid(QPainter& p, const Axes& ax) {
+void grid(QPainter& p, const Axes& ax, double pt) {
     QFont f = p.font();
-    f.setPointSizeF(7);
+    f.setPointSizeF(pt);
     p.setFont(f);
     for (double d = ax.a0; d <= ax.a1 * 1.0001; d *= 10) {
         for (int m = 1; m < 10 && d * m <= ax.a1 * 1.0001; ++m) {
@@ -48,7 +49,8 @@ void grid(QPainter& p, const Axes& ax) {
             p.drawLine(QPointF(ax.x(d * m), ax.r.top()), QPointF(ax.x(d * m), ax.r.bottom()));
         }
         p.setPen(Qt::black);
-        p.drawText(QRectF(ax.x(d) - 30, ax.r.bottom() + 3, 60, 12), Qt::AlignHCenter, ampsText(d));
+        p.drawText(QRectF(ax.x(d) - 40, ax.r.bottom() + 3, 80, pt * 1.6), Qt::AlignHCenter,
+                   ampsText(d));
     }
     for (double t = kTmin; t <= kTmax * 1.0001; t *= 10) {
         for (int m = 1; m < 10 && t * m <= kTmax * 1.0001; ++m) {
@@ -57,12 +59,30 @@ void grid(QPainter& p, const Axes& ax) {
             p.drawLine(QPointF(ax.r.left(), ax.y(t * m)), QPointF(ax.r.right(), ax.y(t * m)));
         }
         p.setPen(Qt::black);
-        p.drawText(QRectF(ax.r.left() - 46, ax.y(t) - 6, 42, 12), Qt::AlignRight | Qt::AlignVCenter,
+        p.drawText(QRectF(ax.r.left() - 6 * pt - 4, ax.y(t) - pt, 6 * pt, 2 * pt),
+                   Qt::AlignRight | Qt::AlignVCenter,
                    QString::number(t, 'f', t < 1 ? 2 : 0) + " s");
     }
     p.setPen(QPen(Qt::black, 1));
     p.setBrush(Qt::NoBrush);
     p.drawRect(ax.r);
+}
+
+// "Current in A at 480 V" under the current axis, "Time in s" over the time labels.
+void axisTitles(QPainter& p, const Axes& ax, const CurveSet& set, double pt) {
+    QFont f = p.font();
+    f.setPointSizeF(pt);
+    f.setBold(false);
+    p.setFont(f);
+    p.setPen(Qt::black);
+    const QString amps = set.voltsBase > 0
+                             ? QString("Current in A at %1 V").arg(set.voltsBase, 0, 'f', 0)
+                             : QString("Current in A");
+    p.drawText(QRectF(ax.r.left(), ax.r.bottom() + 3 + pt * 1.7, ax.r.width(), pt * 1.6),
+               Qt::AlignHCenter, amps);
+    // Level with the plot's title, over the time labels: set upright, as all text is.
+    p.drawText(QRectF(ax.r.left() - 7 * pt - 8, ax.r.top() - 2 * pt - 4, 7 * pt, 1.6 * pt),
+               Qt::AlignRight | Qt::AlignVCenter, "Time in s");
 }
 
 void band(QPainter& p, const Axes& ax, const PlotSeries& s, const QColor& c) {
@@ -124,25 +144,31 @@ void polyline(QPainter& p, const Axes& ax, const PlotSeries& s, const QPen& pen)
 
 } // namespace
 
-void paintCurves(QPainter& p, const QRectF& area, const CurveSet& set) {
+void paintCurves(QPainter& p, const QRectF& area, const CurveSet& set, double textPt) {
+    // The panel's sizes, or the Submittal's minimum and up.
+    const double pt = textPt > 0 ? textPt : 7.0;
     p.save();
     p.setRenderHint(QPainter::Antialiasing);
     p.fillRect(area, Qt::white);
-    const double legendW = std::min(260.0, area.width() * 0.32);
-    Axes ax{
-        QRectF(area.left() + 56, area.top() + 28, area.width() - legendW - 76, area.height() - 56),
-        set.minA, set.maxA};
+    const double legendW = std::min(260.0 * pt / 7, area.width() * 0.32);
+    // Room left of the plot for the time labels and the axis title, below it for the current
+    // labels and the axis title.
+    const double left = 7 * pt + 12, top = 2.2 * pt * 1.36 + 8, bottom = 3.6 * pt + 10;
+    Axes ax{QRectF(area.left() + left, area.top() + top, area.width() - legendW - left - 20,
+                   area.height() - top - bottom),
+            set.minA, set.maxA};
     QFont title = p.font();
-    title.setPointSizeF(9.5);
+    title.setPointSizeF(pt * 1.36);
     title.setBold(true);
     p.setFont(title);
     p.setPen(Qt::black);
-    p.drawText(QRectF(area.left() + 56, area.top() + 4, ax.r.width(), 20),
+    p.drawText(QRectF(ax.r.left(), area.top() + 4, ax.r.width(), top - 6),
                Qt::AlignLeft | Qt::AlignVCenter,
                QString::fromStdString(set.title) +
                    (set.voltsBase > 0 ? QString("  (current at %1 V)").arg(set.voltsBase, 0, 'f', 0)
                                       : QString()));
-    grid(p, ax);
+    grid(p, ax, pt);
+    axisTitles(p, ax, set, pt);
     p.save();
     p.setClipRect(ax.r);
     int colour = 0;
@@ -167,9 +193,24 @@ void paintCurves(QPainter& p, const QRectF& area, const CurveSet& set) {
         p.drawLine(QPointF(ax.x(set.faultA), ax.r.top()), QPointF(ax.x(set.faultA), ax.r.bottom()));
     }
     p.restore();
+    if (set.faultA > 0 && set.faultA < set.maxA) {
+        // Named on the plot too, at the line's top, on the side with room.
+        QFont lf = p.font();
+        lf.setPointSizeF(pt);
+        lf.setBold(true);
+        p.setFont(lf);
+        p.setPen(Qt::black);
+        const QString text = "available fault " + ampsText(set.faultA);
+        const double w = QFontMetricsF(lf, p.device()).horizontalAdvance(text) + 6;
+        const double x = ax.x(set.faultA);
+        const bool left = x + w > ax.r.right();
+        const QRectF box(left ? x - w - 2 : x + 2, ax.r.top() + 2, w, pt * 1.6);
+        p.fillRect(box, Qt::white);
+        p.drawText(box, Qt::AlignCenter, text);
+    }
     // Legend beside the plot: one line per series, so labels never overlap the curves.
     QFont f = p.font();
-    f.setPointSizeF(7.5);
+    f.setPointSizeF(pt * 1.07);
     f.setBold(false);
     p.setFont(f);
     double y = ax.r.top();
@@ -177,12 +218,12 @@ void paintCurves(QPainter& p, const QRectF& area, const CurveSet& set) {
     colour = 0;
     auto entry = [&](const QPen& pen, const QString& text) {
         p.setPen(pen);
-        p.drawLine(QPointF(lx, y + 7), QPointF(lx + 18, y + 7));
+        p.drawLine(QPointF(lx, y + pt), QPointF(lx + 18, y + pt));
         p.setPen(Qt::black);
-        const QRectF box(lx + 24, y, legendW - 30, 40);
+        const QRectF box(lx + 24, y, legendW - 30, pt * 8);
         QRectF used = p.boundingRect(box, Qt::TextWordWrap, text);
         p.drawText(box, Qt::TextWordWrap, text);
-        y += std::max(16.0, used.height() + 4);
+        y += std::max(pt * 2.2, used.height() + 4);
     };
     for (const auto& s : set.series) {
         QPen pen = s.kind == PlotSeries::Kind::Band ? QPen(kPalette[colour++ % 6], 3)

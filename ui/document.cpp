@@ -128,6 +128,7 @@ void Document::removePart(PartId id) {
         removeWire(w);
     m_drawing.removePart(id);
     emit partRemoved(id);
+    emit reviewChanged();
     emit bucketsChanged();
     changed();
 }
@@ -189,6 +190,7 @@ void Document::removeParts(const std::vector<PartId>& ids) {
     removeWires(wires);
     for (const auto& p : m_drawing.removeParts(ids))
         emit partRemoved(p.id);
+    emit reviewChanged(); // their comments and places in acceptances went with them
     emit bucketsChanged();
     changed();
 }
@@ -218,8 +220,11 @@ void Document::setSheet(const SheetInfo& sheet) {
     changed();
 }
 
-void Document::setAccepted(const std::vector<Accepted>& accepted) {
+void Document::setReview(const std::vector<Accepted>& accepted,
+                         const std::vector<Comment>& comments) {
     m_drawing.accepted() = accepted;
+    m_drawing.comments() = comments;
+    emit reviewChanged();
     changed();
 }
 

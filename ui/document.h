@@ -65,7 +65,9 @@ public:
     void removeWires(const std::vector<WireId>& ids);
     void replaceBuckets(const std::vector<Bucket>& buckets);
     void setSheet(const SheetInfo& sheet);
-    void setAccepted(const std::vector<Accepted>& accepted);
+    /// The review state: accepted deviations and review comments (each review command swaps
+    /// the whole of both, which are short lists).
+    void setReview(const std::vector<Accepted>& accepted, const std::vector<Comment>& comments);
 
     /// Blocks until the newest check has finished (tests; large drawings check off-thread).
     void waitForCheck();
@@ -83,6 +85,8 @@ signals:
     void wireRemoved(lineward::WireId id);
     void bucketsChanged();
     void sheetChanged();
+    /// Accepted deviations or review comments changed.
+    void reviewChanged();
     /// A new check result is available.
     void reportChanged();
     /// The modified state changed (an edit, undo to the saved state, a save).

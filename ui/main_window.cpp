@@ -109,6 +109,7 @@ MainWindow::MainWindow(std::shared_ptr<const Tables> tables, QWidget* parent)
             guarded(this, tr("Showing the selection"), [this] { selectionChanged(); }));
 
     buildCompare();
+    buildReview();
     buildActions();
     m_recovery = std::make_unique<RecoverySlot>();
     connect(m_autosave, &QTimer::timeout, this,
@@ -274,9 +275,16 @@ void MainWindow::refreshStatus() {
     auto count = [](int n, const QString& one, const QString& many) {
         return QString::number(n) + " " + (n == 1 ? one : many);
     };
-    m_counts->setText(count(c[2], tr("violation"), tr("violations")) + " · " +
-                      count(c[1], tr("caution"), tr("cautions")) + " · " +
-                      count(c[0], tr("note"), tr("notes")));
+    const auto& r = m_doc.report();
+    QString text = count(c[2], tr("violation"), tr("violations")) + " · " +
+                   count(c[1], tr("caution"), tr("cautions")) + " · " +
+                   count(c[0], tr("note"), tr("notes"));
+    if (r.acceptedCount)
+        text += " · " + tr("%1 accepted").arg(r.acceptedCount);
+    if (!r.staleAccepted.empty())
+        text += " · " + count(static_cast<int>(r.staleAccepted.size()), tr("stale acceptance"),
+                              tr("stale acceptances"));
+    m_counts->setText(text);
 }
 
 void MainWindow::refreshTitle() {

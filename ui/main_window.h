@@ -21,6 +21,7 @@ class PartsPalette;
 class SchedulesPanel;
 class CurvesPanel;
 class ChangesPanel;
+class ReviewPanel;
 class CompareMark;
 struct SubmittalOptions;
 
@@ -69,6 +70,7 @@ public:
     void leaveCompare();
     bool comparing() const { return m_compareBase != nullptr; }
     ChangesPanel* changes() const { return m_changes; }
+    ReviewPanel* review() const { return m_review; }
     /// Where autosave writes this window's recovery copy.
     QString recoveryPath() const;
     /// Writes the recovery copy now (the autosave timer calls this every minute).
@@ -97,11 +99,23 @@ private:
     void rebuildRecentMenu();
     void selectionChanged();
     void buildCompare();
+    void buildReview();
+    /// Accept… : asks for the reviewer's name (once) and the note, then records the acceptance.
+    void acceptFinding(const Finding& f);
+    /// Withdraws every acceptance that covers the finding.
+    void withdrawAcceptance(const Finding& f);
+    /// Asks for the comment's text and pins it to the part.
+    void addComment(PartId part);
+    /// The part's right-click menu: Accept… or Withdraw for each of its findings, Add Comment….
+    void showPartMenu(PartId id, QPoint globalPos);
     void addCompareActions(QMenu* file);
     void refreshCompare();
     void clearCompareMarks();
     /// In compare mode, the Submittal flags the parts changed since the compared revision.
     void flagRevisions(SubmittalOptions& o) const;
+    /// The Submittal's CHECKED name: the drawing's checked_by, else the reviewer's name from the
+    /// settings (whoever prints the checked drawing), else none.
+    QString checkedByForSubmittal() const;
 
     Document m_doc;
     SheetScene* m_scene;
@@ -122,6 +136,7 @@ private:
     QDockWidget* m_changesDock = nullptr;
     std::vector<CompareMark*> m_compareMarks; ///< owned by the scene
     QAction* m_leaveCompareAction = nullptr;
+    ReviewPanel* m_review = nullptr;
 };
 
 /// At start-up: offers each drawing that windows which did not close left in the recovery

@@ -11,6 +11,7 @@
 #include "model/part_defaults.h"
 #include "part_item.h"
 #include "plain_text.h"
+#include "review_dialogs.h"
 #include "sheet_scene.h"
 #include "sheet_view.h"
 #include "shortcuts_dialog.h"
@@ -142,6 +143,7 @@ void MainWindow::buildExportMenu(QMenu* exportMenu) {
         m_doc.waitForCheck();
         SubmittalOptions o;
         flagRevisions(o);
+        o.checkedBy = checkedByForSubmittal();
         auto r = writeSubmittalPdf(path, m_doc.sharedResult(), m_doc.sharedTables(), o);
         done(path, r.error, tr(" (%1 pages)").arg(r.pages));
     });
@@ -224,6 +226,17 @@ void MainWindow::buildEditMenu() {
     menuAction(edit, tr("Add &Bucket…"), QKeySequence(tr("Ctrl+B")), this, [this] { addBucket(); });
     menuAction(edit, tr("Cancel Placing"), QKeySequence::Cancel, this,
                [this] { m_view->setPlaceKind(std::nullopt); });
+    edit->addSeparator();
+    menuAction(edit, tr("Add Co&mment…"), QKeySequence(tr("Ctrl+M")), this, [this] {
+        const auto parts = m_scene->selectedParts();
+        if (parts.size() == 1)
+            addComment(parts.front());
+        else
+            statusBar()->showMessage(tr("Select one part on the Sheet to pin a comment to it."),
+                                     8000);
+    });
+    menuAction(edit, tr("Reviewer &Name…"), QKeySequence(), this,
+               [this] { askReviewerName(this); });
 }
 
 void MainWindow::buildViewMenu() {
@@ -250,6 +263,7 @@ void MainWindow::printPreview() {
                 o.paper = p->pageLayout().pageSize();
                 o.orientation = p->pageLayout().orientation();
                 flagRevisions(o);
+                o.checkedBy = checkedByForSubmittal();
                 paintSubmittal(*p, m_doc.sharedResult(), m_doc.sharedTables(), o);
             }));
     preview.exec();
@@ -266,6 +280,7 @@ void MainWindow::printSubmittal() {
     o.paper = printer.pageLayout().pageSize();
     o.orientation = printer.pageLayout().orientation();
     flagRevisions(o);
+    o.checkedBy = checkedByForSubmittal();
     auto r = paintSubmittal(printer, m_doc.sharedResult(), m_doc.sharedTables(), o);
     if (!r.error.isEmpty())
         plainMessage(this, QMessageBox::Warning, tr("Print failed"), r.error);

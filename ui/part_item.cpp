@@ -6,6 +6,7 @@
 #include "model/ratings.h"
 #include "plain_text.h"
 #include "severity_style.h"
+#include "sheet_scene.h"
 
 #include <QFontMetricsF>
 #include <QPainter>
@@ -123,15 +124,16 @@ void PartItem::setArcFlashMark(const QString& text) {
 QRectF PartItem::arcFlashRect() const {
     // Under the tag and ratings beside the bar's end, clear of the wires that drop from it.
     const QRectF label = labelRect();
-    return QRectF(label.left(), label.bottom() + 2, 84, 13);
+    return QRectF(label.left(), label.bottom() + 2, 92, 14);
 }
 
-void PartItem::setBadge(std::optional<Severity> worst, const QString& tooltip) {
+void PartItem::setBadge(std::optional<Severity> worst, const QString& tooltip, bool accepted) {
     // Most parts keep their badge across an edit: only the ones that change are redrawn (a
     // refresh of every label was most of an edit's cost on a large drawing).
-    if (worst == m_badge && tooltip == m_badgeTip)
+    if (worst == m_badge && tooltip == m_badgeTip && accepted == m_accepted)
         return;
     m_badge = worst;
+    m_accepted = accepted;
     m_badgeTip = tooltip;
     refreshText();
     update();
@@ -335,34 +337,34 @@ void PartItem::paintLabel(QPainter* p) const {
     const QRectF r = labelRect();
     const Qt::Alignment side = (labelOnLeft() ? Qt::AlignRight : Qt::AlignLeft) | Qt::AlignVCenter;
     const QFont bold = labelFont(true), plain = labelFont(false);
-    p->setPen(isSelected() ? kSelect : kInk);
+    p->setPen(SheetScene::printing(this) ? QColor(Qt::black) : isSelected() ? kSelect : kInk);
     p->setFont(bold);
     p->drawText(QRectF(r.left(), r.top(), r.width(), 14), side, QString::fromStdString(m_part.tag));
     p->setFont(plain);
-    p->setPen(QColor(0x55, 0x5f, 0x6a));
+    p->setPen(SheetScene::printing(this) ? QColor(Qt::black) : QColor(0x55, 0x5f, 0x6a));
     const QStringList lines = ratingsWrapped() ? m_ratingHalves : QStringList{ratingText()};
     for (int i = 0; i < lines.size(); ++i)
         p->drawText(QRectF(r.left(), r.top() + 13 + 13 * i, r.width(), 14), side,
                     QFontMetricsF(plain).elidedText(lines[i], Qt::ElideRight, r.width()));
 }
 
-void PartItem::paintBadge(QPainter* p) const {
+QPointF PartItem::badgeAt() const {
     // upper right of the symbol, between it and the tag
     const QRectF sym = uprightSymbolRect();
-    const QPointF at = m_part.kind == PartKind::Bus
-                           ? QPointF(sym.right() + 2, sym.center().y() - 12)
-                           : QPointF(sym.right() - 2, sym.top() + 8);
-    p->save();
-    p->translate(at);
-    p->setPen(QPen(Qt::white, 1.2));
-    p->setBrush(severityColor(*m_badge));
-    p->drawPath(severityShape(*m_badge, 13));
-    p->setPen(Qt::white);
-    QFont bf = labelFont(true);
-    bf.setPixelSize(9);
-    p->setFont(bf);
-    p->drawText(QRectF(-6, -6, 12, 12), Qt::AlignCenter, *m_badge == Severity::Note ? "i" : "!");
-    p->restore();
+    return m_part.kind == PartKind::Bus ? QPointF(sym.right() + 2, sym.center().y() - 12)
+                                        : QPointF(sym.right() - 2, sym.top() + 8);
+}
+
+QPointF PartItem::badgeScenePos() const {
+    return badgeAt() + pos(); // the upright frame is the scene's orientation about pos()
+}
+
+void PartItem::paintAcceptedBadge(QPainter* p) const {
+    ui::paintAcceptedBadge(*p, badgeAt());
+}
+
+void PartItem::paintBadge(QPainter* p) const {
+    paintSeverityBadge(*p, *m_badge, badgeAt());
 }
 
 void PartItem::paint(QPainter* p, const QStyleOptionGraphicsItem* option, QWidget*) {
@@ -398,6 +400,8 @@ void PartItem::paint(QPainter* p, const QStyleOptionGraphicsItem* option, QWidge
     }
     if (m_badge)
         paintBadge(p);
+    else if (m_accepted)
+        paintAcceptedBadge(p);
     if (!m_arcFlashMark.isEmpty() && lod >= 0.45) {
         // Our arc-flash mark: a dark amber frame with a notched corner and the energy inside.
         const QRectF r = arcFlashRect();
@@ -411,10 +415,9 @@ void PartItem::paint(QPainter* p, const QStyleOptionGraphicsItem* option, QWidge
         p->setPen(QPen(QColor(0x9a, 0x5b, 0x00), 1.0));
         p->setBrush(QColor(0xff, 0xf3, 0xd6));
         p->drawPath(frame);
-        QFont f = labelFont(false);
-        f.setPixelSize(9);
+        const QFont f = labelFont(false); // 10 units, as the labels (the Submittal's minimum)
         p->setFont(f);
-        p->setPen(QColor(0x5a, 0x35, 0x00));
+        p->setPen(SheetScene::printing(this) ? QColor(Qt::black) : QColor(0x5a, 0x35, 0x00));
         p->drawText(r.adjusted(3, 0, -2, 0), Qt::AlignVCenter | Qt::AlignLeft,
                     QFontMetricsF(f).elidedText(m_arcFlashMark, Qt::ElideRight, r.width() - 5));
     }

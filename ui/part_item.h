@@ -28,9 +28,15 @@ public:
     QPointF terminalScenePos(int terminal, QPointF toward = {}) const;
     /// For a bus: horizontal extent of the bar in item coordinates.
     void setBarSpan(qreal left, qreal right);
-    /// Worst open finding on this part (drawn as a badge) and its tooltip text.
-    void setBadge(std::optional<Severity> worst, const QString& tooltip);
+    /// Worst open finding on this part (drawn as a badge) and its tooltip text. `accepted`: the
+    /// part has accepted findings; where none is open it gets our accepted badge (a hollow
+    /// ring with a tick) instead.
+    void setBadge(std::optional<Severity> worst, const QString& tooltip, bool accepted = false);
     std::optional<Severity> badge() const { return m_badge; }
+    /// True where the part shows the accepted badge (accepted findings, none open).
+    bool acceptedBadge() const { return !m_badge && m_accepted; }
+    /// The badge's place in scene coordinates (its centre), where a right-click opens its menu.
+    QPointF badgeScenePos() const;
     /// A bus's arc-flash mark: its incident energy from the check result ("6.0 cal/cm²"),
     /// drawn in a small frame of our own under the bar; empty: none.
     void setArcFlashMark(const QString& text);
@@ -63,6 +69,8 @@ private:
     void paintSymbol(QPainter* p) const;
     void paintLabel(QPainter* p) const;
     void paintBadge(QPainter* p) const;
+    void paintAcceptedBadge(QPainter* p) const;
+    QPointF badgeAt() const;     ///< upright frame
     QRectF arcFlashRect() const; ///< upright frame: where the arc-flash mark goes
     void refreshText();          ///< tooltip and the label's measured width, after the part changes
     QRectF symbolRect() const;   ///< item coordinates
@@ -80,6 +88,7 @@ private:
     qreal m_wrappedWidth = kLabelWidth; ///< ratings split in two at their middle gap
     QStringList m_ratingHalves;         ///< the two halves, or empty when there is no gap
     std::optional<Severity> m_badge;
+    bool m_accepted = false;
     QString m_badgeTip;
     QString m_arcFlashMark;
 };

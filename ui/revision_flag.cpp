@@ -1,4 +1,4 @@
-// Revision flag: staff 22 units high, pennant 16 × 12 units pointing right with the revision's
+// Revision flag: staff 22 units high, pennant 20 × 15 units pointing right with the revision's
 // name inside; sized in scene units so it scales with the one-line like the parts' labels.
 #include "revision_flag.h"
 
@@ -8,7 +8,7 @@ namespace lineward::ui {
 
 namespace {
 constexpr qreal kStaff = 22.0;
-constexpr qreal kFlagW = 16.0, kFlagH = 12.0;
+constexpr qreal kFlagW = 20.0, kFlagH = 15.0;
 } // namespace
 
 RevisionFlag::RevisionFlag(const QString& revision, const QRectF& symbol)
@@ -34,7 +34,7 @@ void RevisionFlag::paint(QPainter* p, const QStyleOptionGraphicsItem*, QWidget*)
     p->setBrush(Qt::white);
     p->drawPolygon(pennant);
     QFont f;
-    f.setPixelSize(8);
+    f.setPixelSize(10); // no smaller than the labels: the Submittal sizes print by it
     f.setBold(true);
     p->setFont(f);
     p->drawText(QRectF(top.x() + 0.5, top.y(), kFlagW * 0.65, kFlagH), Qt::AlignCenter, m_revision);

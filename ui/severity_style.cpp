@@ -39,6 +39,39 @@ QPainterPath severityShape(Severity s, qreal size) {
     return path;
 }
 
+void paintSeverityBadge(QPainter& p, Severity s, QPointF at, qreal size) {
+    p.save();
+    p.translate(at);
+    p.setPen(QPen(Qt::white, 1.2 * size / 13));
+    p.setBrush(severityColor(s));
+    p.drawPath(severityShape(s, size));
+    p.setPen(Qt::white);
+    QFont bf;
+    bf.setPixelSize(qMax(1, qRound(10 * size / 13))); // 10 units: the Sheet's smallest text
+    bf.setBold(true);
+    p.setFont(bf);
+    const qreal h = size * 6 / 13;
+    p.drawText(QRectF(-h, -h, 2 * h, 2 * h), Qt::AlignCenter, s == Severity::Note ? "i" : "!");
+    p.restore();
+}
+
+void paintAcceptedBadge(QPainter& p, QPointF at, qreal size) {
+    p.save();
+    p.translate(at);
+    p.scale(size / 13, size / 13);
+    const QColor ink(0x3d, 0x6b, 0x4f);
+    p.setPen(QPen(ink, 1.6));
+    p.setBrush(Qt::white);
+    p.drawEllipse(QPointF(0, 0), 6, 6);
+    QPainterPath tick;
+    tick.moveTo(-3, 0);
+    tick.lineTo(-1, 2.5);
+    tick.lineTo(3.2, -2.5);
+    p.setBrush(Qt::NoBrush);
+    p.drawPath(tick);
+    p.restore();
+}
+
 QString severityLabel(Severity s) {
     return QString::fromUtf8(severityName(s).data());
 }

@@ -2,6 +2,7 @@
 #include "sheet_scene.h"
 
 #include "bucket_item.h"
+#include "comment_mark.h"
 #include "curves/arc_flash_study.h"
 #include "part_item.h"
 #include "report/report_format.h"
@@ -24,7 +25,13 @@ SheetScene::SheetScene(Document& doc, QObject* parent) : QGraphicsScene(parent),
     connect(&doc, &Document::wireAdded, this, &SheetScene::onWireAdded);
     connect(&doc, &Document::wireRemoved, this, &SheetScene::onWireRemoved);
     connect(&doc, &Document::bucketsChanged, this, &SheetScene::scheduleRoute);
+    connect(&doc, &Document::reviewChanged, this, &SheetScene::refreshCommentMarks);
     rebuild();
+}
+
+bool SheetScene::printing(const QGraphicsItem* item) {
+    auto* scene = item ? qobject_cast<SheetScene*>(item->scene()) : nullptr;
+    return scene && scene->m_printing;
 }
 
 PartItem* SheetScene::itemFor(PartId id) const {
@@ -123,6 +130,7 @@ std::optional<WireEnd> SheetScene::nearestTerminal(QPointF at, qreal reach) cons
 void SheetScene::rebuild() {
     emit aboutToRebuild();
     clear();
+    m_commentMarks.clear(); // deleted by clear()
     m_parts.clear();
     m_wires.clear();
     m_buckets.clear();
@@ -242,27 +250,53 @@ void SheetScene::routeWires() {
     }
     layoutLabels();
     refreshBuckets();
+    refreshCommentMarks();
+}
+
+void SheetScene::refreshCommentMarks() {
+    for (auto* m : m_commentMarks)
+        deleteItem(m);
+    m_commentMarks.clear();
+    std::unordered_map<PartId, int> stacked; // marks already beside each part
+    for (const auto& c : m_doc.drawing().comments()) {
+        PartItem* item = itemFor(c.part);
+        if (!item)
+            continue;
+        const QRectF sym = item->symbolSceneRect();
+        const int n = stacked[c.part]++;
+        auto* mark =
+            new CommentMark(c.id, c.resolved, QString::fromStdString(c.text),
+                            QPointF(sym.left() - 3, sym.top() + n * (CommentMark::kHeight + 2)));
+        addItem(mark);
+        m_commentMarks.push_back(mark);
+    }
 }
 
 void SheetScene::refreshBadges() {
-    std::unordered_map<PartId, std::pair<Severity, QString>> worst;
+    struct Badge {
+        std::optional<Severity> worst; ///< of the open findings
+        bool accepted = false;
+        QString tip;
+    };
+    std::unordered_map<PartId, Badge> badges;
     for (const auto& f : m_doc.report().findings) {
-        if (f.accepted)
-            continue;
+        const QString line = (f.accepted ? QStringLiteral("[accepted] ") : QString()) +
+                             QString::fromStdString(findingHeadline(f));
         for (auto id : f.parts) {
-            auto& slot = worst[id];
-            const QString line = QString::fromStdString(findingHeadline(f));
-            if (slot.second.isEmpty() || f.severity > slot.first)
-                slot.first = f.severity;
-            slot.second += (slot.second.isEmpty() ? "" : "\n") + line;
+            auto& b = badges[id];
+            if (f.accepted)
+                b.accepted = true;
+            else if (!b.worst || f.severity > *b.worst)
+                b.worst = f.severity;
+            b.tip += (b.tip.isEmpty() ? "" : "\n") + line;
         }
     }
     for (auto& [id, item] : m_parts) {
-        auto it = worst.find(id);
-        if (it == worst.end())
+        auto it = badges.find(id);
+        if (it == badges.end())
             item->setBadge(std::nullopt, {});
         else
-            item->setBadge(it->second.first, it->second.second);
+            item->setBadge(it->second.worst, it->second.tip, it->second.accepted);
     }
     // Each bus's arc-flash energy from the check result (curves/arc_flash_study.h).
     std::unordered_map<PartId, QString> marks;

@@ -10,6 +10,7 @@
 namespace lineward::ui {
 
 class BucketItem;
+class CommentMark;
 class PartItem;
 class WireItem;
 
@@ -33,8 +34,13 @@ public:
     static constexpr qreal kGrid = 10.0;
     /// Re-routes wires between the items' current positions (also during a drag).
     void routeWires();
+    /// The review comments' marks, one per comment, beside their parts.
+    const std::vector<CommentMark*>& commentMarks() const { return m_commentMarks; }
     /// Printing: a plain white background without the grid.
     void setPrinting(bool on) { m_printing = on; }
+    bool printing() const { return m_printing; }
+    /// True where `item` is drawn for print: its text is then black (the Submittal's rule).
+    static bool printing(const QGraphicsItem* item);
 
 signals:
     /// Every item is about to be deleted (a drawing opened or recovered): views drop their
@@ -51,6 +57,7 @@ private:
     void selectionLost();
     void deleteItem(QGraphicsItem* item); ///< a selected one tells selectionChanged once, later
     void refreshBadges();
+    void refreshCommentMarks();
     void onPartAdded(PartId id);
     void onPartRemoved(PartId id);
     void onPartChanged(PartId id);
@@ -60,6 +67,7 @@ private:
     std::unordered_map<PartId, PartItem*> m_parts;
     std::unordered_map<WireId, WireItem*> m_wires;
     std::unordered_map<BucketId, BucketItem*> m_buckets;
+    std::vector<CommentMark*> m_commentMarks; ///< owned by the scene
     bool m_selectionPending = false;
     bool m_routePending = false, m_framesPending = false;
     bool m_printing = false;

@@ -5,6 +5,7 @@
 #include "part_item.h"
 #include "sheet_scene.h"
 
+#include <QContextMenuEvent>
 #include <QMimeData>
 #include <QMouseEvent>
 #include <QScrollBar>
@@ -51,6 +52,32 @@ std::optional<WireEnd> SheetView::terminalAt(QPointF scenePos) const {
         }
     }
     return std::nullopt;
+}
+
+std::optional<PartId> SheetView::partAt(QPointF scenePos) const {
+    // The badge sits on the symbol's corner and reaches past it: a right-click there counts.
+    const qreal reach = 8.0;
+    for (auto* gi :
+         m_scene->items(QRectF(scenePos - QPointF(reach, reach), QSizeF(2 * reach, 2 * reach)))) {
+        auto* item = qgraphicsitem_cast<PartItem*>(gi);
+        if (!item)
+            continue;
+        const QPointF b = item->badgeScenePos();
+        if (item->symbolSceneRect().contains(scenePos) ||
+            ((item->badge() || item->acceptedBadge()) &&
+             std::hypot(b.x() - scenePos.x(), b.y() - scenePos.y()) <= reach))
+            return item->partId();
+    }
+    return std::nullopt;
+}
+
+void SheetView::contextMenuEvent(QContextMenuEvent* e) {
+    if (auto id = partAt(mapToScene(e->pos()))) {
+        emit partMenuRequested(*id, e->globalPos());
+        e->accept();
+        return;
+    }
+    QGraphicsView::contextMenuEvent(e);
 }
 
 static QPointF snapped(QPointF p) {

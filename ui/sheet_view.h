@@ -22,6 +22,8 @@ public:
     void zoomBy(qreal factor);
     /// The terminal under a scene point, if any (within a few units).
     std::optional<WireEnd> terminalAt(QPointF scenePos) const;
+    /// The part whose symbol or badge is under a scene point, if any.
+    std::optional<PartId> partAt(QPointF scenePos) const;
 
 signals:
     void placeRequested(lineward::PartKind kind, QPointF scenePos);
@@ -29,12 +31,15 @@ signals:
     void moveFinished(std::vector<lineward::PartId> parts, std::vector<QPointF> from,
                       std::vector<QPointF> to);
     void filesDropped(QStringList paths);
+    /// A right-click on a part or its badge: the part's review menu at a global point.
+    void partMenuRequested(lineward::PartId part, QPoint globalPos);
 
 protected:
     void mousePressEvent(QMouseEvent* e) override;
     void mouseMoveEvent(QMouseEvent* e) override;
     void mouseReleaseEvent(QMouseEvent* e) override;
     void wheelEvent(QWheelEvent* e) override;
+    void contextMenuEvent(QContextMenuEvent* e) override;
     void dragEnterEvent(QDragEnterEvent* e) override;
     void dragMoveEvent(QDragMoveEvent* e) override;
     void dropEvent(QDropEvent* e) override;

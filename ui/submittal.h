@@ -18,7 +18,8 @@ namespace lineward::ui {
 struct SubmittalOptions {
     QPageSize paper = QPageSize(QPageSize::Tabloid);
     QPageLayout::Orientation orientation = QPageLayout::Landscape;
-    /// Curve sheets for these parts; nothing: one per motor branch.
+    /// Curve sheets for these parts; nothing: every motor branch and every path with a
+    /// coordination or protection finding (report/curve_sheets.h).
     std::optional<std::vector<PartId>> curveParts;
     /// The one-line is tiled when fitting it on one page would shrink it below this scale.
     double minScale = 0.45;
@@ -29,6 +30,11 @@ struct SubmittalOptions {
     std::shared_ptr<const CheckResult> previous;
     QString previousName; ///< the previous revision's file, named in that line
     QString revision;     ///< the flags' revision; empty: the newest row of the revision table
+    /// The size the sheets will be printed at: 1 full size, 0.5 half size. Every text is sized
+    /// at least 2 mm (its font size) on that print (submittal_sheet.h).
+    double printScale = 1.0;
+    /// Named in the title block as CHECKED; empty: the drawing's checked_by.
+    QString checkedBy;
 };
 
 /// Paper by name ("letter", "legal", "tabloid", "a4", "a3"); nothing for other names.
@@ -39,6 +45,7 @@ struct SubmittalResult {
     int pages = 0;
     int oneLineSheets = 0;
     int revisionFlags = 0; ///< parts flagged as added or changed since the previous revision
+    double minTextPt = 0;  ///< the smallest text size used, in points on the page
     QString error;
 };
 /// Everything below reads one check result (the editor's newest, or the command line's one

@@ -44,6 +44,13 @@ const MotorFacts* CheckResult::motorFacts(PartId motor) const {
     return nullptr;
 }
 
+bool acceptanceCovers(const Accepted& a, const Finding& f) {
+    // An acceptance names the parts it covers; it applies when it covers the finding's first
+    // part (the part the finding is about).
+    return a.rule == f.ruleId && !f.parts.empty() &&
+           std::find(a.parts.begin(), a.parts.end(), f.parts.front()) != a.parts.end();
+}
+
 void guardFindingNumbers(std::vector<Finding>& findings) {
     for (auto& f : findings)
         for (auto* v : {&f.computed, &f.limit})
@@ -57,20 +64,25 @@ void guardFindingNumbers(std::vector<Finding>& findings) {
 
 namespace {
 
-void markAccepted(const Drawing& d, std::vector<Finding>& findings) {
+// Marks each finding an acceptance covers; returns the acceptances that cover none (stale).
+std::vector<std::size_t> markAccepted(const Drawing& d, std::vector<Finding>& findings) {
+    const auto& accepted = d.accepted();
+    std::vector<bool> used(accepted.size(), false);
     for (auto& f : findings) {
-        for (const auto& a : d.accepted()) {
-            if (a.rule != f.ruleId)
+        for (std::size_t i = 0; i < accepted.size(); ++i) {
+            const auto& a = accepted[i];
+            if (!acceptanceCovers(a, f))
                 continue;
-            // An acceptance names the parts it covers; it applies when it covers the finding's
-            // first part (the part the finding is about).
-            if (!f.parts.empty() &&
-                std::find(a.parts.begin(), a.parts.end(), f.parts.front()) != a.parts.end()) {
-                f.accepted = true;
-                f.acceptedNote = a.note + " (" + a.by + ", " + a.date + ")";
-            }
+            used[i] = true;
+            f.accepted = true;
+            f.acceptedNote = a.note + " (" + a.by + ", " + a.date + ")";
         }
     }
+    std::vector<std::size_t> stale;
+    for (std::size_t i = 0; i < accepted.size(); ++i)
+        if (!used[i])
+            stale.push_back(i);
+    return stale;
 }
 
 // Runs one stage; an internal error in it becomes a finding instead of ending the check (the
@@ -140,7 +152,11 @@ void analyse(CheckResult& r, std::vector<Finding>& out) {
 
 void finishReport(const Drawing& drawing, CheckReport& report) {
     guardFindingNumbers(report.findings);
-    markAccepted(drawing, report.findings);
+    report.staleAccepted = markAccepted(drawing, report.findings);
+    // A check that stopped early is missing findings: it cannot tell a stale acceptance.
+    if (std::any_of(report.findings.begin(), report.findings.end(),
+                    [](const Finding& f) { return f.ruleId == "check.incomplete"; }))
+        report.staleAccepted.clear();
     std::stable_sort(report.findings.begin(), report.findings.end(),
                      [](const Finding& a, const Finding& b) {
                          if (a.severity != b.severity)

@@ -34,6 +34,9 @@ struct CheckReport {
     /// Open (not accepted) findings by severity: note, caution, violation.
     std::array<int, 3> openCounts{0, 0, 0};
     int acceptedCount = 0;
+    /// Accepted deviations (indexes into Drawing::accepted()) that match no finding any longer:
+    /// the drawing changed under them. Listed, never silently kept.
+    std::vector<std::size_t> staleAccepted;
     /// True where an open finding is at or above `threshold`.
     bool hasOpenAtLeast(Severity threshold) const;
 };
@@ -79,6 +82,11 @@ std::shared_ptr<const CheckResult> runCheck(const Drawing& drawing, const Tables
 
 /// The findings of a check (tests and callers that want nothing else).
 CheckReport checkDrawing(const Drawing& drawing, const Tables& tables);
+
+/// Whether an accepted deviation covers a finding: the same rule, and the acceptance names the
+/// finding's first part (the part it is about). The one test the check, the editor and the
+/// Submittal use.
+bool acceptanceCovers(const Accepted& a, const Finding& f);
 
 /// Drops a finding's computed value or limit where it is not finite (there is no number to
 /// show), keeping the finding and saying so in its trace.

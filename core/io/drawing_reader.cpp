@@ -33,7 +33,7 @@ public:
                                   std::string(typeName(root))};
         checkKeys(root, "",
                   {"format", "version", "sheet", "revisions", "settings", "parts", "wires",
-                   "buckets", "accepted"});
+                   "buckets", "accepted", "comments"});
         if (!root.contains("format") || text(root.at("format"), "/format") != kFormatName)
             throw Failure{"/format", "expected \"format\": \"lineward\" (is this a Lineward "
                                      "drawing?)"};
@@ -59,6 +59,8 @@ public:
             readBuckets(root.at("buckets"), d);
         if (root.contains("accepted"))
             readAccepted(root.at("accepted"), d);
+        if (root.contains("comments"))
+            readComments(root.at("comments"), d);
         return d;
     }
 
@@ -350,6 +352,44 @@ private:
         }
     }
 
+    // Review comments: each pinned to an existing part, with an id of its own and some text.
+    void readComments(const json& j, Drawing& d) {
+        list(j, "/comments", m_limits.maxListItems);
+        std::unordered_set<std::uint32_t> ids;
+        for (std::size_t i = 0; i < j.size(); ++i) {
+            const std::string ptr = "/comments/" + std::to_string(i);
+            object(j[i], ptr);
+            checkKeys(j[i], ptr, {"id", "part", "by", "date", "text", "resolved"});
+            Comment c;
+            if (!j[i].contains("id"))
+                throw Failure{ptr, "review comment has no \"id\""};
+            c.id = idValue(j[i].at("id"), ptr + "/id");
+            if (!ids.insert(c.id).second)
+                throw Failure{ptr + "/id", "duplicate comment id " + std::to_string(c.id)};
+            if (!j[i].contains("part"))
+                throw Failure{ptr, "review comment " + std::to_string(c.id) +
+                                       " has no \"part\" (a comment is pinned to a part)"};
+            c.part = PartId(idValue(j[i].at("part"), ptr + "/part"));
+            if (!d.part(c.part))
+                throw Failure{ptr + "/part",
+                              "review comment " + std::to_string(c.id) + " is pinned to part " +
+                                  std::to_string(c.part.value) + ", which does not exist"};
+            c.by = optText(j[i], ptr, "by");
+            c.date = optText(j[i], ptr, "date");
+            c.text = optText(j[i], ptr, "text");
+            if (c.text.empty())
+                throw Failure{ptr, "review comment " + std::to_string(c.id) + " has no \"text\""};
+            if (j[i].contains("resolved")) {
+                if (!j[i].at("resolved").is_boolean())
+                    throw Failure{ptr + "/resolved",
+                                  "resolved must be true or false, found " +
+                                      std::string(typeName(j[i].at("resolved")))};
+                c.resolved = j[i].at("resolved").get<bool>();
+            }
+            d.comments().push_back(std::move(c));
+        }
+    }
+
     const LocatedJson& m_doc;
 };
 
@@ -364,6 +404,7 @@ JsonLimits parserLimits(const FileLimits& l) {
                     {"/buckets", l.maxBuckets},
                     {"/revisions", l.maxListItems},
                     {"/accepted", l.maxListItems},
+                    {"/comments", l.maxListItems},
                     {"/buckets/*/parts", l.maxListItems},
                     {"/accepted/*/parts", l.maxListItems}};
     return j;

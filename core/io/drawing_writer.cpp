@@ -155,7 +155,23 @@ std::string serializeDrawing(const Drawing& d) {
             j["note"] = a.note;
             return j;
         },
-        true);
+        d.comments().empty());
+    // Written only when there are any, so a drawing without comments keeps the bytes it had
+    // before comments existed.
+    if (!d.comments().empty())
+        writeList(
+            out, "comments", d.comments(),
+            [](const Comment& c) {
+                ojson j;
+                j["id"] = c.id;
+                j["part"] = c.part.value;
+                j["by"] = c.by;
+                j["date"] = c.date;
+                j["text"] = c.text;
+                j["resolved"] = c.resolved;
+                return j;
+            },
+            true);
     out += "}\n";
     return out;
 }

@@ -125,6 +125,7 @@ std::optional<Part> Drawing::removePart(PartId id) {
     std::erase_if(m_wires, [&](const Wire& w) { return w.a.part == id || w.b.part == id; });
     for (auto& b : m_buckets)
         std::erase(b.parts, id);
+    forgetReviewOf([&](PartId p) { return p == id; });
     reindex();
     return removed;
 }
@@ -203,8 +204,16 @@ std::vector<Part> Drawing::removeParts(const std::vector<PartId>& ids) {
     std::erase_if(m_wires, [&](const Wire& w) { return isGone(w.a.part) || isGone(w.b.part); });
     for (auto& b : m_buckets)
         std::erase_if(b.parts, isGone);
+    forgetReviewOf(isGone);
     reindex();
     return removed;
+}
+
+std::uint32_t Drawing::nextCommentId() const {
+    std::uint32_t top = 0;
+    for (const auto& c : m_comments)
+        top = std::max(top, c.id);
+    return top + 1;
 }
 
 std::vector<Wire> Drawing::removeWires(const std::vector<WireId>& ids) {

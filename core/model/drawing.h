@@ -1,4 +1,5 @@
-// The Drawing: sheet data, settings, parts, wires, buckets and accepted deviations.
+// The Drawing: sheet data, settings, parts, wires, buckets, accepted deviations and review
+// comments.
 #pragma once
 
 #include "model/ids.h"
@@ -89,6 +90,15 @@ struct Accepted {
     bool operator==(const Accepted&) const = default;
 };
 
+/// A reviewer's note pinned to one part: who, when, what, and whether it is resolved.
+struct Comment {
+    std::uint32_t id = 0; ///< unique among the drawing's comments; printed as "C<id>"
+    PartId part;
+    std::string by, date, text;
+    bool resolved = false;
+    bool operator==(const Comment&) const = default;
+};
+
 /// The whole one-line drawing: plain values, owned by value.
 class Drawing {
 public:
@@ -100,6 +110,10 @@ public:
     const std::vector<Bucket>& buckets() const { return m_buckets; }
     std::vector<Accepted>& accepted() { return m_accepted; }
     const std::vector<Accepted>& accepted() const { return m_accepted; }
+    std::vector<Comment>& comments() { return m_comments; }
+    const std::vector<Comment>& comments() const { return m_comments; }
+    /// The next unused comment id.
+    std::uint32_t nextCommentId() const;
 
     const Part* part(PartId id) const;
     Part* part(PartId id);
@@ -120,7 +134,8 @@ public:
     /// Adds many parts at once (the loader): one sort, so any id order costs n log n.
     /// Throws std::invalid_argument on an invalid or repeated id, leaving the drawing unchanged.
     void addParts(std::vector<Part> parts);
-    /// Removes a part and every wire on it; returns what was removed.
+    /// Removes a part and every wire on it (and its review comments, and its place in accepted
+    /// deviations, so the file never names a part that is gone); returns what was removed.
     std::optional<Part> removePart(PartId id);
     /// Adds a wire; its id must be unused. Both ends must name existing parts (checked by the
     /// loader and the editor, not here).
@@ -137,13 +152,14 @@ public:
 
     bool operator==(const Drawing& o) const {
         return sheet == o.sheet && settings == o.settings && m_parts == o.m_parts &&
-               m_wires == o.m_wires && m_buckets == o.m_buckets && m_accepted == o.m_accepted;
+               m_wires == o.m_wires && m_buckets == o.m_buckets && m_accepted == o.m_accepted &&
+               m_comments == o.m_comments;
     }
 
     // --- bulk edits: one pass and one reindex for many parts (Select All + Delete, undo); see
     // addParts / addWires above for adding many ---
-    /// Removes parts, every wire on them and their places in buckets; returns the removed
-    /// parts in id order.
+    /// Removes parts, every wire on them, their places in buckets and accepted deviations, and
+    /// their review comments; returns the removed parts in id order.
     std::vector<Part> removeParts(const std::vector<PartId>& ids);
     /// Removes wires; returns those removed in id order.
     std::vector<Wire> removeWires(const std::vector<WireId>& ids);
@@ -152,10 +168,18 @@ public:
 
 private:
     void reindex();
+    /// A removed part leaves the accepted deviations (one that names no part is then stale and
+    /// listed as such) and takes its review comments with it.
+    template <typename Gone> void forgetReviewOf(Gone gone) {
+        for (auto& a : m_accepted)
+            std::erase_if(a.parts, gone);
+        std::erase_if(m_comments, [&](const Comment& c) { return gone(c.part); });
+    }
     std::vector<Part> m_parts;
     std::vector<Wire> m_wires;
     std::vector<Bucket> m_buckets;
     std::vector<Accepted> m_accepted;
+    std::vector<Comment> m_comments;
     /// Id value to position in m_parts. A hash map, so memory follows the number of parts and
     /// never the size of an id (one part with id 4,000,000,000 costs one entry).
     std::unordered_map<std::uint32_t, std::size_t> m_partIndex;

@@ -32,12 +32,41 @@ std::string findingHeadline(const Finding& f) {
            escapeControls(f.message);
 }
 
+std::string checkStatusWords(const CheckReport& r) {
+    std::string out;
+    auto put = [&](int n, const char* one, const char* many) {
+        if (n > 0)
+            out += (out.empty() ? "" : ", ") + std::to_string(n) + " " + (n == 1 ? one : many);
+    };
+    put(r.openCounts[2], "open violation", "open violations");
+    put(r.openCounts[1], "open caution", "open cautions");
+    put(r.openCounts[0], "open note", "open notes");
+    if (out.empty())
+        out = "no open findings";
+    put(r.acceptedCount, "accepted", "accepted");
+    put(static_cast<int>(r.staleAccepted.size()), "stale acceptance", "stale acceptances");
+    return out;
+}
+
+std::string staleAcceptanceText(const Drawing& d, const Accepted& a) {
+    std::string tags;
+    for (auto id : a.parts)
+        if (const Part* p = d.part(id))
+            tags += (tags.empty() ? "" : ", ") + escapeControls(p->tag);
+    return escapeControls(a.rule) + " on " + (tags.empty() ? std::string("no part") : tags) +
+           " — accepted by " + escapeControls(a.by.empty() ? "(no name)" : a.by) + ", " +
+           escapeControls(a.date.empty() ? "(no date)" : a.date) + ": \"" + escapeControls(a.note) +
+           "\"";
+}
+
 std::string reportText(const Drawing& d, const CheckReport& r, const std::string& file) {
     std::ostringstream s;
     s << escapeControls(file) << ": " << r.openCounts[2] << " violation(s), " << r.openCounts[1]
       << " caution(s), " << r.openCounts[0] << " note(s)";
     if (r.acceptedCount)
         s << ", " << r.acceptedCount << " accepted";
+    if (!r.staleAccepted.empty())
+        s << ", " << r.staleAccepted.size() << " stale acceptance(s)";
     s << "\n";
     std::map<std::uint32_t, std::vector<const Finding*>> byPart;
     for (const auto& f : r.findings)
@@ -56,6 +85,11 @@ std::string reportText(const Drawing& d, const CheckReport& r, const std::string
             if (f->accepted)
                 s << "      accepted: " << escapeControls(f->acceptedNote) << "\n";
         }
+    }
+    if (!r.staleAccepted.empty()) {
+        s << "\nStale acceptances (they match no finding any longer; withdraw or renew them)\n";
+        for (auto i : r.staleAccepted)
+            s << "  " << staleAcceptanceText(d, d.accepted()[i]) << "\n";
     }
     return s.str();
 }
@@ -104,6 +138,17 @@ nlohmann::ordered_json reportJson(const Drawing& d, const CheckReport& r, const 
         list.push_back(std::move(e));
     }
     j["findings"] = list;
+    oj stale = oj::array();
+    for (auto i : r.staleAccepted) {
+        const Accepted& a = d.accepted()[i];
+        oj tags = oj::array();
+        for (auto id : a.parts)
+            if (const Part* p = d.part(id))
+                tags.push_back(p->tag);
+        stale.push_back(
+            {{"rule", a.rule}, {"parts", tags}, {"by", a.by}, {"date", a.date}, {"note", a.note}});
+    }
+    j["stale_accepted"] = stale;
     return j;
 }
 

@@ -11,9 +11,15 @@ namespace lineward {
 
 /// A readable report grouped by part, with each finding's numbers, trace and fix.
 std::string reportText(const Drawing& drawing, const CheckReport& report, const std::string& file);
-/// The report as JSON: {"file", "counts", "findings": [...]}.
+/// The report as JSON: {"file", "counts", "findings": [...], "stale_accepted": [...]}.
 nlohmann::ordered_json reportJson(const Drawing& drawing, const CheckReport& report,
                                   const std::string& file);
+/// The check status in words, for a title block: "3 open violations, 2 open cautions, 1
+/// accepted", or "no open findings" (", 1 accepted" where some are accepted).
+std::string checkStatusWords(const CheckReport& report);
+/// A stale acceptance in one line: "rule on TAGS — accepted by NAME, DATE: \"note\"" (text from
+/// the file with its control characters escaped).
+std::string staleAcceptanceText(const Drawing& drawing, const Accepted& accepted);
 /// One line: "violation · topology.unfed · common practice · message".
 std::string findingHeadline(const Finding& f);
 

@@ -7,8 +7,11 @@
 #include "studies/study.h"
 #include "studies/study_view.h"
 
+#include <algorithm>
+#include <array>
 #include <charconv>
 #include <cmath>
+#include <unordered_map>
 
 namespace lineward {
 
@@ -45,9 +48,65 @@ double dropPct(const StudyResults& r, const Network& net, const Flow& flow, cons
            100;
 }
 
+// The motor and every part of its branch, each once.
+std::vector<const Part*> branchParts(const MotorBranch& b) {
+    std::vector<const Part*> parts{b.motor};
+    for (const Part* p : b.chain)
+        if (std::find(parts.begin(), parts.end(), p) == parts.end())
+            parts.push_back(p);
+    for (const Part* p : {b.scpd, b.disconnect, b.contactor, b.overload})
+        if (p && std::find(parts.begin(), parts.end(), p) == parts.end())
+            parts.push_back(p);
+    for (const Part* p : b.cables)
+        if (std::find(parts.begin(), parts.end(), p) == parts.end())
+            parts.push_back(p);
+    return parts;
+}
+
 std::string faultAt(const StudyResults& r, NodeIndex n) {
     const auto* f = r.faultAtNode(n);
     return f ? fmt(f->ikKa, 2) : "";
+}
+
+// Open findings by severity and accepted ones, about one part or a few (a motor's branch).
+struct FindingTally {
+    std::array<int, 3> open{0, 0, 0};
+    int accepted = 0;
+    void add(const FindingTally& o) {
+        for (std::size_t i = 0; i < 3; ++i)
+            open[i] += o.open[i];
+        accepted += o.accepted;
+    }
+    std::string text() const {
+        static const char* names[3][2] = {
+            {"note", "notes"}, {"caution", "cautions"}, {"violation", "violations"}};
+        std::string out;
+        auto put = [&](int n, const std::string& what) {
+            if (n > 0)
+                out += (out.empty() ? "" : ", ") + std::to_string(n) + " " + what;
+        };
+        for (int i = 2; i >= 0; --i) {
+            const auto k = static_cast<std::size_t>(i);
+            put(open[k], names[k][open[k] == 1 ? 0 : 1]);
+        }
+        put(accepted, "accepted");
+        return out;
+    }
+};
+
+// Each finding counts once, for the part it is about (its first part).
+std::unordered_map<PartId, FindingTally> tallyFindings(const CheckReport& r) {
+    std::unordered_map<PartId, FindingTally> out;
+    for (const auto& f : r.findings) {
+        if (f.parts.empty())
+            continue;
+        auto& t = out[f.parts.front()];
+        if (f.accepted)
+            ++t.accepted;
+        else
+            ++t.open[static_cast<std::size_t>(f.severity)];
+    }
+    return out;
 }
 
 } // namespace
@@ -57,15 +116,16 @@ std::vector<Schedule> buildSchedules(const CheckResult& result) {
     Schedule motors{"motors",
                     {"Tag", "Rating", "Volts", "FLC A", "FLA A", "Short-circuit device",
                      "Contactor", "Overload A", "Class", "Conductor", "Length ft", "EGC", "Drop %",
-                     "Fault kA"},
+                     "Fault kA", "Findings"},
                     {}};
     Schedule cables{"cables",
                     {"Tag", "Material", "Size", "Sets", "Length ft", "Insulation °C", "Ampacity A",
-                     "Load A", "Drop at load end %", "Fault kA at line end"},
+                     "Load A", "Drop at load end %", "Fault kA at line end", "Findings"},
                     {}};
-    Schedule devices{"devices",
-                     {"Tag", "Kind", "Rating", "Interrupting kA", "Line-side fault kA", "Duty %"},
-                     {}};
+    Schedule devices{
+        "devices",
+        {"Tag", "Kind", "Rating", "Interrupting kA", "Line-side fault kA", "Duty %", "Findings"},
+        {}};
     // IEEE 1584-2018 arc-flash study of every bus and bucket (the governing case).
     Schedule arcflash{"arcflash",
                       {"Equipment", "Kind", "Volts", "Bolted kA", "Arcing kA", "Reduced kA",
@@ -94,6 +154,16 @@ std::vector<Schedule> buildSchedules(const CheckResult& result) {
     const Network& net = *result.net;
     const Flow& flow = *result.flow;
     const StudyResults& r = *result.study;
+    // The Findings column: what the check found about the row's part (a motor's row: about any
+    // part of its branch), open by severity and accepted.
+    const auto tally = tallyFindings(result.report);
+    auto findingsOf = [&](const std::vector<const Part*>& parts) {
+        FindingTally t;
+        for (const Part* p : parts)
+            if (auto it = tally.find(p->id); it != tally.end())
+                t.add(it->second);
+        return t.text();
+    };
     for (const auto& facts : result.motors) {
         const MotorBranch& b = facts.branch;
         const Part& m = *b.motor;
@@ -113,7 +183,8 @@ std::vector<Schedule> buildSchedules(const CheckResult& result) {
              cr ? (cr->sets > 1 ? std::to_string(cr->sets) + " × " : "") + cr->size : "",
              cr ? fmt(cr->lengthFt, 0) : "", cr ? cr->egcSize : "",
              std::isnan(drop) ? "" : fmt(drop, 2),
-             b.scpd ? faultAt(r, flow.lineNode(b.scpd->id)) : faultAt(r, net.nodeOf(m.id, 0))});
+             b.scpd ? faultAt(r, flow.lineNode(b.scpd->id)) : faultAt(r, net.nodeOf(m.id, 0)),
+             findingsOf(branchParts(b))});
     }
     for (const auto& p : d.parts()) {
         auto load = r.loadAmps.find(p.id);
@@ -121,19 +192,20 @@ std::vector<Schedule> buildSchedules(const CheckResult& result) {
             const auto cr = CableRatings::of(p);
             const auto amp = result.cableAmpacityA.find(p.id); // computed once by the check
             const double drop = dropPct(r, net, flow, p);
-            cables.rows.push_back(
-                {p.tag, cr.material == Material::Al ? "Al" : "Cu", cr.size, std::to_string(cr.sets),
-                 fmt(cr.lengthFt, 0), std::to_string(cr.insulationC),
-                 amp != result.cableAmpacityA.end() ? fmt(amp->second) : "",
-                 load == r.loadAmps.end() ? "" : fmt(load->second),
-                 std::isnan(drop) ? "" : fmt(drop, 2), faultAt(r, flow.lineNode(p.id))});
+            cables.rows.push_back({p.tag, cr.material == Material::Al ? "Al" : "Cu", cr.size,
+                                   std::to_string(cr.sets), fmt(cr.lengthFt, 0),
+                                   std::to_string(cr.insulationC),
+                                   amp != result.cableAmpacityA.end() ? fmt(amp->second) : "",
+                                   load == r.loadAmps.end() ? "" : fmt(load->second),
+                                   std::isnan(drop) ? "" : fmt(drop, 2),
+                                   faultAt(r, flow.lineNode(p.id)), findingsOf({&p})});
         } else if (kindInfo(p.kind).protective) {
             const auto* f = r.faultAtNode(flow.lineNode(p.id));
             const auto data = protectiveDataOf(p);
             const auto ic = data ? std::optional(data->interruptingKa) : std::nullopt;
             devices.rows.push_back({p.tag, std::string(kindInfo(p.kind).name), deviceText(&p),
                                     num(ic), f ? fmt(f->ikKa, 2) : "",
-                                    f && ic ? fmt(f->ikKa / *ic * 100, 0) : ""});
+                                    f && ic ? fmt(f->ikKa / *ic * 100, 0) : "", findingsOf({&p})});
         }
     }
     return {motors, cables, devices, arcflash};

@@ -9,6 +9,7 @@
 #include "main_window.h"
 #include "part_item.h"
 #include "plant_generator.h"
+#include "review_dialogs.h"
 #include "sheet_scene.h"
 #include "sheet_view.h"
 #include "ui_support.h"
@@ -20,7 +21,9 @@
 #include <QFile>
 #include <QLabel>
 #include <QLineEdit>
+#include <QPlainTextEdit>
 #include <QPushButton>
+#include <QSettings>
 #include <QTest>
 #include <QTimer>
 #include <QTreeWidget>
@@ -170,6 +173,28 @@ TEST(Editor, EveryCommandUndoesToTheSameBytes) {
         });
         user.press(Qt::Key_L, Qt::ControlModifier | Qt::ShiftModifier);
         EXPECT_NE(d.partByTag("P-131"), nullptr);
+    });
+    // The reviewer's name is already in the settings (asked once, earlier).
+    QSettings().setValue(kReviewerNameKey, "R. Quill");
+    auto commentOn = [&](const char* tag) {
+        user.clickPart(d.partByTag(tag)->id);
+        User::whenModalWidget(
+            [](QWidget* w) { return w->objectName() == "reviewNoteDialog"; },
+            [](QWidget* dialog) {
+                QTest::keyClicks(dialog->findChild<QPlainTextEdit*>("reviewNote"), "check this");
+                QTest::mouseClick(dialog->findChild<QPushButton*>("reviewOk"), Qt::LeftButton);
+            },
+            "review note dialog");
+        user.press(Qt::Key_M, Qt::ControlModifier); // Edit → Add Comment…
+    };
+    check("add comment", [&] { commentOn("P-101"); });
+    // Deleting a part takes its comment with it; undo must bring both back.
+    commentOn("F-103");
+    ASSERT_EQ(d.comments().size(), 1u);
+    check("delete a part with a comment", [&] {
+        user.clickPart(d.partByTag("F-103")->id);
+        user.press(Qt::Key_Delete);
+        EXPECT_TRUE(d.comments().empty());
     });
 }
 

@@ -31,6 +31,10 @@
 
 namespace lineward::ui::test {
 
+namespace {
+QString menuWords(QString text);
+} // namespace
+
 User::User(MainWindow& w) : m_w(w) {
     m_w.resize(1400, 900);
     m_w.show();
@@ -136,6 +140,37 @@ void User::clickEmptySheet() {
     QTest::mouseClick(m_w.view()->viewport(), Qt::LeftButton, {},
                       viewPoint(used.bottomRight() + QPointF(150, 150)));
     settle();
+}
+
+void User::rightClickPart(PartId id) {
+    PartItem* item = m_w.scene()->itemFor(id);
+    ASSERT_NE(item, nullptr);
+    const QPointF at = item->badge() || item->acceptedBadge()
+                           ? item->badgeScenePos()
+                           : item->mapToScene(item->shape().boundingRect().center());
+    QWidget* vp = m_w.view()->viewport();
+    const QPoint inWindow = vp->mapTo(&m_w, viewPoint(at));
+    // The window-level event: Qt turns a right press into the context-menu event, as it does
+    // for a person's mouse (a widget-level QTest event would skip that step).
+    QTest::mouseClick(m_w.windowHandle(), Qt::RightButton, {}, inWindow);
+    QApplication::processEvents();
+}
+
+bool User::choosePopupEntry(const QString& text) {
+    QTest::qWaitFor([] { return QApplication::activePopupWidget() != nullptr; }, 2000);
+    auto* menu = qobject_cast<QMenu*>(QApplication::activePopupWidget());
+    if (!menu)
+        return false;
+    for (QAction* a : menu->actions())
+        if (menuWords(a->text()) == text) {
+            const QPoint at = menu->actionGeometry(a).center();
+            QTest::mouseMove(menu, at);
+            QTest::mouseClick(menu, Qt::LeftButton, {}, at);
+            settle();
+            return true;
+        }
+    QTest::keyClick(menu, Qt::Key_Escape);
+    return false;
 }
 
 void User::dragPart(PartId id, QPointF by) {
@@ -258,6 +293,9 @@ namespace {
 QString menuWords(QString text) {
     return text.remove('&');
 }
+} // namespace
+
+namespace {
 
 // Opens the menus of `path` (all of it, or all but its last entry) by clicking; returns the
 // menu shown last, or nothing after reporting a failure.

@@ -33,6 +33,11 @@ public:
     void clickPart(PartId id);
     /// Clicks an empty place of the Sheet.
     void clickEmptySheet();
+    /// A right-click on the part's badge (or its symbol where it has none), through the window
+    /// as the platform delivers it, so the Sheet gets its context-menu event.
+    void rightClickPart(PartId id);
+    /// Clicks the entry shown as `text` in the menu that is up (a context menu); false if none.
+    bool choosePopupEntry(const QString& text);
     /// Press-move-release of a part's symbol by a scene offset.
     void dragPart(PartId id, QPointF by);
 

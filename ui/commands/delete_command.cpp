@@ -1,4 +1,5 @@
-// DeleteCommand: undo restores parts, then wires, then the buckets exactly as they were.
+// DeleteCommand: undo restores parts, then wires, then the buckets and the review state exactly
+// as they were.
 #include "commands/delete_command.h"
 
 #include <algorithm>
@@ -7,7 +8,8 @@
 namespace lineward::ui {
 
 DeleteCommand::DeleteCommand(Document& doc, std::vector<PartId> parts, std::vector<WireId> wires)
-    : m_doc(doc) {
+    : m_doc(doc), m_acceptedBefore(doc.drawing().accepted()),
+      m_commentsBefore(doc.drawing().comments()) {
     const Drawing& d = doc.drawing();
     std::set<std::uint32_t> partSet;
     for (auto id : parts)
@@ -51,6 +53,9 @@ void DeleteCommand::undo() {
     m_doc.addParts(m_parts);
     m_doc.addWires(m_wires);
     m_doc.replaceBuckets(m_bucketsBefore);
+    if (m_doc.drawing().accepted() != m_acceptedBefore ||
+        m_doc.drawing().comments() != m_commentsBefore)
+        m_doc.setReview(m_acceptedBefore, m_commentsBefore);
 }
 
 } // namespace lineward::ui

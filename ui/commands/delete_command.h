@@ -20,6 +20,10 @@ private:
     std::vector<Part> m_parts;
     std::vector<Wire> m_wires;
     std::vector<Bucket> m_bucketsBefore;
+    // The parts leave the accepted deviations and take their comments with them (core); undo
+    // puts the review state back as it was.
+    std::vector<Accepted> m_acceptedBefore;
+    std::vector<Comment> m_commentsBefore;
 };
 
 } // namespace lineward::ui

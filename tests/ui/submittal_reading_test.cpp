@@ -1,0 +1,147 @@
+// The Submittal read as an authority's reviewer reads it: every word at least the readable size
+// on the chosen paper (and on a half-size print), the check status in words with who checked,
+// a legend of our symbols, the clean drawing's message as a sentence, the findings summary and
+// the accepted deviations on one page, and a curve sheet with axis titles for every path with a
+// protection finding.
+#include "check/check.h"
+#include "io/drawing_file.h"
+#include "report/curve_sheets.h"
+#include "report/report_format.h"
+#include "submittal.h"
+#include "submittal_sheet.h"
+#include "ui_support.h"
+
+#include <QProcess>
+#include <QRegularExpression>
+#include <gtest/gtest.h>
+
+using namespace lineward;
+using namespace lineward::ui;
+
+namespace {
+
+Drawing sample(const char* name) {
+    return *io::loadDrawing(test::samplePath(name).toStdString()).drawing;
+}
+
+QString run(const QString& program, const QStringList& args) {
+    QProcess p;
+    p.start(program, args);
+    p.waitForFinished(60000);
+    return QString::fromUtf8(p.readAllStandardOutput());
+}
+
+QString pageText(const QString& pdf, int page) {
+    return run("pdftotext", {"-f", QString::number(page), "-l", QString::number(page), pdf, "-"})
+        .simplified();
+}
+
+// The smallest word box in the PDF, in points, from poppler's word boxes (pdftotext -bbox).
+// A box spans the font's ascent to its descent: more than the type size itself.
+double smallestWordBox(const QString& pdf, QString* word) {
+    const QString html = run("pdftotext", {"-bbox", pdf, "-"});
+    static const QRegularExpression re(
+        R"re(<word xMin="([\d.]+)" yMin="([\d.]+)" xMax="([\d.]+)" yMax="([\d.]+)">([^<]*)</word>)re");
+    double least = 1e9;
+    for (auto it = re.globalMatch(html); it.hasNext();) {
+        const auto m = it.next();
+        const double w = m.captured(3).toDouble() - m.captured(1).toDouble();
+        double h = m.captured(4).toDouble() - m.captured(2).toDouble();
+        // A turned word (the time axis title, a vertical match line) has its box turned: a
+        // letter's size is then its width. A word of several letters taller than wide is turned
+        // (or too narrow to tell): left out; a single letter counts by its larger side.
+        if (m.captured(5).size() == 1)
+            h = std::max(w, h);
+        else if (h > w)
+            continue;
+        if (h < least) {
+            least = h;
+            *word = m.captured(5);
+        }
+    }
+    return least;
+}
+
+SubmittalResult write(const Drawing& d, const QString& pdf, SubmittalOptions o) {
+    return writeSubmittalPdf(pdf, runCheck(d, *test::sharedTables()), test::sharedTables(), o);
+}
+
+} // namespace
+
+TEST(SubmittalReading, NoWordIsSmallerThanTheReadableSize) {
+    const Drawing d = sample("kestrel-mill-mcc1-review.lineward");
+    const QString dir = test::tempDir("reading-size");
+    for (const auto& [paper, scale] : std::vector<std::pair<const char*, double>>{
+             {"tabloid", 1.0}, {"a3", 1.0}, {"tabloid", 0.5}}) {
+        SubmittalOptions o;
+        o.paper = *paperByName(paper);
+        o.printScale = scale;
+        const QString pdf = dir + "/" + paper + QString::number(scale) + ".pdf";
+        const auto r = write(d, pdf, o);
+        ASSERT_TRUE(r.error.isEmpty()) << r.error.toStdString();
+        // 2 mm (submittal_sheet.h) on the print, after its scale.
+        EXPECT_GE(r.minTextPt * scale * 25.4 / 72, kMinTextMm * 0.999) << paper;
+        QString word;
+        const double box = smallestWordBox(pdf, &word);
+        ASSERT_LT(box, 1e9) << "pdftotext (poppler-utils) is needed";
+        // The smallest word's box (ascent to descent, about 1.16 em for our sans serif) holds
+        // at least the minimum size: no word was set smaller than minTextPt.
+        EXPECT_GE(box, r.minTextPt * 0.99) << paper << " " << scale << ": \"" << word.toStdString()
+                                           << "\" is set in " << box << " pt";
+    }
+}
+
+TEST(SubmittalReading, TitleBlockLegendStatusAndPages) {
+    const Drawing d = sample("kestrel-mill-mcc1-review.lineward");
+    const auto result = runCheck(d, *test::sharedTables());
+    const QString pdf = test::tempDir("reading") + "/review.pdf";
+    SubmittalOptions o;
+    o.checkedBy = "R. Quill";
+    o.date = "2026-12-03";
+    const auto r = writeSubmittalPdf(pdf, result, test::sharedTables(), o);
+    ASSERT_TRUE(r.error.isEmpty()) << r.error.toStdString();
+    const QString first = pageText(pdf, 1);
+    ASSERT_FALSE(first.isEmpty()) << "pdftotext (poppler-utils) is needed";
+    // The status in words, from the same check result; who checked and when.
+    const QString status = QString::fromStdString(checkStatusWords(result->report));
+    EXPECT_TRUE(
+        status.startsWith(QString::number(result->report.openCounts[2]) + " open violations"))
+        << status.toStdString();
+    EXPECT_TRUE(first.contains("CHECK STATUS: " + status.left(20))) << first.toStdString();
+    EXPECT_TRUE(first.contains("CHECKED R. Quill")) << first.toStdString();
+    EXPECT_TRUE(first.contains("DATE 2026-12-03"));
+    EXPECT_TRUE(first.contains("LEGEND"));
+    EXPECT_TRUE(first.contains("open violation"));
+    EXPECT_TRUE(first.contains("accepted (none open)"));
+    // The findings summary and the accepted deviations share the page after the one-line.
+    const QString findingsPage = pageText(pdf, r.oneLineSheets + 1);
+    EXPECT_TRUE(findingsPage.contains("Findings summary"));
+    EXPECT_TRUE(findingsPage.contains("Accepted deviations")) << "a page of its own";
+    // A curve sheet for the lighting feeder's cable (conductor.protection, no motor), with
+    // axis titles and the available fault.
+    const QString all = run("pdftotext", {pdf, "-"}).simplified();
+    EXPECT_TRUE(all.contains("Curves C-LP1"));
+    EXPECT_TRUE(all.contains("Time in s"));
+    EXPECT_TRUE(all.contains("Current in A at 480 V"));
+    EXPECT_TRUE(all.contains("available fault"));
+    // One curve sheet per path curveSheetParts names: each sheet's title block says so.
+    EXPECT_EQ(all.count("— Curves "), static_cast<int>(curveSheetParts(*result).size()));
+}
+
+TEST(SubmittalReading, TheCleanDrawingSaysSoInASentence) {
+    const Drawing d = sample("kestrel-mill-mcc1.lineward");
+    const QString pdf = test::tempDir("reading-clean") + "/clean.pdf";
+    SubmittalOptions o;
+    o.curveParts = std::vector<PartId>{};
+    const auto r = write(d, pdf, o);
+    ASSERT_TRUE(r.error.isEmpty());
+    const QString page = pageText(pdf, r.oneLineSheets + 1);
+    EXPECT_TRUE(page.contains("The check found no open violations or cautions in this drawing"))
+        << page.left(600).toStdString();
+    // No open violation or caution; the status says what there is, in words.
+    const auto report = runCheck(d, *test::sharedTables())->report;
+    ASSERT_EQ(report.openCounts[2] + report.openCounts[1], 0);
+    EXPECT_TRUE(pageText(pdf, 1).contains("CHECK STATUS: " +
+                                          QString::fromStdString(checkStatusWords(report))))
+        << pageText(pdf, 1).toStdString();
+}
