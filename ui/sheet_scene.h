@@ -51,6 +51,8 @@ private:
     void selectionLost();
     void deleteItem(QGraphicsItem* item); ///< a selected one tells selectionChanged once, later
     void refreshBadges();
+    void refreshBucketMarks(); ///< each bucket's arc-flash mark from the check result
+    static QString arcFlashMarkText(const ArcFlashEquipment& e);
     void onPartAdded(PartId id);
     void onPartRemoved(PartId id);
     void onPartChanged(PartId id);

@@ -1,6 +1,7 @@
 // Submittal layout of our own: a thin frame, a title block strip along the bottom of every
 // page (project, title, drawing number, sheet n of m, revisions, drawn/checked, date, caution),
-// the one-line scaled or tiled with match lines, then text pages and curve sheets.
+// the one-line scaled or tiled with match lines, then text pages, curve sheets and the
+// arc-flash labels.
 #include "submittal.h"
 
 #include "compare/drawing_compare.h"
@@ -8,6 +9,7 @@
 #include "curves/path_curves.h"
 #include "curves_plot.h"
 #include "document.h"
+#include "label_sheet.h"
 #include "part_item.h"
 #include "report/report_format.h"
 #include "report/schedules.h"
@@ -331,6 +333,7 @@ struct SubmittalData {
     std::vector<PartId> curveParts;
     std::vector<TextTable> tables; ///< findings, accepted deviations, schedules
     QString revisionNote;
+    std::vector<ArcFlashLabel> labels; ///< one per bus and bucket, after the curve sheets
 };
 
 // Flags each part added or changed since the previous revision; returns the revision table's
@@ -393,7 +396,9 @@ int countPages(const QPaintDevice& dev, const SubmittalData& s, const SubmittalO
     for (const auto& t : s.tables)
         pages += static_cast<int>(
             layoutTable(dev, QFont(), bodyRect(dev), t.rows, t.widths).pageStarts.size());
-    return pages + static_cast<int>(s.curveParts.size());
+    const auto perPage = static_cast<std::size_t>(labelGridFor(bodyRect(dev)).perPage());
+    const auto labelPages = (s.labels.size() + perPage - 1) / perPage;
+    return pages + static_cast<int>(s.curveParts.size() + labelPages);
 }
 
 // Lays out and paints every page; returns the page count (and one-line sheet count).
@@ -412,6 +417,14 @@ int paintPages(QPagedPaintDevice& dev, const SubmittalData& s, const SubmittalOp
         nextPage(c);
         titleBlock(c, "Curves " + qs(s.d.part(id)->tag));
         paintCurves(painter, c.body(), s.view ? buildCurveSet(*s.view, id) : CurveSet{});
+    }
+    // The arc-flash labels at their printed size, as the label stock carries them.
+    const auto perPage = static_cast<std::size_t>(labelGridFor(c.body()).perPage());
+    for (std::size_t first = 0; first < s.labels.size(); first += perPage) {
+        nextPage(c);
+        titleBlock(c, "Arc-flash labels");
+        if (!paintLabelGrid(painter, c.body(), s.labels, first, s.d) && error.isEmpty())
+            error = "an arc-flash label does not fit its place on the Submittal";
     }
     painter.end();
     return c.pageNo;
@@ -451,6 +464,7 @@ SubmittalResult paintSubmittal(QPagedPaintDevice& dev, std::shared_ptr<const Che
         for (const auto& m : result->motors)
             data.curveParts.push_back(m.branch.motor->id);
     const QString date = o.date.isEmpty() ? QDate::currentDate().toString(Qt::ISODate) : o.date;
+    data.labels = arcFlashLabels(*result, date.toStdString());
     // "Sheet n of m" needs m first: the layout counts the pages without painting them, then
     // each page is painted once.
     const int pages = countPages(dev, data, o);

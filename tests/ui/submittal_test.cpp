@@ -48,8 +48,8 @@ QString pdfInfo(const QString& pdf) {
 TEST(Submittal, PdfHoldsEveryTagEveryRuleAndTheCaution) {
     const Drawing d = sample("kestrel-mill-mcc1-review.lineward");
     const QString pdf = test::tempDir("submittal") + "/review.pdf";
-    auto r = writeSubmittalPdf(pdf, runCheck(d, *test::sharedTables()), test::sharedTables(),
-                               SubmittalOptions{});
+    const auto checked = runCheck(d, *test::sharedTables());
+    auto r = writeSubmittalPdf(pdf, checked, test::sharedTables(), SubmittalOptions{});
     ASSERT_TRUE(r.error.isEmpty()) << r.error.toStdString();
     EXPECT_GE(r.pages, 5);
     EXPECT_TRUE(pdfInfo(pdf).contains(QString("Pages: %1").arg(r.pages).simplified()) ||
@@ -70,6 +70,11 @@ TEST(Submittal, PdfHoldsEveryTagEveryRuleAndTheCaution) {
     EXPECT_TRUE(text.contains("Findings summary"));
     EXPECT_TRUE(text.contains("Schedule — motors"));
     EXPECT_TRUE(text.contains("Curves P-101"));
+    // The arc-flash labels close it: one per bus and bucket, at their printed size.
+    ASSERT_TRUE(checked->arcFlash);
+    EXPECT_TRUE(text.contains("Arc-flash labels"));
+    EXPECT_EQ(text.count("ARC-FLASH HAZARD"), static_cast<int>(checked->arcFlash->size()));
+    EXPECT_EQ(text.count("NEC 110.16(B)"), 1); // SWBD-1, the service equipment
 }
 
 TEST(Submittal, PaperSizesAndOrientation) {
