@@ -70,7 +70,7 @@ if(NOT rc EQUAL 0 OR NOT info MATCHES "Pages: +16\n" OR NOT info MATCHES "288 x 
   message(FATAL_ERROR "the 4 x 6 in label PDF is not 16 pages of 288 x 432 pt:\n${info}")
 endif()
 execute_process(COMMAND pdftotext ${OUT}/labels/mill.pdf - OUTPUT_VARIABLE text)
-if(NOT text MATCHES "2026-12-03" OR NOT text MATCHES "NEC 110.16\\(B\\)" OR NOT text MATCHES "does not replace")
+if(NOT text MATCHES "2026-12-03" OR NOT text MATCHES "NEC 110.16\\(B\\)" OR NOT text MATCHES "does not[ \n]+replace")
   message(FATAL_ERROR "the labels lack the date, the service block or the caution:\n${text}")
 endif()
 execute_process(COMMAND ${CLI} labels ${SAMPLES}/kestrel-mill-mcc1-review.lineward --out ${OUT}/labels/review.pdf

@@ -2,6 +2,7 @@
 // holds every tag, every finding's rule and the caution; CSVs equal the study; the SVG is
 // well-formed and names every part; a large one-line tiles with match lines.
 #include "check/check.h"
+#include "curves/arc_flash_study.h"
 #include "io/drawing_file.h"
 #include "plant_generator.h"
 #include "report/report_format.h"
@@ -14,8 +15,8 @@
 #include <QFile>
 #include <QPrinter>
 #include <QProcess>
-#include <complex>
 #include <QXmlStreamReader>
+#include <complex>
 #include <gtest/gtest.h>
 #include <regex>
 
@@ -28,12 +29,17 @@ Drawing sample(const char* name) {
     return *io::loadDrawing(test::samplePath(name).toStdString()).drawing;
 }
 
-// pdftotext output with runs of white space folded to one space.
+// pdftotext output with runs of white space folded to one space, and the font's "fi" and "fl"
+// ligatures (pdftotext gives U+FB01, U+FB02: "arcflash" comes back as "arc\uFB02ash") as
+// letters.
 QString pdfText(const QString& pdf) {
     QProcess p;
     p.start("pdftotext", {"-layout", pdf, "-"});
     p.waitForFinished(60000);
-    return QString::fromUtf8(p.readAllStandardOutput()).simplified();
+    return QString::fromUtf8(p.readAllStandardOutput())
+        .simplified()
+        .replace(QChar(0xFB01), "fi")
+        .replace(QChar(0xFB02), "fl");
 }
 
 QString pdfInfo(const QString& pdf) {
@@ -125,7 +131,8 @@ TEST(Submittal, SchedulesCsvGivesTheHandCalculatedFault) {
     auto loaded = io::parseDrawing(text, "hand.lineward");
     ASSERT_TRUE(loaded) << loaded.error->text();
     const QString dir = test::tempDir("csv");
-    ASSERT_TRUE(writeScheduleCsvs(dir, *runCheck(*loaded.drawing, *test::sharedTables())).isEmpty());
+    ASSERT_TRUE(
+        writeScheduleCsvs(dir, *runCheck(*loaded.drawing, *test::sharedTables())).isEmpty());
     QFile f(dir + "/cables.csv");
     ASSERT_TRUE(f.open(QIODevice::ReadOnly));
     const QString csv = QString::fromUtf8(f.readAll());
