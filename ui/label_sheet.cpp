@@ -97,6 +97,29 @@ struct Flow {
         }
         y += h + 1;
     }
+    // A value in a large font with a note after it in a smaller one, on one line, bottoms
+    // aligned; the note goes below where the line is too narrow for both.
+    void valueWithNote(const QString& value, const QFont& vf, const QString& note,
+                       const QFont& nf) {
+        const QFontMetricsF vm(vf, p.device()), nm(nf, p.device());
+        const double vw = vm.horizontalAdvance(value), nw = nm.horizontalAdvance(note);
+        if (vw + 8 + nw > width()) {
+            text(value, vf);
+            text(note, nf);
+            return;
+        }
+        if (y + vm.height() > bottom) {
+            fits = false;
+            return;
+        }
+        if (!dry) {
+            p.setFont(vf);
+            p.drawText(QPointF(left, y + vm.ascent()), value);
+            p.setFont(nf);
+            p.drawText(QPointF(left + vw + 8, y + vm.ascent()), note);
+        }
+        y += vm.height();
+    }
     void rule() {
         if (y + 4 > bottom) {
             fits = false;
@@ -120,12 +143,12 @@ QString volts(double v) {
 void energyText(Flow& in, const ArcFlashLabel& l) {
     if (l.computed) {
         in.text(QObject::tr("Incident energy at the working distance"), labelFont(kSmallPt));
-        in.text(QString::fromUtf8("%1 cal/cm²   (%2 J/cm²)")
-                    .arg(QString::number(l.energyCal, 'f', 1), QString::number(l.energyJ, 'f', 1)),
-                labelFont(17, true));
+        in.valueWithNote(QString::fromUtf8("%1 cal/cm²").arg(QString::number(l.energyCal, 'f', 1)),
+                         labelFont(17, true),
+                         QString::fromUtf8("(%1 J/cm²)").arg(QString::number(l.energyJ, 'f', 1)),
+                         labelFont(11, true));
         if (l.aboveLimit)
-            in.text(QString::fromUtf8("Above 40 cal/cm²: do not work on it energized "
-                                      "(common practice)"),
+            in.text(QString::fromUtf8("Above 40 cal/cm²: work on it de-energized only"),
                     labelFont(kSmallPt + 0.5, true));
     } else {
         in.text(QObject::tr("Incident energy not computed"), labelFont(11, true));

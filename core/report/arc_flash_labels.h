@@ -12,9 +12,8 @@ namespace lineward {
 
 /// The caution every label carries.
 inline constexpr const char* kArcFlashLabelCaution =
-    "Computed by the IEEE 1584-2018 model from the drawing's data. This study supports, and "
-    "does not replace, a licensed engineer's arc-flash risk assessment and the local code. "
-    "Verify before work; de-energize where possible.";
+    "IEEE 1584-2018 model on the drawing's data. This study supports, and does not replace, a "
+    "licensed engineer's arc-flash risk assessment and the local code. Verify before work.";
 
 /// NEC 2023 110.16(B): what service equipment's label adds.
 struct ServiceLabelData {
