@@ -1,8 +1,12 @@
 // File → Arc-Flash Labels… in the real window: the stock chosen in its dialog by keys, the PDF
 // named in the file dialog, and the labels read back from the PDF (poppler's pdfinfo and
 // pdftotext): one per bus and bucket, four to a letter sheet, the service block once.
+#include "check/check.h"
 #include "curves/arc_flash_study.h"
+#include "io/drawing_file.h"
+#include "label_sheet.h"
 #include "main_window.h"
+#include "model/ratings.h"
 #include "ui_support.h"
 #include "user.h"
 
@@ -13,6 +17,7 @@
 #include <QRegularExpression>
 #include <QStatusBar>
 #include <QTest>
+#include <algorithm>
 #include <gtest/gtest.h>
 
 using namespace lineward;
@@ -73,4 +78,29 @@ TEST(LabelsWindow, FileMenuWritesOneLabelPerBusAndBucketOnTheChosenStock) {
     for (const auto& e : *af)
         EXPECT_TRUE(text.contains(QString::fromStdString(e.tag))) << e.tag;
     EXPECT_TRUE(w.statusBar()->currentMessage().contains(QString("%1 labels").arg(labels)));
+}
+
+TEST(LabelSheet, TheLongestLabelsFitTheSmallestStock) {
+    // The fullest label there is — above 40 cal/cm² (its extra line) on service equipment (the
+    // NEC 110.16(B) block) — and one outside the model (its reason instead of the energy) must
+    // fit a 4 x 5 in label; a label that does not fit is refused, never clipped.
+    auto loaded = io::loadDrawing(test::samplePath("kestrel-mill-mcc1.lineward").toStdString());
+    ASSERT_TRUE(loaded);
+    Drawing d = *loaded.drawing;
+    ASSERT_FALSE(d.part(d.partByTag("CB-MAIN")->id)->set("st_pickup_x", 10.0));
+    d.settings.arcFlashMaxTimeS = 5; // the arc on the long-time band lasts up to 5 s
+    ASSERT_FALSE(d.part(d.partByTag("MCC-1")->id)->set(BusRatings::kAfGapMm, 150.0));
+    const auto result = runCheck(d, *test::sharedTables());
+    const auto labels = arcFlashLabels(*result, "2026-12-03");
+    const auto swbd = std::find_if(labels.begin(), labels.end(),
+                                   [](const ArcFlashLabel& l) { return l.tag == "SWBD-1"; });
+    ASSERT_NE(swbd, labels.end());
+    ASSERT_TRUE(swbd->aboveLimit && swbd->service) << swbd->energyCal;
+    const QString pdf = test::tempDir("labels-fit") + "/edge.pdf";
+    const auto r = writeLabelsPdf(pdf, *result, LabelStock::Letter4x4x5, "2026-12-03");
+    EXPECT_TRUE(r.error.isEmpty()) << r.error.toStdString();
+    EXPECT_EQ(r.pages, (static_cast<int>(labels.size()) + 3) / 4);
+    const QString text = run("pdftotext", {pdf, "-"}).simplified();
+    EXPECT_TRUE(text.contains("work on it de-energized only"));
+    EXPECT_TRUE(text.contains("Incident energy not computed"));
 }
