@@ -36,6 +36,8 @@ void addTripCommand(CLI::App& app, int& exitCode);
 void addCurvesCommand(CLI::App& app, const TablesRef& tables, int& exitCode);
 /// `export FILE [--pdf OUT] [--svg OUT] [--csv DIR] [--paper NAME] [--portrait]`
 void addExportCommand(CLI::App& app, const TablesRef& tables, int& exitCode);
+/// `labels FILE --out FILE.pdf [--stock NAME] [--date DATE]` (needs the Qt renderer)
+void addLabelsCommand(CLI::App& app, const TablesRef& tables, int& exitCode);
 /// Creates the Qt application that painting needs, offscreen when there is no display.
 void ensureGuiApplication();
 /// `study FILE [--json]`

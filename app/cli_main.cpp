@@ -28,6 +28,7 @@ int main(int argc, char** argv) {
 #ifdef LINEWARD_WITH_QT
     lineward::cli::addCurvesCommand(app, tables, exitCode);
     lineward::cli::addExportCommand(app, tables, exitCode);
+    lineward::cli::addLabelsCommand(app, tables, exitCode);
 #endif
     try {
         app.parse(argc, argv);

@@ -31,16 +31,17 @@ if(NOT rc EQUAL 0 OR NOT EXISTS ${OUT}/export/review.pdf OR NOT EXISTS ${OUT}/ex
   message(FATAL_ERROR "export failed (${rc}): ${out} ${err}")
 endif()
 # Revision flags: the issued revision against the colleague's earlier layout flags each part
-# added or changed since (23: 1 added, 22 changed, as `compare` lists them), and the revision
+# added or changed since (24: 1 added, 23 changed, as `compare` lists them; the issued revision
+# also lowered CB-MAIN's short-time pickup for arc flash), and the revision
 # table says so on the one-line sheet; a previous revision that cannot be read exits 2.
 execute_process(COMMAND ${CLI} export ${SAMPLES}/kestrel-mill-mcc1.lineward --pdf ${OUT}/export/revised.pdf
                         --since ${SAMPLES}/kestrel-mill-mcc1-review.lineward
                 RESULT_VARIABLE rc OUTPUT_VARIABLE out ERROR_VARIABLE err)
-if(NOT rc EQUAL 0 OR NOT out MATCHES "23 part\\(s\\) flagged as revised")
+if(NOT rc EQUAL 0 OR NOT out MATCHES "24 part\\(s\\) flagged as revised")
   message(FATAL_ERROR "export --since: (${rc}) ${out} ${err}")
 endif()
 execute_process(COMMAND pdftotext -f 1 -l 1 ${OUT}/export/revised.pdf - OUTPUT_VARIABLE page1 RESULT_VARIABLE rc)
-if(NOT rc EQUAL 0 OR NOT page1 MATCHES "FLAG B: 23 PARTS")
+if(NOT rc EQUAL 0 OR NOT page1 MATCHES "FLAG B: 24 PARTS")
   message(FATAL_ERROR "the one-line sheet lacks the revision flags' line:\n${page1}")
 endif()
 file(WRITE ${OUT}/export/broken.lineward "{\n  \"format\": \"lineward\",\n")
@@ -52,4 +53,39 @@ endif()
 execute_process(COMMAND ${CLI} export ${SAMPLES}/kestrel-mill-mcc1.lineward --pdf ${OUT}/x.pdf --paper b5 RESULT_VARIABLE rc)
 if(NOT rc EQUAL 2)
   message(FATAL_ERROR "a bad paper must exit 2, got ${rc}")
+endif()
+
+# labels, headless: one label per bus and bucket (the clean sample has 3 buses and 13 buckets),
+# one 4 x 6 in label per page by default, four 4 x 5 in labels per letter sheet with letter-4;
+# a bad stock or date exits 2 and writes nothing.
+file(REMOVE_RECURSE ${OUT}/labels)
+execute_process(COMMAND ${CLI} labels ${SAMPLES}/kestrel-mill-mcc1.lineward --out ${OUT}/labels/mill.pdf
+                        --date 2026-12-03
+                RESULT_VARIABLE rc OUTPUT_VARIABLE out ERROR_VARIABLE err)
+if(NOT rc EQUAL 0 OR NOT EXISTS ${OUT}/labels/mill.pdf OR NOT out MATCHES "16 labels on 16 pages")
+  message(FATAL_ERROR "labels failed (${rc}): ${out} ${err}")
+endif()
+execute_process(COMMAND pdfinfo ${OUT}/labels/mill.pdf OUTPUT_VARIABLE info RESULT_VARIABLE rc)
+if(NOT rc EQUAL 0 OR NOT info MATCHES "Pages: +16\n" OR NOT info MATCHES "288 x 432 pts")
+  message(FATAL_ERROR "the 4 x 6 in label PDF is not 16 pages of 288 x 432 pt:\n${info}")
+endif()
+execute_process(COMMAND pdftotext ${OUT}/labels/mill.pdf - OUTPUT_VARIABLE text)
+if(NOT text MATCHES "2026-12-03" OR NOT text MATCHES "NEC 110.16\\(B\\)" OR NOT text MATCHES "does not[ \n]+replace")
+  message(FATAL_ERROR "the labels lack the date, the service block or the caution:\n${text}")
+endif()
+execute_process(COMMAND ${CLI} labels ${SAMPLES}/kestrel-mill-mcc1-review.lineward --out ${OUT}/labels/review.pdf
+                        --stock letter-4
+                RESULT_VARIABLE rc OUTPUT_VARIABLE out ERROR_VARIABLE err)
+execute_process(COMMAND pdfinfo ${OUT}/labels/review.pdf OUTPUT_VARIABLE info)
+if(NOT rc EQUAL 0 OR NOT out MATCHES "16 labels on 4 pages" OR NOT info MATCHES "Pages: +4\n"
+   OR NOT info MATCHES "612 x 792 pts")
+  message(FATAL_ERROR "labels --stock letter-4 (${rc}): ${out} ${err}\n${info}")
+endif()
+execute_process(COMMAND ${CLI} labels ${SAMPLES}/kestrel-mill-mcc1.lineward --out ${OUT}/labels/x.pdf --stock a7 RESULT_VARIABLE rc)
+if(NOT rc EQUAL 2 OR EXISTS ${OUT}/labels/x.pdf)
+  message(FATAL_ERROR "a bad stock must exit 2 and write nothing, got ${rc}")
+endif()
+execute_process(COMMAND ${CLI} labels ${SAMPLES}/kestrel-mill-mcc1.lineward --out ${OUT}/labels/x.pdf --date 3.12.26 RESULT_VARIABLE rc ERROR_VARIABLE err)
+if(NOT rc EQUAL 2 OR EXISTS ${OUT}/labels/x.pdf OR NOT err MATCHES "YYYY-MM-DD")
+  message(FATAL_ERROR "a bad date must exit 2 and say why, got ${rc}: ${err}")
 endif()

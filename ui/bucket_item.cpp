@@ -6,7 +6,9 @@
 
 #include <QFontMetricsF>
 #include <QPainter>
+#include <QPainterPath>
 #include <QStyleOptionGraphicsItem>
+#include <algorithm>
 
 namespace lineward::ui {
 
@@ -37,8 +39,16 @@ void BucketItem::setOutline(const QRectF& frame, const QString& tag, qreal tagLe
     update();
 }
 
+void BucketItem::setArcFlashMark(const QString& text) {
+    if (text == m_arcFlashMark)
+        return;
+    prepareGeometryChange();
+    m_arcFlashMark = text;
+    update();
+}
+
 QRectF BucketItem::boundingRect() const {
-    return m_frame.adjusted(-2, -14, 2, 2);
+    return m_frame.adjusted(-2, -14, 2, m_arcFlashMark.isEmpty() ? 2 : 8);
 }
 
 QPainterPath BucketItem::shape() const {
@@ -67,6 +77,32 @@ void BucketItem::paint(QPainter* p, const QStyleOptionGraphicsItem* option, QWid
     p->setFont(f);
     p->setPen(SheetScene::printing(this) ? QColor(Qt::black) : kFrame);
     p->drawText(tab, Qt::AlignCenter, text);
+    if (!m_arcFlashMark.isEmpty())
+        paintArcFlashMark(p);
+}
+
+void BucketItem::paintArcFlashMark(QPainter* p) const {
+    // The bus's arc-flash mark in small: a notched amber tab astride the frame's bottom edge.
+    QFont f;
+    f.setPixelSize(8);
+    const QFontMetricsF fm(f);
+    const qreal room = m_frame.width() - 8;
+    const QString text = fm.elidedText(m_arcFlashMark, Qt::ElideRight, room - 6);
+    const qreal w = std::min(room, fm.horizontalAdvance(text) + 8);
+    const QRectF r(m_frame.right() - 4 - w, m_frame.bottom() - 5, w, 11);
+    QPainterPath tab;
+    tab.moveTo(r.left() + 3, r.top());
+    tab.lineTo(r.right(), r.top());
+    tab.lineTo(r.right(), r.bottom());
+    tab.lineTo(r.left(), r.bottom());
+    tab.lineTo(r.left(), r.top() + 3);
+    tab.closeSubpath();
+    p->setPen(QPen(QColor(0x9a, 0x5b, 0x00), 0.8));
+    p->setBrush(QColor(0xff, 0xf3, 0xd6));
+    p->drawPath(tab);
+    p->setFont(f);
+    p->setPen(QColor(0x5a, 0x35, 0x00));
+    p->drawText(r.adjusted(3, 0, -2, 0), Qt::AlignVCenter | Qt::AlignLeft, text);
 }
 
 } // namespace lineward::ui

@@ -1,4 +1,5 @@
-// Scene item outlining one bucket (an MCC unit) around its parts, with the bucket's tag.
+// Scene item outlining one bucket (an MCC unit) around its parts, with the bucket's tag and
+// its arc-flash mark.
 #pragma once
 
 #include "model/ids.h"
@@ -20,15 +21,21 @@ public:
     void setOutline(const QRectF& frame, const QString& tag, qreal tagLeft);
     const QRectF& frame() const { return m_frame; }
     const QString& tag() const { return m_tag; }
+    /// The bucket's arc-flash mark: its incident energy from the check result ("AF 6.0
+    /// cal/cm²"), on a notched amber tab on the frame's bottom edge; empty: none.
+    void setArcFlashMark(const QString& text);
+    const QString& arcFlashMark() const { return m_arcFlashMark; }
 
     QRectF boundingRect() const override;
     QPainterPath shape() const override;
     void paint(QPainter* p, const QStyleOptionGraphicsItem* option, QWidget* widget) override;
 
 private:
+    void paintArcFlashMark(QPainter* p) const;
     BucketId m_id;
     QRectF m_frame;
     QString m_tag;
+    QString m_arcFlashMark;
     qreal m_tagLeft = 0;
 };
 

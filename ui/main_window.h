@@ -60,6 +60,8 @@ public:
     void addBucket();
     void printPreview();
     void printSubmittal();
+    /// File → Arc-Flash Labels…: asks for the label stock and a PDF path, writes the labels.
+    void exportArcFlashLabels();
     /// Applies a finding's proposed fix as one edit, keeping the selection and the view;
     /// returns the refusal text, if any.
     QString applyFix(const Finding& f);

@@ -113,6 +113,8 @@ void MainWindow::buildFileMenu() {
     file->addSeparator();
     menuAction(file, tr("Print Pre&view…"), QKeySequence(), this, [this] { printPreview(); });
     menuAction(file, tr("&Print…"), QKeySequence::Print, this, [this] { printSubmittal(); });
+    menuAction(file, tr("Arc-&Flash Labels…"), QKeySequence(), this,
+               [this] { exportArcFlashLabels(); });
     buildExportMenu(file->addMenu(tr("&Export")));
     file->addSeparator();
     menuAction(file, tr("&Close"), QKeySequence(tr("Ctrl+W")), this, [this] { close(); });

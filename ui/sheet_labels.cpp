@@ -112,6 +112,7 @@ void SheetScene::refreshBuckets() {
     for (auto& [id, gone] : m_buckets)
         delete gone;
     m_buckets = std::move(kept);
+    refreshBucketMarks();
 }
 
 } // namespace lineward::ui

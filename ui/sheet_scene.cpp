@@ -298,16 +298,31 @@ void SheetScene::refreshBadges() {
         else
             item->setBadge(it->second.worst, it->second.tip, it->second.accepted);
     }
-    // Each bus's arc-flash energy from the check result (curves/arc_flash_study.h).
+    // Each bus's and bucket's arc-flash energy from the check result (curves/arc_flash_study.h).
     std::unordered_map<PartId, QString> marks;
     if (const auto& af = m_doc.result().arcFlash)
         for (const auto& e : *af)
             if (!e.bucket)
-                marks[e.part] =
-                    e.energyCal()
-                        ? QString::fromStdString("AF " + fmt(*e.energyCal(), 1) + " cal/cm²")
-                        : QStringLiteral("AF not computed");
+                marks[e.part] = arcFlashMarkText(e);
     for (auto& [id, item] : m_parts) {
+        auto it = marks.find(id);
+        item->setArcFlashMark(it == marks.end() ? QString() : it->second);
+    }
+    refreshBucketMarks();
+}
+
+QString SheetScene::arcFlashMarkText(const ArcFlashEquipment& e) {
+    return e.energyCal() ? QString::fromStdString("AF " + fmt(*e.energyCal(), 1) + " cal/cm²")
+                         : QStringLiteral("AF not computed");
+}
+
+void SheetScene::refreshBucketMarks() {
+    std::unordered_map<BucketId, QString> marks;
+    if (const auto& af = m_doc.result().arcFlash)
+        for (const auto& e : *af)
+            if (e.bucket)
+                marks[*e.bucket] = arcFlashMarkText(e);
+    for (auto& [id, item] : m_buckets) {
         auto it = marks.find(id);
         item->setArcFlashMark(it == marks.end() ? QString() : it->second);
     }

@@ -58,6 +58,8 @@ private:
     void deleteItem(QGraphicsItem* item); ///< a selected one tells selectionChanged once, later
     void refreshBadges();
     void refreshCommentMarks();
+    void refreshBucketMarks(); ///< each bucket's arc-flash mark from the check result
+    static QString arcFlashMarkText(const ArcFlashEquipment& e);
     void onPartAdded(PartId id);
     void onPartRemoved(PartId id);
     void onPartChanged(PartId id);

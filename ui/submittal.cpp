@@ -1,6 +1,7 @@
 // Submittal layout of our own: a thin frame, a title block strip along the bottom of every
 // page (project, title, drawing number, sheet n of m, revisions, drawn/checked, date, caution),
-// the one-line scaled or tiled with match lines, then text pages and curve sheets.
+// the one-line scaled or tiled with match lines, then text pages, curve sheets and the
+// arc-flash labels.
 #include "submittal.h"
 
 #include "compare/drawing_compare.h"
@@ -8,6 +9,7 @@
 #include "curves/path_curves.h"
 #include "curves_plot.h"
 #include "document.h"
+#include "label_sheet.h"
 #include "part_item.h"
 #include "report/curve_sheets.h"
 #include "report/report_format.h"
@@ -166,6 +168,7 @@ struct SubmittalData {
     SheetScene& scene;
     std::vector<PartId> curveParts;
     std::vector<FlowTable> tables; ///< findings, accepted deviations, comments, schedules
+    std::vector<ArcFlashLabel> labels; ///< one per bus and bucket, after the curve sheets
 };
 
 // Flags each part added or changed since the previous revision; returns the revision table's
@@ -219,6 +222,14 @@ int paintPages(QPagedPaintDevice& dev, const SubmittalData& s, const SubmittalSt
         painter.setFont(st.font(st.small));
         paintCurves(painter, c.body(), s.view ? buildCurveSet(*s.view, id) : CurveSet{}, st.small);
     }
+    // The arc-flash labels at their printed size, as the label stock carries them.
+    const auto perPage = static_cast<std::size_t>(labelGridFor(c.body()).perPage());
+    for (std::size_t first = 0; first < s.labels.size(); first += perPage) {
+        nextPage(c);
+        titleBlock(c, "Arc-flash labels");
+        if (!paintLabelGrid(painter, c.body(), s.labels, first, s.d) && error.isEmpty())
+            error = "an arc-flash label does not fit its place on the Submittal";
+    }
     painter.end();
     return c.pageNo;
 }
@@ -251,6 +262,7 @@ SubmittalResult paintSubmittal(QPagedPaintDevice& dev, std::shared_ptr<const Che
     tb.drawing = &d;
     tb.date = o.date.isEmpty() ? QDate::currentDate().toString(Qt::ISODate) : o.date;
     tb.checkedBy = !o.checkedBy.isEmpty() ? o.checkedBy : qs(d.sheet.checkedBy);
+    data.labels = arcFlashLabels(*result, tb.date.toStdString());
     tb.status = qs(checkStatusWords(result->report));
     const SubmittalStyle st = SubmittalStyle::forDevice(dev, o.printScale);
     const double minScale = oneLineMinScale(st, o);
@@ -259,8 +271,10 @@ SubmittalResult paintSubmittal(QPagedPaintDevice& dev, std::shared_ptr<const Che
     const QRectF body = submittalBodyRect(dev, st);
     const FlowLayout flow = layoutFlow(dev, st, body, data.tables);
     const QRectF src = scene.itemsBoundingRect().adjusted(-30, -30, 30, 30);
+    const auto perPage = static_cast<std::size_t>(labelGridFor(body).perPage());
+    const auto labelPages = (data.labels.size() + perPage - 1) / perPage;
     const int pages = oneLineSheetCount(src, body, minScale) + static_cast<int>(flow.pages.size()) +
-                      static_cast<int>(data.curveParts.size());
+                      static_cast<int>(data.curveParts.size() + labelPages);
     res.pages = paintPages(dev, data, st, tb, minScale, flow, pages, res.oneLineSheets, res.error);
     res.minTextPt = st.minPt;
     if (res.error.isEmpty() && res.pages != pages)

@@ -107,6 +107,20 @@ double arcingTimeS(const StudyView& ctx, const PathDevice* dev, double iarcKa, d
     return t;
 }
 
+// The clearing device's maximum time at the bolted fault current, as arcingTimeS refers it,
+// but never capped: the clearing time NEC 110.16(B) asks for.
+std::optional<double> boltedClearingS(const StudyView& ctx, const PathDevice* dev, double ibfKa,
+                                      double equipV) {
+    if (!dev)
+        return std::nullopt;
+    const double devV = nodeVolts(ctx, ctx.flow.lineNode(dev->part->id));
+    const double seenA = ibfKa * 1000.0 * (devV > 0 && equipV > 0 ? equipV / devV : 1.0);
+    const double t = dev->curve.maxTime(seenA);
+    if (!std::isfinite(t) || t <= 0)
+        return std::nullopt;
+    return t;
+}
+
 ArcFlashEquipment evaluateAt(const StudyView& ctx, const Part& bus, std::string_view kind,
                              std::optional<const Bucket*> bucket) {
     ArcFlashEquipment e;
@@ -138,6 +152,7 @@ ArcFlashEquipment evaluateAt(const StudyView& ctx, const Part& bus, std::string_
         e.result = probe;
         return e;
     }
+    e.tBoltedS = boltedClearingS(ctx, dev, e.input.ibfKa, volts);
     e.tFullS = arcingTimeS(ctx, dev, probe.currents.iarc, volts, e.cappedFull);
     e.tReducedS = arcingTimeS(ctx, dev, probe.currents.iarcMin, volts, e.cappedReduced);
     e.result =

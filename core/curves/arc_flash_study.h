@@ -27,6 +27,9 @@ struct ArcFlashEquipment {
     const Part* clearing = nullptr;   ///< the device that clears the arc; null: none found
     double tFullS = 0, tReducedS = 0; ///< arcing times at the full and reduced arcing current
     bool cappedFull = false, cappedReduced = false; ///< arcing time cut to the setting
+    /// The clearing device's maximum clearing time at the bolted fault current (not capped):
+    /// NEC 2023 110.16(B)'s clearing time for service equipment; nothing without a device.
+    std::optional<double> tBoltedS;
     std::vector<std::string> notes; ///< the study's own notes (cap, line side, assumptions)
     /// Incident energy of the governing case, cal/cm²; nothing when outside the model.
     std::optional<double> energyCal() const;

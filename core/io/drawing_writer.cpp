@@ -80,8 +80,8 @@ ojson settingsJson(const Settings& s) {
         j["arc_flash_caution_cal"] = fieldValueJson(s.arcFlashCautionCal);
     if (s.arcFlashMaxTimeS != defaults.arcFlashMaxTimeS)
         j["arc_flash_max_time_s"] = fieldValueJson(s.arcFlashMaxTimeS);
-    if (s.arcFlashFindings)
-        j["arc_flash_findings"] = true;
+    if (!s.arcFlashFindings)
+        j["arc_flash_findings"] = false;
     return j;
 }
 

@@ -55,7 +55,7 @@ struct Settings {
     /// Arc flash: longest arcing time taken, s (a worker can move away; common practice).
     double arcFlashMaxTimeS = 2.0;
     /// Arc flash: report the arcflash.* findings in the check (the study itself always runs).
-    bool arcFlashFindings = false;
+    bool arcFlashFindings = true;
     bool operator==(const Settings&) const = default;
 };
 

@@ -94,7 +94,7 @@ const std::array<FieldSpec, 5> kTransformerFields{{
     {"x_over_r", "X/R ratio", "", FT::Number, 0.1, 200, false, false, 6.0},
 }};
 
-const std::array<FieldSpec, 11> kBusFields{{
+const std::array<FieldSpec, 12> kBusFields{{
     {"bus_type",
      "Equipment",
      "",
@@ -177,6 +177,17 @@ const std::array<FieldSpec, 11> kBusFields{{
      {},
      {},
      "blank: IEEE 1584-2018 Table 8 typical size"},
+    {"service_equipment",
+     "Service equipment",
+     "",
+     FT::Flag,
+     0,
+     0,
+     false,
+     false,
+     false,
+     {},
+     "true: its arc-flash label also carries the NEC 110.16(B) service data"},
 }};
 
 const std::array<FieldSpec, 15> kBreakerFields{{

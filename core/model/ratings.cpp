@@ -178,6 +178,7 @@ BusRatings BusRatings::of(const Part& p) {
     r.afHeightMm = opt(p, SLOT(kAfHeightMm));
     r.afWidthMm = opt(p, SLOT(kAfWidthMm));
     r.afDepthMm = opt(p, SLOT(kAfDepthMm));
+    r.service = flag(p, SLOT(kService));
     return r;
 }
 

@@ -47,7 +47,8 @@ struct BusRatings {
                                       kAfWorkingMm = "af_working_distance_mm",
                                       kAfHeightMm = "af_enclosure_height_mm",
                                       kAfWidthMm = "af_enclosure_width_mm",
-                                      kAfDepthMm = "af_enclosure_depth_mm";
+                                      kAfDepthMm = "af_enclosure_depth_mm",
+                                      kService = "service_equipment";
     BusType type = BusType::Mcc;
     double volts = 0, amps = 0;
     std::optional<double> bracingKa;
@@ -56,6 +57,8 @@ struct BusRatings {
     /// the equipment type. The electrode configuration is a key ("VCB", ...); empty: typical.
     std::string afConfig;
     std::optional<double> afGapMm, afWorkingMm, afHeightMm, afWidthMm, afDepthMm;
+    /// Service equipment (NEC 2023 110.16(B)): its label carries the service data too.
+    bool service = false;
     static BusRatings of(const Part& p);
 };
 

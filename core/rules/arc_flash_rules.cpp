@@ -5,6 +5,9 @@
 #include "rules/rule_catalog.h"
 #include "util/trace.h"
 
+#include <cmath>
+#include <map>
+
 namespace lineward {
 
 namespace {
@@ -48,19 +51,58 @@ std::vector<TraceStep> traceOf(const StudyView& ctx, const ArcFlashEquipment& e)
     return t;
 }
 
+// A bucket whose result is its bus's (the same clearing device and energy: it is taken at the
+// bus side of its own device) is told in its bus's finding, not in one finding per bucket.
+const ArcFlashEquipment* sameAsBus(const std::vector<ArcFlashEquipment>& all,
+                                   const ArcFlashEquipment& e) {
+    if (!e.bucket)
+        return nullptr;
+    for (const auto& b : all)
+        if (!b.bucket && b.part == e.part) {
+            const auto eb = b.energyCal(), ee = e.energyCal();
+            const bool same = b.clearing == e.clearing &&
+                              ((!eb && !ee) || (eb && ee && std::abs(*eb - *ee) < 0.05));
+            return same ? &b : nullptr;
+        }
+    return nullptr;
+}
+
 } // namespace
 
 void checkArcFlash(const StudyView& ctx, const std::vector<ArcFlashEquipment>& equipment,
                    std::vector<Finding>& out) {
     const double caution = ctx.settings().arcFlashCautionCal;
+    std::map<PartId, std::vector<std::string>> folded; // bus -> its buckets told with it
+    for (const auto& e : equipment)
+        if (sameAsBus(equipment, e))
+            folded[e.part].push_back(e.tag);
+    auto withBuckets = [&](const ArcFlashEquipment& e) {
+        const auto it = folded.find(e.part);
+        if (e.bucket || it == folded.end())
+            return e.tag;
+        return e.tag + " and its " + std::to_string(it->second.size()) + " bucket" +
+               (it->second.size() == 1 ? "" : "s");
+    };
+    auto bucketStep = [&](const ArcFlashEquipment& e, std::vector<TraceStep>& trace) {
+        const auto it = folded.find(e.part);
+        if (e.bucket || it == folded.end())
+            return;
+        std::string tags;
+        for (const auto& t : it->second)
+            tags += (tags.empty() ? "" : ", ") + t;
+        trace.push_back({"buckets with the same result (taken at their bus side)", tags});
+    };
     for (const auto& e : equipment) {
+        if (sameAsBus(equipment, e))
+            continue;
         const std::vector<PartId> parts{e.part};
         if (!e.result.range.ok()) {
-            auto x = makeFinding(
-                "arcflash.outside_model", parts,
-                e.tag + ": no arc-flash incident energy: " + e.result.range.outside.front());
+            auto x = makeFinding("arcflash.outside_model", parts,
+                                 withBuckets(e) + ": no arc-flash incident energy: " +
+                                     e.result.range.outside.front());
             for (const auto& o : e.result.range.outside)
                 x.trace.push_back({"outside the model", o});
+            bucketStep(e, x.trace);
             x.trace.push_back({"caution", kCaution});
             x.fix = Fix{"give the equipment's arc-flash data in the Inspector, or assess it by "
                         "another method an engineer accepts",
@@ -74,13 +116,14 @@ void checkArcFlash(const StudyView& ctx, const std::vector<ArcFlashEquipment>& e
         const bool limit = cal > kLimitCal;
         auto x = makeFinding(
             limit ? RuleId("arcflash.energy.limit") : RuleId("arcflash.energy.caution"), parts,
-            e.tag + " arc-flash incident energy " + fmt(cal, 1) + " cal/cm² at " +
+            withBuckets(e) + " arc-flash incident energy " + fmt(cal, 1) + " cal/cm² at " +
                 fmt(e.input.workingDistanceMm, 0) + " mm is above " +
                 fmt(limit ? kLimitCal : caution, 1) + " cal/cm²");
         x.computed = cal;
         x.limit = limit ? kLimitCal : caution;
         x.unit = "cal/cm²";
         x.trace = traceOf(ctx, e);
+        bucketStep(e, x.trace);
         x.fix = Fix{"shorten the clearing time at the arcing current (a faster or instantaneous "
                     "setting, a maintenance switch, differential or optical arc protection), or "
                     "lower the fault current; otherwise work on the equipment de-energized",

@@ -171,4 +171,13 @@ std::optional<double> Tables::nemaHp(const NemaRow& row, double volts, int phase
     return it == m.end() ? std::nullopt : std::optional<double>(it->second);
 }
 
+const ApproachRow* Tables::approachFor(double systemVolts) const {
+    if (!(systemVolts >= 0))
+        return nullptr;
+    for (const auto& r : approach)
+        if (systemVolts <= r.vMax)
+            return &r;
+    return nullptr;
+}
+
 } // namespace lineward

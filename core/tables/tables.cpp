@@ -215,6 +215,19 @@ void buildRest(Tables& tb, const CsvTable& t) {
             row.config = configFrom(t, r, t.column("config"));
             tb.arcFlash.typical.push_back(row);
         }
+    } else if (n == "shock_approach") {
+        for (std::size_t r = 0; r < t.rows.size(); ++r) {
+            ApproachRow row;
+            row.vMin = t.required(r, t.column("v_min"));
+            row.vMax = t.required(r, t.column("v_max"));
+            if (row.vMax < row.vMin ||
+                (!tb.approach.empty() && row.vMin <= tb.approach.back().vMax))
+                t.fail(r, "voltage ranges must rise and not overlap");
+            row.limitedMovable = t.rows[r][t.column("limited_movable")];
+            row.limitedFixed = t.rows[r][t.column("limited_fixed")];
+            row.restricted = t.rows[r][t.column("restricted")];
+            tb.approach.push_back(row);
+        }
     } else {
         throw TableError(t.file, 0, "unknown table '" + n + "'");
     }
@@ -323,7 +336,8 @@ std::shared_ptr<const Tables> loadTables(std::span<const tables::EmbeddedFile> f
                                "af_varcf",
                                "af_incident_energy",
                                "af_enclosure_cf",
-                               "af_typical_equipment"})
+                               "af_typical_equipment",
+                               "shock_approach"})
         if (!tb->sources.count(needed))
             throw TableError("resources/tables", 0,
                              std::string("table '") + needed + "' is missing");

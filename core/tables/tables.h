@@ -88,6 +88,12 @@ struct ArcFlashTables {
     const TypicalRow* typicalFor(std::string_view kind, double systemVolts) const;
 };
 
+/// One row of NFPA 70E 2024 Table 130.4(E)(a): shock approach boundaries (ac, phase to phase).
+struct ApproachRow {
+    double vMin = 0, vMax = 0;                            ///< the row's nominal voltage range, V
+    std::string limitedMovable, limitedFixed, restricted; ///< as the table gives them
+};
+
 struct TripClassRow {
     std::string name;
     double tpMinS = 0, tpMaxS = 0, trip15xMaxMin = 0;
@@ -127,6 +133,7 @@ struct Tables {
     std::vector<NemaRow> nema;
     std::vector<TripClassRow> tripClasses;
     ArcFlashTables arcFlash;
+    std::vector<ApproachRow> approach;          ///< NFPA 70E 2024 Table 130.4(E)(a), by voltage
     std::map<std::string, std::string> sources; ///< table name -> source line
 
     // --- lookups ---
@@ -139,6 +146,9 @@ struct Tables {
     std::optional<double> maxLockedRotorA(double hp, double ratedVolts,
                                           double* columnV = nullptr) const;
     const ScpdRow& scpdRow(MotorType m) const;
+    /// The approach-boundary row for a nominal ac system voltage; a voltage between two rows
+    /// (150 V to 151 V) takes the higher row; nothing above the table.
+    const ApproachRow* approachFor(double systemVolts) const;
     /// kVA/hp (upper bound of the letter's range); nothing for an unknown letter.
     std::optional<double> codeLetterKvaPerHp(char letter) const;
     std::optional<double> ampacityAt(const std::string& size, Material m, int columnC) const;

@@ -95,7 +95,10 @@ Drawing makePlant(int parts, int bucketsPerLineup, Ties ties) {
                            {"st_pickup_x", 10.0},
                            {"st_delay_s", 0.4}});
         auto swbd = b.add(PartKind::Bus, "SWBD-" + n, x0, 150,
-                          {{"volts", 480.0}, {"amps", 800.0}, {"bracing_ka", 65.0}});
+                          {{"bus_type", std::string("switchboard")},
+                           {"volts", 480.0},
+                           {"amps", 800.0},
+                           {"bracing_ka", 65.0}});
         auto feeder = b.add(PartKind::Breaker, "CB-F" + n, x0, 210, feederBreaker());
         auto fc = b.add(PartKind::Cable, "C-F" + n, x0, 260,
                         {{"size", std::string("250 kcmil")}, {"sets", 2.0}, {"length_ft", 100.0}});

@@ -11,6 +11,7 @@
 #include "util/trace.h"
 
 #include <algorithm>
+#include <cmath>
 #include <gtest/gtest.h>
 
 using namespace lineward;
@@ -130,13 +131,21 @@ TEST(ArcFlashStudy, CautionAboveTheSettingAndNoneBelow) {
     auto r = checked(d);
     EXPECT_TRUE(findings(*r, "arcflash.energy.caution").empty());
     EXPECT_TRUE(findings(*r, "arcflash.energy.limit").empty());
-    // Failing: a setting below the energy gives a caution on the bus and on its bucket, with
-    // the trace and the safety caution.
+    // Failing: a setting below the energy gives one caution on the bus, with the trace and the
+    // safety caution; its bucket, taken at its line side with the same clearing device, has the
+    // bus's very result and is named in that finding rather than in one of its own.
     d.settings.arcFlashCautionCal = cal / 2; // a drawing file takes 1.2 and up; code may go lower
     ASSERT_GT(cal, d.settings.arcFlashCautionCal);
     r = checked(d);
     const auto got = findings(*r, "arcflash.energy.caution");
-    ASSERT_EQ(got.size(), 2u);
+    ASSERT_EQ(got.size(), 1u);
+    EXPECT_NE(got[0]->message.find("MCC and its 1 bucket arc-flash incident energy"),
+              std::string::npos)
+        << got[0]->message;
+    bool named = false;
+    for (const auto& t : got[0]->trace)
+        named = named || (t.name.find("buckets with the same result") == 0 && t.value == "MCC-1A");
+    EXPECT_TRUE(named);
     EXPECT_EQ(got[0]->severity, Severity::Caution);
     EXPECT_NEAR(*got[0]->computed, cal, 1e-9);
     EXPECT_DOUBLE_EQ(*got[0]->limit, d.settings.arcFlashCautionCal);
@@ -184,17 +193,37 @@ TEST(ArcFlashStudy, OutsideTheModelGivesAReasonAndNoNumber) {
     EXPECT_TRUE(findings(*r, "arcflash.energy.caution").empty());
 }
 
-TEST(ArcFlashStudy, FindingsOnlyWhereTheDrawingAsksForThem) {
-    // The study always runs (the CLI and the window read it); the findings need the setting.
+TEST(ArcFlashStudy, FindingsOnByDefaultAndOffWhereTheDrawingSaysSo) {
+    // The study always runs (the CLI and the window read it); the findings are on by default
+    // and a drawing may turn them off (arc_flash_findings: false).
     Drawing d = smallLineup();
+    EXPECT_TRUE(d.settings.arcFlashFindings);
     d.settings.arcFlashCautionCal = 0.1;
     auto r = checked(d);
+    EXPECT_EQ(findings(*r, "arcflash.energy.caution").size(), 1u); // the bus, with its bucket
+    d.settings.arcFlashFindings = false;
+    r = checked(d);
     ASSERT_TRUE(r->arcFlash);
     EXPECT_FALSE(r->arcFlash->empty());
     EXPECT_TRUE(findings(*r, "arcflash.energy.caution").empty());
-    d.settings.arcFlashFindings = true;
-    r = checked(d);
-    EXPECT_EQ(findings(*r, "arcflash.energy.caution").size(), 2u);
+}
+
+TEST(ArcFlashStudy, ABucketWithAResultOfItsOwnGetsItsOwnFinding) {
+    // A bucket on a switchboard takes an MCC's typical data (Tables 8 and 10: 25 mm gap,
+    // 457.2 mm working distance), not the switchboard's (32 mm, 609.6 mm): its energy differs
+    // from its bus's, so it is not folded into the bus's finding.
+    Drawing d = smallLineup();
+    ASSERT_FALSE(d.part(PartId(4))->set("bus_type", std::string("switchboard")));
+    d.settings.arcFlashCautionCal = 0.1;
+    const auto r = checked(d);
+    const auto* bus = find(*r, "MCC");
+    const auto* bucket = find(*r, "MCC-1A");
+    ASSERT_TRUE(bus && bucket && bus->energyCal() && bucket->energyCal());
+    ASSERT_GT(std::abs(*bus->energyCal() - *bucket->energyCal()), 0.05);
+    const auto got = findings(*r, "arcflash.energy.caution");
+    ASSERT_EQ(got.size(), 2u);
+    EXPECT_EQ(got[0]->message.find("MCC arc-flash"), 0u) << got[0]->message;
+    EXPECT_EQ(got[1]->message.find("MCC-1A arc-flash"), 0u) << got[1]->message;
 }
 
 TEST(ArcFlashStudy, CurrentSeenAcrossATransformerIsReferredByTheVoltageRatio) {

@@ -65,8 +65,20 @@ TEST(Samples, CleanSampleChecksClean) {
     auto r = io::loadDrawing(sourcePath("samples/kestrel-mill-mcc1.lineward"));
     ASSERT_TRUE(r) << r.error->text();
     const auto report = checkDrawing(*r.drawing, testTables());
-    for (const auto& f : report.findings)
-        ADD_FAILURE() << f.ruleId << ": " << f.message;
+    // Clean but for the one deviation samples/README.md names: SWBD-1's arc-flash energy,
+    // accepted by the checker with its reason.
+    int accepted = 0;
+    for (const auto& f : report.findings) {
+        if (!f.accepted) {
+            ADD_FAILURE() << f.ruleId << ": " << f.message;
+            continue;
+        }
+        ++accepted;
+        EXPECT_EQ(f.ruleId, "arcflash.energy.caution");
+        EXPECT_EQ(f.message.rfind("SWBD-1 ", 0), 0u) << f.message;
+        EXPECT_FALSE(f.acceptedNote.empty());
+    }
+    EXPECT_EQ(accepted, 1);
     EXPECT_GE(r.drawing->buckets().size(), 12u);
 }
 

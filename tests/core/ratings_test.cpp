@@ -31,7 +31,7 @@ std::set<std::string_view> declaredKeys(PartKind kind) {
         return {BusRatings::kType,      BusRatings::kVolts,       BusRatings::kAmps,
                 BusRatings::kBracingKa, BusRatings::kPhases,      BusRatings::kAfConfig,
                 BusRatings::kAfGapMm,   BusRatings::kAfWorkingMm, BusRatings::kAfHeightMm,
-                BusRatings::kAfWidthMm, BusRatings::kAfDepthMm};
+                BusRatings::kAfWidthMm, BusRatings::kAfDepthMm,   BusRatings::kService};
     case PartKind::Breaker:
         return with({BreakerRatings::kTripType, BreakerRatings::kConstruction,
                      BreakerRatings::kFrameA, BreakerRatings::kTripA, BreakerRatings::kInstX,

@@ -1,5 +1,6 @@
 // The real main window, offscreen: open the mistake sample, see badges and the Findings list,
 // locate a finding's part.
+#include "bucket_item.h"
 #include "check/check.h"
 #include "curves/arc_flash_study.h"
 #include "findings_panel.h"
@@ -176,4 +177,35 @@ TEST(MainWindow, EachBusCarriesItsArcFlashMark) {
     user.type("af_working_distance_mm", "914.4", Commit::Enter);
     user.settle();
     EXPECT_NE(w.scene()->itemFor(mcc)->arcFlashMark(), before);
+}
+
+TEST(MainWindow, EachBucketCarriesItsArcFlashMark) {
+    // Every bucket's frame carries its own mark with the check result's energy, and the marks
+    // follow an edit of the bus the buckets hang from.
+    MainWindow w(sharedTables());
+    ASSERT_TRUE(w.openFile(sample("kestrel-mill-mcc1.lineward"), true).isEmpty());
+    test::User user(w);
+    auto marksMatch = [&w] {
+        int buckets = 0;
+        for (const auto& e : *w.document().result().arcFlash) {
+            if (!e.bucket)
+                continue;
+            ++buckets;
+            BucketItem* item = w.scene()->bucketItem(*e.bucket);
+            EXPECT_NE(item, nullptr) << e.tag;
+            if (item)
+                EXPECT_EQ(item->arcFlashMark().toStdString(),
+                          "AF " + fmt(*e.energyCal(), 1) + " cal/cm²")
+                    << e.tag;
+        }
+        return buckets;
+    };
+    EXPECT_EQ(marksMatch(), static_cast<int>(w.document().drawing().buckets().size()));
+    const BucketId first = w.document().drawing().buckets().front().id;
+    const QString before = w.scene()->bucketItem(first)->arcFlashMark();
+    user.clickPart(w.document().drawing().partByTag("MCC-1")->id);
+    user.type("af_working_distance_mm", "914.4", Commit::Enter);
+    user.settle();
+    EXPECT_NE(w.scene()->bucketItem(first)->arcFlashMark(), before);
+    EXPECT_EQ(marksMatch(), 13);
 }

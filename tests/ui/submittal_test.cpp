@@ -2,6 +2,7 @@
 // holds every tag, every finding's rule and the caution; CSVs equal the study; the SVG is
 // well-formed and names every part; a large one-line tiles with match lines.
 #include "check/check.h"
+#include "curves/arc_flash_study.h"
 #include "io/drawing_file.h"
 #include "plant_generator.h"
 #include "report/report_format.h"
@@ -28,12 +29,17 @@ Drawing sample(const char* name) {
     return *io::loadDrawing(test::samplePath(name).toStdString()).drawing;
 }
 
-// pdftotext output with runs of white space folded to one space.
+// pdftotext output with runs of white space folded to one space, and the font's "fi" and "fl"
+// ligatures (pdftotext gives U+FB01, U+FB02: "arcflash" comes back as "arc\uFB02ash") as
+// letters.
 QString pdfText(const QString& pdf) {
     QProcess p;
     p.start("pdftotext", {"-layout", pdf, "-"});
     p.waitForFinished(60000);
-    return QString::fromUtf8(p.readAllStandardOutput()).simplified();
+    return QString::fromUtf8(p.readAllStandardOutput())
+        .simplified()
+        .replace(QChar(0xFB01), "fi")
+        .replace(QChar(0xFB02), "fl");
 }
 
 QString pdfInfo(const QString& pdf) {
@@ -48,8 +54,8 @@ QString pdfInfo(const QString& pdf) {
 TEST(Submittal, PdfHoldsEveryTagEveryRuleAndTheCaution) {
     const Drawing d = sample("kestrel-mill-mcc1-review.lineward");
     const QString pdf = test::tempDir("submittal") + "/review.pdf";
-    auto r = writeSubmittalPdf(pdf, runCheck(d, *test::sharedTables()), test::sharedTables(),
-                               SubmittalOptions{});
+    const auto checked = runCheck(d, *test::sharedTables());
+    auto r = writeSubmittalPdf(pdf, checked, test::sharedTables(), SubmittalOptions{});
     ASSERT_TRUE(r.error.isEmpty()) << r.error.toStdString();
     EXPECT_GE(r.pages, 5);
     EXPECT_TRUE(pdfInfo(pdf).contains(QString("Pages: %1").arg(r.pages).simplified()) ||
@@ -70,6 +76,11 @@ TEST(Submittal, PdfHoldsEveryTagEveryRuleAndTheCaution) {
     EXPECT_TRUE(text.contains("Findings summary"));
     EXPECT_TRUE(text.contains("Schedule — motors"));
     EXPECT_TRUE(text.contains("Curves P-101"));
+    // The arc-flash labels close it: one per bus and bucket, at their printed size.
+    ASSERT_TRUE(checked->arcFlash);
+    EXPECT_TRUE(text.contains("Arc-flash labels"));
+    EXPECT_EQ(text.count("ARC-FLASH HAZARD"), static_cast<int>(checked->arcFlash->size()));
+    EXPECT_EQ(text.count("NEC 110.16(B)"), 1); // SWBD-1, the service equipment
 }
 
 TEST(Submittal, PaperSizesAndOrientation) {
