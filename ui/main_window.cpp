@@ -100,6 +100,9 @@ MainWindow::MainWindow(std::shared_ptr<const Tables> tables, QWidget* parent)
                 if (maybeSave())
                     openFile(files.first());
             }));
+    connect(m_view, &SheetView::partMenuRequested, this,
+            guarded(this, tr("Part menu"),
+                    [this](PartId id, QPoint globalPos) { partMenu(id, globalPos); }));
     connect(m_inspector, &Inspector::editRequested, this,
             guarded(this, tr("Changing a rating"), [this](std::vector<Part> after, QString text) {
                 m_doc.undoStack().push(new SetFieldsCommand(m_doc, std::move(after), text));

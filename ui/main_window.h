@@ -22,6 +22,7 @@ class SchedulesPanel;
 class CurvesPanel;
 class ChangesPanel;
 class CompareMark;
+class AddBucketDialog;
 struct SubmittalOptions;
 
 /// One window per open drawing.
@@ -55,8 +56,14 @@ public:
     void groupSelectionAsBucket();
     /// File → Import Load List…: asks for the list, previews it for a bus, adds its buckets.
     void importLoadList();
-    /// Edit → Add Bucket…: one sized bucket on the selected (or first) MCC bus.
-    void addBucket();
+    /// Edit → Add Bucket…: one sized bucket on `bus`, or on the selected (or first) MCC or
+    /// switchboard bus when none is given.
+    void addBucket(PartId bus = {});
+    /// Edit → Save Bucket as Template…: the selected part's bucket into the bucket library.
+    void saveBucketAsTemplate();
+    /// Edit → Insert Bucket from Library…: a template, sized again for `bus` (or the selected
+    /// or first MCC bus) in the Add Bucket dialog.
+    void insertBucketFromLibrary(PartId bus = {});
     void printPreview();
     void printSubmittal();
     /// Applies a finding's proposed fix as one edit, keeping the selection and the view;
@@ -96,6 +103,12 @@ private:
     void addRecent(const QString& path);
     void rebuildRecentMenu();
     void selectionChanged();
+    /// Right-click on a part of the Sheet: an MCC or switchboard bus offers Add Bucket.
+    void partMenu(PartId id, QPoint globalPos);
+    /// The bus a new bucket goes on: `preferred` if it takes buckets, else the selected one,
+    /// else the first MCC bus; nothing (and the user told) when there is none.
+    PartId bucketBus(PartId preferred);
+    void placeBucketFrom(AddBucketDialog& dialog);
     void buildCompare();
     void addCompareActions(QMenu* file);
     void refreshCompare();

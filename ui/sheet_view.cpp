@@ -5,6 +5,7 @@
 #include "part_item.h"
 #include "sheet_scene.h"
 
+#include <QContextMenuEvent>
 #include <QMimeData>
 #include <QMouseEvent>
 #include <QScrollBar>
@@ -172,6 +173,16 @@ void SheetView::dropEvent(QDropEvent* e) {
     if (!files.isEmpty())
         emit filesDropped(files);
     e->acceptProposedAction();
+}
+
+void SheetView::contextMenuEvent(QContextMenuEvent* e) {
+    for (auto* gi : items(e->pos()))
+        if (auto* item = qgraphicsitem_cast<PartItem*>(gi)) {
+            emit partMenuRequested(item->partId(), e->globalPos());
+            e->accept();
+            return;
+        }
+    QGraphicsView::contextMenuEvent(e);
 }
 
 } // namespace lineward::ui

@@ -29,6 +29,8 @@ signals:
     void moveFinished(std::vector<lineward::PartId> parts, std::vector<QPointF> from,
                       std::vector<QPointF> to);
     void filesDropped(QStringList paths);
+    /// A right-click on a part: the main window offers what can be done to it there.
+    void partMenuRequested(lineward::PartId part, QPoint globalPos);
 
 protected:
     void mousePressEvent(QMouseEvent* e) override;
@@ -38,6 +40,7 @@ protected:
     void dragEnterEvent(QDragEnterEvent* e) override;
     void dragMoveEvent(QDragMoveEvent* e) override;
     void dropEvent(QDropEvent* e) override;
+    void contextMenuEvent(QContextMenuEvent* e) override;
 
 private:
     SheetScene* m_scene;
