@@ -1,5 +1,6 @@
 // The editor driven as a user drives it, offscreen, with real input events: place, connect,
 // edit, refuse, undo; every command undone gives back the same bytes.
+#include "add_bucket_dialog.h"
 #include "commands/bucket_command.h"
 #include "commands/move_parts_command.h"
 #include "findings_panel.h"
@@ -170,6 +171,21 @@ TEST(Editor, EveryCommandUndoesToTheSameBytes) {
         });
         user.press(Qt::Key_L, Qt::ControlModifier | Qt::ShiftModifier);
         EXPECT_NE(d.partByTag("P-131"), nullptr);
+    });
+    check("multi-edit", [&] {
+        user.clickPart(d.partByTag("C-101")->id);
+        user.clickPart(d.partByTag("C-104")->id, Qt::ControlModifier);
+        user.type("length_ft", "80", Commit::Enter);
+    });
+    check("add bucket", [&] {
+        User::whenModal<AddBucketDialog>([](AddBucketDialog* dialog) {
+            auto* hp = dialog->findChild<QLineEdit*>("bucket_hp");
+            QTest::mouseClick(hp, Qt::LeftButton);
+            QTest::keyClicks(hp, "15");
+            QTest::mouseClick(dialog->findChild<QPushButton*>("placeBucket"), Qt::LeftButton);
+        });
+        user.clickPart(d.partByTag("MCC-1")->id);
+        user.press(Qt::Key_B, Qt::ControlModifier);
     });
 }
 
