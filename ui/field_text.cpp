@@ -28,7 +28,8 @@ QString shownFieldText(const FieldSpec& spec, const FieldValue& v) {
         return QString::fromStdString(formatNumber(shown));
     }
     if (auto s = std::get_if<std::string>(&v))
-        return QString::fromStdString(*s);
+        // A choice reads as people say it ("thermal-magnetic"), as the Inspector's lists show.
+        return spec.type == FieldType::Choice ? qs(choiceLabel(*s)) : QString::fromStdString(*s);
     if (auto b = std::get_if<bool>(&v))
         return *b ? tr("yes") : tr("no");
     return {};

@@ -8,8 +8,8 @@
 
 namespace lineward::ui {
 
-/// The value in the unit people edit it in (13.8 kV → "13800"), a choice as its word, a flag as
-/// "yes" or "no", nothing as "".
+/// The value in the unit people edit it in (13.8 kV → "13800"), a choice as its label
+/// ("thermal-magnetic"), a flag as "yes" or "no", nothing as "".
 QString shownFieldText(const FieldSpec& spec, const FieldValue& v);
 
 /// Reads typed text into a value of `spec` (numbers in the shown unit; a choice by its word or
