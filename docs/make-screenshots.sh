@@ -12,4 +12,8 @@ export XDG_DATA_HOME="$(mktemp -d)"   # a clean settings/recovery folder for the
 LINEWARD_SHOT_DIR=docs/images .build/release/tests/ui_tests \
     --gtest_filter='ImportLoadList.PreviewShowsBucketsAndRefusalsAndImportIsOneUndoableEdit' >/dev/null
 rm -f docs/images/import-load-list-sheet.png
-echo "wrote docs/images/editor-clean-sample.png, editor-review-sample.png and import-load-list.png"
+# Add Bucket (a value changed, its findings) and the Inspector editing two cables at once.
+LINEWARD_SHOT_DIR=docs/images .build/release/tests/ui_tests \
+    --gtest_filter='AddBucket.AChangedValueIsCheckedShowsItsFindingsAndIsPlaced:MultiEdit.RubberBandOverCablesThenOneLengthForAllIsOneUndoableEdit' >/dev/null
+echo "wrote docs/images/editor-clean-sample.png, editor-review-sample.png, import-load-list.png,"
+echo "add-bucket.png and multi-edit.png"

@@ -5,6 +5,7 @@
 
 #include "check/check.h"
 #include "curves/arc_flash_study.h"
+#include "field_text.h"
 #include "guard.h"
 #include "util/trace.h"
 
@@ -15,6 +16,7 @@
 #include <QLineEdit>
 #include <QScrollArea>
 #include <QVBoxLayout>
+#include <algorithm>
 #include <cmath>
 
 namespace lineward::ui {
@@ -26,23 +28,7 @@ QString qs(std::string_view s) {
 }
 
 QString peopleName(const FieldSpec& spec) {
-    return QString::fromStdString(fieldName(spec, FieldNaming::People));
-}
-
-// The number as people edit it: in the shown unit, without binary noise (13.8 kV → 13800).
-QString shownNumber(const FieldSpec& spec, double v) {
-    double shown = v * spec.shownScale;
-    if (spec.shownScale != 1.0)
-        shown = std::round(shown * 1e6) / 1e6;
-    return QString::fromStdString(formatNumber(shown));
-}
-
-QString shownText(const FieldSpec& spec, const FieldValue& v) {
-    if (auto d = std::get_if<double>(&v))
-        return shownNumber(spec, *d);
-    if (auto s = std::get_if<std::string>(&v))
-        return QString::fromStdString(*s);
-    return {};
+    return peopleFieldName(spec);
 }
 
 constexpr const char* kRefusedStyle = "color: #b23a1e;";
@@ -79,12 +65,11 @@ Inspector::Inspector(Document& doc, QWidget* parent)
     connect(&doc, &Document::reportChanged, this, [this] { refreshArcFlash(); });
     setMinimumWidth(360); // narrower than this the form scrolls sideways
     connect(&doc, &Document::partChanged, this, [this](PartId id) {
-        if (m_part && *m_part == id)
-            if (const Part* p = current())
-                refreshValues(*p);
+        if (std::find(m_parts.begin(), m_parts.end(), id) != m_parts.end() && current())
+            refreshValues();
     });
     connect(&doc, &Document::partRemoved, this, [this](PartId id) {
-        if (m_part && *m_part == id)
+        if (std::find(m_parts.begin(), m_parts.end(), id) != m_parts.end())
             showPart(std::nullopt);
     });
     connect(&doc, &Document::drawingReset, this, [this] { showPart(std::nullopt); });
@@ -120,24 +105,45 @@ int Inspector::neededWidth() const {
 }
 
 const Part* Inspector::current() const {
-    return m_part ? m_doc.drawing().part(*m_part) : nullptr;
+    return m_parts.empty() ? nullptr : m_doc.drawing().part(m_parts.front());
+}
+
+std::vector<const Part*> Inspector::shown() const {
+    std::vector<const Part*> out;
+    for (PartId id : m_parts)
+        if (const Part* p = m_doc.drawing().part(id))
+            out.push_back(p);
+    return out;
 }
 
 void Inspector::showPart(std::optional<PartId> id) {
-    const Part* p = id ? m_doc.drawing().part(*id) : nullptr;
-    if (p && m_part == id && m_formKind == p->kind) {
-        refreshValues(*p);
+    showParts(id ? std::vector<PartId>{*id} : std::vector<PartId>{});
+}
+
+void Inspector::showParts(const std::vector<PartId>& ids) {
+    std::vector<const Part*> parts;
+    for (PartId id : ids)
+        if (const Part* p = m_doc.drawing().part(id))
+            parts.push_back(p);
+    const bool oneKind = !parts.empty() && std::all_of(parts.begin(), parts.end(), [&](auto* p) {
+        return p->kind == parts.front()->kind;
+    });
+    if (oneKind && ids == m_parts && m_formKind == parts.front()->kind) {
+        refreshValues();
         return;
     }
-    clearForm(); // before the part changes: nothing of the old form may reach the new part
-    m_part = p ? id : std::nullopt;
+    clearForm(); // before the parts change: nothing of the old form may reach the new parts
+    m_parts = oneKind ? ids : std::vector<PartId>{};
     refreshArcFlash();
     m_message->clear();
-    if (!p) {
-        m_title->setText(tr("Select a part to see its ratings."));
+    if (!oneKind) {
+        m_title->setText(parts.empty() ? tr("Select a part to see its ratings.")
+                                       : tr("%1 parts of different kinds: select parts of one "
+                                            "kind to edit them together.")
+                                             .arg(parts.size()));
         return;
     }
-    buildForm(*p);
+    buildForm(*parts.front());
 }
 
 void Inspector::clearForm() {
@@ -175,6 +181,8 @@ void Inspector::buildForm(const Part& p) {
                 commitTag(tag->text());
             }));
     m_form->addRow(tr("Tag"), tag);
+    // Tags are each part's own: several parts cannot share one.
+    tag->setEnabled(m_parts.size() == 1);
     for (const auto& spec : info.fields) {
         const FieldAlternative* pair = nullptr;
         for (const auto& alt : info.alternatives)
@@ -200,7 +208,7 @@ void Inspector::buildForm(const Part& p) {
         label->setToolTip(qs(spec.help));
         m_form->addRow(label, editor);
     }
-    refreshValues(p);
+    refreshValues();
 }
 
 QWidget* Inspector::makeTextRow(std::size_t index) {
@@ -290,18 +298,9 @@ std::string_view Inspector::rowKey(const Row& row) const {
 QString Inspector::parseRow(const Row& row, const QString& text,
                             std::vector<std::pair<std::string_view, FieldValue>>& changes) const {
     const std::string_view key = rowKey(row);
-    const FieldSpec& spec = *findField(*m_formKind, key);
-    const QString t = text.trimmed();
     FieldValue v;
-    if (!t.isEmpty() && (spec.type == FieldType::Number || spec.type == FieldType::Integer)) {
-        bool ok = false;
-        const double d = QLocale::c().toDouble(t, &ok);
-        if (!ok)
-            return tr("%1: '%2' is not a number").arg(peopleName(spec), t);
-        v = d / spec.shownScale;
-    } else if (!t.isEmpty()) {
-        v = t.toStdString();
-    }
+    if (QString why = parseFieldText(*findField(*m_formKind, key), text, v); !why.isEmpty())
+        return why;
     changes.emplace_back(key, v);
     if (row.pair)
         changes.emplace_back(row.pairChoice == 0 ? row.pair->second : row.pair->first,
@@ -310,16 +309,19 @@ QString Inspector::parseRow(const Row& row, const QString& text,
 }
 
 void Inspector::onTextEdited(std::size_t index) {
-    const Part* p = current();
-    if (!p || index >= m_rows.size() || !m_rows[index].spec)
+    const auto parts = shown();
+    if (parts.empty() || index >= m_rows.size() || !m_rows[index].spec)
         return;
     Row& row = m_rows[index];
     std::vector<std::pair<std::string_view, FieldValue>> changes;
     QString why = parseRow(row, row.edit->text(), changes);
-    if (why.isEmpty()) {
+    for (const Part* p : parts) {
+        if (!why.isEmpty())
+            break;
         Part trial = *p;
         if (auto refused = trial.set(changes, FieldNaming::People))
-            why = QString::fromStdString(*refused);
+            why = (parts.size() > 1 ? QString::fromStdString(p->tag) + ": " : QString()) +
+                  QString::fromStdString(*refused);
     }
     row.edit->setStyleSheet(why.isEmpty() ? QString() : kRefusedStyle);
     m_message->setText(why);
@@ -344,27 +346,39 @@ void Inspector::onTextCommitted(std::size_t index) {
 
 QString Inspector::commit(const std::vector<std::pair<std::string_view, FieldValue>>& changes,
                           const QString& what) {
-    const Part* p = current();
-    if (!p)
+    const auto parts = shown();
+    if (parts.empty())
         return tr("no part selected");
-    Part trial = *p;
-    if (auto why = trial.set(changes, FieldNaming::People)) {
-        m_message->setText(tr("Refused: %1").arg(QString::fromStdString(*why)));
-        return QString::fromStdString(*why);
+    std::vector<Part> after;
+    for (const Part* p : parts) {
+        Part trial = *p;
+        if (auto why = trial.set(changes, FieldNaming::People)) {
+            // All or none: one part refusing the value leaves every part as it was.
+            const QString reason =
+                (parts.size() > 1 ? QString::fromStdString(p->tag) + ": " : QString()) +
+                QString::fromStdString(*why);
+            m_message->setText(tr("Refused: %1").arg(reason));
+            return reason;
+        }
+        if (!(trial == *p))
+            after.push_back(std::move(trial));
     }
     m_message->clear();
-    if (!(trial == *p))
-        emit editRequested(trial, tr("Set %1 of %2").arg(what, QString::fromStdString(trial.tag)));
+    if (!after.empty())
+        emit editRequested(std::move(after),
+                           parts.size() == 1
+                               ? tr("Set %1 of %2").arg(what, QString::fromStdString(parts[0]->tag))
+                               : tr("Set %1 of %2 parts").arg(what).arg(parts.size()));
     // The edit may have been refused further up, or changed nothing: show the model's values.
-    if (const Part* now = current())
-        refreshValues(*now);
+    if (current())
+        refreshValues();
     return {};
 }
 
 QString Inspector::commitTag(const QString& text) {
     const Part* p = current();
-    if (!p)
-        return tr("no part selected");
+    if (!p || m_parts.size() != 1)
+        return tr("select one part to rename it");
     QString why;
     const QString t = text.trimmed();
     if (t.isEmpty())
@@ -379,22 +393,32 @@ QString Inspector::commitTag(const QString& text) {
     Part trial = *p;
     trial.tag = t.toStdString();
     if (!(trial == *p))
-        emit editRequested(trial, tr("Rename %1 to %2").arg(QString::fromStdString(p->tag), t));
-    if (const Part* now = current())
-        refreshValues(*now);
+        emit editRequested({trial}, tr("Rename %1 to %2").arg(QString::fromStdString(p->tag), t));
+    if (current())
+        refreshValues();
     return {};
 }
 
-void Inspector::refreshValues(const Part& p) {
-    m_title->setText(QString::fromStdString(p.tag) + " — " + qs(kindInfo(p.kind).name));
+void Inspector::refreshValues() {
+    const auto parts = shown();
+    if (parts.empty())
+        return;
+    const Part& p = *parts.front();
+    m_title->setText(parts.size() == 1
+                         ? QString::fromStdString(p.tag) + " — " + qs(kindInfo(p.kind).name)
+                         : tr("%1 parts — %2 (blank: values differ)")
+                               .arg(parts.size())
+                               .arg(qs(kindInfo(p.kind).name)));
     for (Row& row : m_rows)
-        refreshRow(row, p);
+        refreshRow(row, parts);
 }
 
-void Inspector::refreshRow(Row& row, const Part& p) {
+void Inspector::refreshRow(Row& row, const std::vector<const Part*>& parts) {
+    const Part& p = *parts.front();
     if (!row.spec) { // the tag
-        if (!row.edit->isModified() && row.edit->text() != QString::fromStdString(p.tag))
-            row.edit->setText(QString::fromStdString(p.tag));
+        const QString text = parts.size() == 1 ? QString::fromStdString(p.tag) : QString();
+        if (!row.edit->isModified() && row.edit->text() != text)
+            row.edit->setText(text);
         return;
     }
     if (row.pair && !row.edit->isModified()) {
@@ -407,22 +431,30 @@ void Inspector::refreshRow(Row& row, const Part& p) {
     }
     const FieldSpec& spec = *findField(p.kind, rowKey(row));
     const FieldValue& v = p.value(spec.key);
+    // Several parts: a value they do not all share shows blank (the box unchecked, no choice).
+    const bool mixed = std::any_of(parts.begin(), parts.end(),
+                                   [&](const Part* o) { return !(o->value(spec.key) == v); });
     if (row.edit && !row.edit->isModified()) {
-        const QString text = shownText(spec, v);
+        const QString text = mixed ? QString() : shownFieldText(spec, v);
         if (row.edit->text() != text)
             row.edit->setText(text);
+        row.edit->setPlaceholderText(mixed ? tr("(differs)") : QString());
         row.edit->setStyleSheet({});
     } else if (row.combo) {
         const auto* s = std::get_if<std::string>(&v);
-        const int i = row.combo->findData(s ? QString::fromStdString(*s) : QString());
+        const int i = mixed ? -1 : row.combo->findData(s ? QString::fromStdString(*s) : QString());
         row.combo->setCurrentIndex(i);
     } else if (row.check) {
-        row.check->setChecked(std::holds_alternative<bool>(v) && std::get<bool>(v));
+        row.check->setTristate(mixed);
+        if (mixed)
+            row.check->setCheckState(Qt::PartiallyChecked);
+        else
+            row.check->setChecked(std::holds_alternative<bool>(v) && std::get<bool>(v));
     }
 }
 
 void Inspector::refreshArcFlash() {
-    const Part* p = current();
+    const Part* p = m_parts.size() == 1 ? current() : nullptr;
     const auto& af = m_doc.result().arcFlash;
     const ArcFlashEquipment* e = nullptr;
     if (p && p->kind == PartKind::Bus && af)

@@ -14,9 +14,11 @@ class QLineEdit;
 
 namespace lineward::ui {
 
-/// Edits one part. The form is built once per selected part and updated in place after each
-/// edit, so an editor is never deleted while its own signal runs (a commit re-checks the
-/// drawing and emits partChanged from inside the editor's editingFinished).
+/// Edits one part, or several parts of one kind at once (their common fields; a value that
+/// differs between them shows blank, and an edit sets it on all as one command). The form is built
+/// once per selected part and updated in place after each edit, so an editor is never deleted while
+/// its own signal runs (a commit re-checks the drawing and emits partChanged from inside the
+/// editor's editingFinished).
 class Inspector : public QWidget {
     Q_OBJECT
 public:
@@ -25,13 +27,16 @@ public:
     ~Inspector() override;
     /// Shows this part (or nothing).
     void showPart(std::optional<PartId> id);
+    /// Shows one part, or the common fields of several parts of one kind, or nothing (no parts,
+    /// or parts of different kinds, which share no fields).
+    void showParts(const std::vector<PartId>& ids);
     QSize sizeHint() const override;
     /// The width at which every label and choice of every kind reads in full.
     int neededWidth() const;
 
 signals:
-    /// An accepted edit: the part as it should become.
-    void editRequested(lineward::Part after, QString description);
+    /// An accepted edit: the parts as they should become (one command).
+    void editRequested(std::vector<lineward::Part> after, QString description);
 
 private:
     /// One row of the form: the editor for a rating, a choice, a flag or an either-or pair.
@@ -47,10 +52,10 @@ private:
 
     void buildForm(const Part& p);
     void clearForm();
-    void refreshValues(const Part& p);
+    void refreshValues();
     /// A bus's arc-flash result from the check result (plain text), or nothing for other parts.
     void refreshArcFlash();
-    void refreshRow(Row& row, const Part& p);
+    void refreshRow(Row& row, const std::vector<const Part*>& parts);
     QWidget* makeTextRow(std::size_t index);
     QWidget* makeChoiceRow(std::size_t index);
     QWidget* makeFlagRow(std::size_t index);
@@ -66,10 +71,13 @@ private:
     QString commit(const std::vector<std::pair<std::string_view, FieldValue>>& changes,
                    const QString& what);
     QString commitTag(const QString& text);
+    /// The first shown part (the one part, or the first of several).
     const Part* current() const;
+    /// Every shown part still in the drawing.
+    std::vector<const Part*> shown() const;
 
     Document& m_doc;
-    std::optional<PartId> m_part;
+    std::vector<PartId> m_parts;
     std::optional<PartKind> m_formKind;
     std::vector<Row> m_rows;
     QFormLayout* m_form;

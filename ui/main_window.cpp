@@ -101,8 +101,8 @@ MainWindow::MainWindow(std::shared_ptr<const Tables> tables, QWidget* parent)
                     openFile(files.first());
             }));
     connect(m_inspector, &Inspector::editRequested, this,
-            guarded(this, tr("Changing a rating"), [this](Part after, QString text) {
-                m_doc.undoStack().push(new SetFieldsCommand(m_doc, {after}, text));
+            guarded(this, tr("Changing a rating"), [this](std::vector<Part> after, QString text) {
+                m_doc.undoStack().push(new SetFieldsCommand(m_doc, std::move(after), text));
             }));
     connect(&m_doc, &Document::modifiedChanged, this, &MainWindow::refreshTitle);
     connect(m_scene, &QGraphicsScene::selectionChanged, this,
@@ -265,7 +265,7 @@ QString MainWindow::applyFix(const Finding& f) {
 
 void MainWindow::selectionChanged() {
     const auto parts = m_scene->selectedParts();
-    m_inspector->showPart(parts.size() == 1 ? std::optional(parts.front()) : std::nullopt);
+    m_inspector->showParts(parts);
     if (parts.size() == 1)
         m_curves->showPart(parts.front());
 }

@@ -9,6 +9,7 @@
 
 class QDockWidget;
 class QLabel;
+class QMenu;
 class QTimer;
 
 namespace lineward::ui {
@@ -23,6 +24,7 @@ class CurvesPanel;
 class ChangesPanel;
 class ReviewPanel;
 class CompareMark;
+class AddBucketDialog;
 struct SubmittalOptions;
 
 /// One window per open drawing.
@@ -56,8 +58,14 @@ public:
     void groupSelectionAsBucket();
     /// File → Import Load List…: asks for the list, previews it for a bus, adds its buckets.
     void importLoadList();
-    /// Edit → Add Bucket…: one sized bucket on the selected (or first) MCC bus.
-    void addBucket();
+    /// Edit → Add Bucket…: one sized bucket on `bus`, or on the selected (or first) MCC or
+    /// switchboard bus when none is given.
+    void addBucket(PartId bus = {});
+    /// Edit → Save Bucket as Template…: the selected part's bucket into the bucket library.
+    void saveBucketAsTemplate();
+    /// Edit → Insert Bucket from Library…: a template, sized again for `bus` (or the selected
+    /// or first MCC bus) in the Add Bucket dialog.
+    void insertBucketFromLibrary(PartId bus = {});
     void printPreview();
     void printSubmittal();
     /// File → Arc-Flash Labels…: asks for the label stock and a PDF path, writes the labels.
@@ -100,6 +108,12 @@ private:
     void addRecent(const QString& path);
     void rebuildRecentMenu();
     void selectionChanged();
+    /// The bucket entries of a part's menu (an MCC or switchboard bus only).
+    void addBucketActions(QMenu& menu, PartId id);
+    /// The bus a new bucket goes on: `preferred` if it takes buckets, else the selected one,
+    /// else the first MCC bus; nothing (and the user told) when there is none.
+    PartId bucketBus(PartId preferred);
+    void placeBucketFrom(AddBucketDialog& dialog);
     void buildCompare();
     void buildReview();
     /// Accept… : asks for the reviewer's name (once) and the note, then records the acceptance.

@@ -31,6 +31,7 @@
 #include <QPrinter>
 #include <QSettings>
 #include <QStatusBar>
+#include <QToolBar>
 #include <functional>
 #include <set>
 
@@ -225,7 +226,23 @@ void MainWindow::buildEditMenu() {
                [this] { rotateSelection(); });
     menuAction(edit, tr("&Group as Bucket"), QKeySequence(tr("Ctrl+G")), this,
                [this] { groupSelectionAsBucket(); });
-    menuAction(edit, tr("Add &Bucket…"), QKeySequence(tr("Ctrl+B")), this, [this] { addBucket(); });
+    auto* addBucketAction = menuAction(edit, tr("Add &Bucket…"), QKeySequence(tr("Ctrl+B")), this,
+                                       [this] { addBucket(); });
+    addBucketAction->setObjectName("addBucketAction");
+    addBucketAction->setToolTip(tr("Add a sized motor bucket to the selected MCC or switchboard "
+                                   "bus (Ctrl+B)"));
+    auto* bar = addToolBar(tr("Edit"));
+    bar->setObjectName("editToolBar");
+    bar->setToolButtonStyle(Qt::ToolButtonTextOnly);
+    bar->addAction(addBucketAction);
+    menuAction(edit, tr("Save Bucket as &Template…"), QKeySequence(), this, [this] {
+        saveBucketAsTemplate();
+    })->setObjectName("saveTemplateAction");
+    auto* insert =
+        menuAction(edit, tr("&Insert Bucket from Library…"), QKeySequence(tr("Ctrl+Shift+B")), this,
+                   [this] { insertBucketFromLibrary(); });
+    insert->setObjectName("insertTemplateAction");
+    bar->addAction(insert);
     menuAction(edit, tr("Cancel Placing"), QKeySequence::Cancel, this,
                [this] { m_view->setPlaceKind(std::nullopt); });
     edit->addSeparator();

@@ -150,6 +150,7 @@ void MainWindow::showPartMenu(PartId id, QPoint at) {
     auto* menu = new QMenu(this);
     menu->setObjectName("partMenu");
     menu->setAttribute(Qt::WA_DeleteOnClose);
+    addBucketActions(*menu, id);
     // The findings about this part (the ones its badge shows), each copied: the menu outlives
     // the check result it was made from.
     for (const auto& f : m_doc.report().findings) {

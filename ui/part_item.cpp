@@ -367,6 +367,29 @@ void PartItem::paintBadge(QPainter* p) const {
     paintSeverityBadge(*p, *m_badge, badgeAt());
 }
 
+QIcon PartItem::symbolIcon(PartKind kind, int px) {
+    PartItem item(Part::make(kind, PartId(1), std::string()));
+    item.setBarSpan(-20, 20); // a bus: a short bar across the icon
+    const QRectF sym = item.symbolRect().adjusted(-2, -2, 2, 2);
+    QIcon icon;
+    for (int ratio : {1, 2}) {
+        QPixmap pm(px * ratio, px * ratio);
+        pm.setDevicePixelRatio(ratio);
+        pm.fill(Qt::transparent);
+        QPainter p(&pm);
+        p.setRenderHint(QPainter::Antialiasing);
+        const qreal scale = px / std::max(sym.width(), sym.height());
+        p.translate(px / 2.0, px / 2.0);
+        p.scale(scale, scale);
+        p.translate(-sym.center());
+        p.setPen(QPen(kInk, 1.6));
+        item.paintSymbol(&p);
+        p.end();
+        icon.addPixmap(pm);
+    }
+    return icon;
+}
+
 void PartItem::paint(QPainter* p, const QStyleOptionGraphicsItem* option, QWidget*) {
     // Below this scale a label would be a few pixels of grey: draw symbols and badges only.
     const qreal lod = option->levelOfDetailFromTransform(p->worldTransform());

@@ -6,6 +6,7 @@
 #include "rules/finding.h"
 
 #include <QGraphicsItem>
+#include <QIcon>
 #include <optional>
 
 namespace lineward::ui {
@@ -56,6 +57,10 @@ public:
     QRectF boundingRect() const override;
     QPainterPath shape() const override;
     void paint(QPainter* p, const QStyleOptionGraphicsItem* option, QWidget* widget) override;
+
+    /// The kind's symbol as the Sheet draws it (same strokes and ink), for the Parts palette:
+    /// sharp at 1× and 2× device pixel ratio.
+    static QIcon symbolIcon(PartKind kind, int px = 28);
 
     /// Widest label text (scene units) drawn beside a symbol.
     static constexpr qreal kLabelWidth = 130;

@@ -31,7 +31,8 @@ signals:
     void moveFinished(std::vector<lineward::PartId> parts, std::vector<QPointF> from,
                       std::vector<QPointF> to);
     void filesDropped(QStringList paths);
-    /// A right-click on a part or its badge: the part's review menu at a global point.
+    /// A right-click on a part or its badge: the part's menu (review, and buckets on a bus) at
+    /// a global point.
     void partMenuRequested(lineward::PartId part, QPoint globalPos);
 
 protected:

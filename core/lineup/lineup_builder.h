@@ -11,6 +11,7 @@
 
 #include <optional>
 #include <string>
+#include <utility>
 #include <vector>
 
 namespace lineward {
@@ -25,6 +26,8 @@ struct PlannedBucket {
     std::vector<Wire> wires; ///< bus → device → ... → motor
     Bucket bucket;
     std::vector<std::string> notes; ///< what the bucket lacks (soft starter and drive rows)
+    /// Values the designer changed after sizing (part index, field key): changeBucketValue.
+    std::vector<std::pair<std::size_t, std::string>> changed;
 };
 
 /// One line of a proposed bucket as a designer reads it: the part, its rating or setting, and

@@ -26,6 +26,7 @@
 #include <QTest>
 #include <QTimer>
 #include <QTreeWidget>
+#include <QWindow>
 #include <gtest/gtest.h>
 #include <memory>
 
@@ -118,9 +119,11 @@ void User::dragWire(WireEnd from, WireEnd to) {
     settle();
 }
 
-void User::clickPart(PartId id) {
+QPoint User::partPoint(PartId id) const {
     PartItem* item = m_w.scene()->itemFor(id);
-    ASSERT_NE(item, nullptr);
+    EXPECT_NE(item, nullptr);
+    if (!item)
+        return {};
     // A point of the part that nothing lies on (a bus bar carries its wires' ends).
     const QRectF r = item->shape().boundingRect();
     QPointF at = item->mapToScene(r.center());
@@ -131,7 +134,32 @@ void User::clickPart(PartId id) {
             break;
         }
     }
-    QTest::mouseClick(m_w.view()->viewport(), Qt::LeftButton, {}, viewPoint(at));
+    return viewPoint(at);
+}
+
+void User::clickPart(PartId id, Qt::KeyboardModifiers mods) {
+    QTest::mouseClick(m_w.view()->viewport(), Qt::LeftButton, mods, partPoint(id));
+    settle();
+}
+
+void User::rightClickPart(PartId id) {
+    // Through the window, as the platform delivers it: the window turns a right press into the
+    // context-menu event (a mouse event sent straight to the widget would not).
+    const QPoint at = m_w.view()->viewport()->mapTo(&m_w, partPoint(id));
+    QTest::mousePress(m_w.windowHandle(), Qt::RightButton, {}, at);
+    QTest::mouseRelease(m_w.windowHandle(), Qt::RightButton, {}, at);
+    settle();
+}
+
+void User::dragRubberBand(QPointF fromScene, QPointF toScene) {
+    QWidget* vp = m_w.view()->viewport();
+    const QPoint from = viewPoint(fromScene);
+    const QPoint to = m_w.view()->mapFromScene(toScene);
+    QTest::mousePress(vp, Qt::LeftButton, {}, from);
+    QTest::mouseMove(vp, from + QPoint(4, 4));
+    QTest::mouseMove(vp, (from + to) / 2);
+    QTest::mouseMove(vp, to);
+    QTest::mouseRelease(vp, Qt::LeftButton, {}, to);
     settle();
 }
 

@@ -29,8 +29,15 @@ public:
     PartId clickToPlace(PartKind kind, QPointF scenePos);
     /// Presses on one terminal, moves, releases on the other.
     void dragWire(WireEnd from, WireEnd to);
-    /// Clicks the part's symbol on the Sheet (it becomes the only selection).
-    void clickPart(PartId id);
+    /// Clicks the part's symbol on the Sheet (it becomes the only selection; with Ctrl held it
+    /// is added to or taken from the selection).
+    void clickPart(PartId id, Qt::KeyboardModifiers mods = Qt::NoModifier);
+    /// Right-clicks the part's symbol on the Sheet (press and release through the window, which
+    /// opens a context menu on the press as X11 does).
+    void rightClickPart(PartId id);
+    /// Press on the Sheet at one scene point, move and release at the other: a rubber band
+    /// that selects what it covers.
+    void dragRubberBand(QPointF fromScene, QPointF toScene);
     /// Clicks an empty place of the Sheet.
     void clickEmptySheet();
     /// A right-click on the part's badge (or its symbol where it has none), through the window
@@ -87,6 +94,8 @@ public:
 
 private:
     QPoint viewPoint(QPointF scenePos) const;
+    /// A view point on the part that nothing else lies on.
+    QPoint partPoint(PartId id) const;
     PartId newestPart() const;
     MainWindow& m_w;
 };
