@@ -13,6 +13,7 @@
 #include <spdlog/spdlog.h>
 #include <thread>
 #include <unordered_set>
+#include <utility>
 
 namespace lineward::ui {
 
@@ -264,8 +265,18 @@ void Document::startCheck() {
 void Document::finishCheck(quint64 generation, std::shared_ptr<const CheckResult> result) {
     if (generation != m_generation)
         return; // a newer edit is being checked; this result is stale
-    m_result = std::move(result);
+    auto previous = std::exchange(m_result, std::move(result));
     emit reportChanged();
+    // A large drawing's result takes milliseconds to free (its copy of the drawing, network,
+    // studies, findings): free it on a worker instead of before the Sheet's repaint. Only
+    // when nothing else holds it; the destructor waits for that worker as for a check.
+    if (m_lastOffThread && previous.use_count() == 1) {
+        ++m_running;
+        std::thread([this, old = std::move(previous)]() mutable {
+            old.reset();
+            --m_running;
+        }).detach();
+    }
 }
 
 void Document::waitForCheck() {

@@ -65,6 +65,9 @@ MainWindow::MainWindow(std::shared_ptr<const Tables> tables, QWidget* parent)
     auto* f = dock(m_findings, tr("Findings"), "findingsDock", Qt::BottomDockWidgetArea);
     auto* s = dock(m_schedules, tr("Schedules"), "schedulesDock", Qt::BottomDockWidgetArea);
     auto* c = dock(m_curves, tr("Curves"), "curvesDock", Qt::BottomDockWidgetArea);
+    // A tabbed dock behind another tab is still visible to Qt: the Schedules refill only when
+    // their tab is up (their text for a large plant costs milliseconds per edit).
+    connect(s, &QDockWidget::visibilityChanged, m_schedules, &SchedulesPanel::setOnTop);
     tabifyDockWidget(f, s);
     tabifyDockWidget(s, c);
     f->raise();

@@ -50,13 +50,19 @@ SchedulesPanel::SchedulesPanel(Document& doc, QWidget* parent) : QTabWidget(pare
 
 void SchedulesPanel::showEvent(QShowEvent* e) {
     QTabWidget::showEvent(e);
-    if (m_stale)
+    if (m_stale && m_onTop)
+        runGuarded(this, tr("Building the schedules"), [this] { rebuild(); });
+}
+
+void SchedulesPanel::setOnTop(bool onTop) {
+    m_onTop = onTop;
+    if (m_onTop && m_stale && isVisible())
         runGuarded(this, tr("Building the schedules"), [this] { rebuild(); });
 }
 
 void SchedulesPanel::refresh() {
     m_stale = true;
-    if (isVisible())
+    if (isVisible() && m_onTop)
         rebuild();
 }
 

@@ -33,6 +33,10 @@ class SchedulesPanel : public QTabWidget {
 public:
     explicit SchedulesPanel(Document& doc, QWidget* parent = nullptr);
 
+    /// Whether the panel's dock is up (a tabbed dock behind another tab stays "visible" to
+    /// Qt); behind another tab the tables are only marked stale, and refilled when it comes up.
+    void setOnTop(bool onTop);
+
 protected:
     void showEvent(QShowEvent* e) override;
 
@@ -43,6 +47,7 @@ private:
     void rebuild();
     Document& m_doc;
     bool m_stale = true;
+    bool m_onTop = true;
     std::vector<ScheduleModel*> m_models;
     std::vector<QTableView*> m_views;
     std::vector<bool> m_sized; ///< columns sized to their contents once the table had rows

@@ -130,7 +130,12 @@ void analyse(CheckResult& r, std::vector<Finding>& out) {
     });
     if (!r.study)
         return;
-    const StudyView view = *r.view();
+    // Every protective part's band once for the rules and the arc-flash study (the panels and
+    // the Submittal, which ask for a few paths, build theirs per use).
+    std::unique_ptr<const PathDeviceTable> devices;
+    runStage("curves", out, [&] { devices = std::make_unique<const PathDeviceTable>(*r.view()); });
+    StudyView view = *r.view();
+    view.devices = devices.get();
     runStage("motor facts", out, [&] { computeMotorFacts(r, view); });
     std::unordered_map<PartId, const MotorFacts*> factsByMotor;
     for (const auto& m : r.motors)

@@ -6,6 +6,7 @@
 #include "model/ratings.h"
 
 #include <cmath>
+#include <unordered_map>
 
 namespace lineward {
 
@@ -204,14 +205,19 @@ std::vector<ArcFlashEquipment> arcFlashStudy(const StudyView& ctx) {
     std::vector<ArcFlashEquipment> out;
     if (!ctx.study.faultSolved)
         return out;
+    // Each bucket's bus found once (asking per bus and bucket was buses × buckets).
+    std::unordered_map<const Part*, std::vector<const Bucket*>> bucketsOf;
+    for (const Bucket& b : ctx.drawing.buckets())
+        if (const Part* bus = busOfBucket(ctx, b))
+            bucketsOf[bus].push_back(&b);
     for (const Part& p : ctx.drawing.parts()) {
         if (p.kind != PartKind::Bus || !ctx.net.partEnergized(p.id))
             continue;
         const BusRatings r = BusRatings::of(p);
         out.push_back(evaluateAt(ctx, p, busKindKey(r.type), std::nullopt));
-        for (const Bucket& b : ctx.drawing.buckets())
-            if (busOfBucket(ctx, b) == &p)
-                out.push_back(evaluateAt(ctx, p, busKindKey(r.type), &b));
+        if (const auto it = bucketsOf.find(&p); it != bucketsOf.end())
+            for (const Bucket* b : it->second) // in the drawing's order, as before
+                out.push_back(evaluateAt(ctx, p, busKindKey(r.type), b));
     }
     return out;
 }

@@ -8,12 +8,41 @@
 
 namespace lineward {
 
+PathDeviceTable::PathDeviceTable(const StudyView& ctx) {
+    std::unordered_map<const Part*, const Part*> contactorOf;
+    for (const auto& b : ctx.branches)
+        if (b.overload)
+            contactorOf.emplace(b.overload, b.contactor);
+    for (const auto& p : ctx.drawing.parts()) {
+        auto c = TripCurve::of(p); // nothing for a part that is not protective
+
+        if (!c)
+            continue;
+        double clears = kNoTrip;
+        if (p.kind == PartKind::Overload) {
+            const auto k = contactorOf.find(&p);
+            clears = overloadBreakingA(ctx.tables, p, k == contactorOf.end() ? nullptr : k->second);
+        }
+        m_devices.emplace(p.id, PathDevice{&p, std::move(*c), clears});
+    }
+}
+
+const PathDevice* PathDeviceTable::find(PartId part) const {
+    const auto it = m_devices.find(part);
+    return it == m_devices.end() ? nullptr : &it->second;
+}
+
 std::vector<PathDevice> devicesOnPath(const StudyView& ctx, PartId id, PathExtent extent) {
     std::vector<PathDevice> out;
     const Part* p = ctx.drawing.part(id);
     if (!p)
         return out;
     auto add = [&](const Part* q) {
+        if (ctx.devices) {
+            if (const PathDevice* d = ctx.devices->find(q->id))
+                out.push_back(*d);
+            return;
+        }
         if (auto c = TripCurve::of(*q))
             out.push_back(
                 {q, *c, q->kind == PartKind::Overload ? overloadBreakingA(ctx, *q) : kNoTrip});
@@ -50,13 +79,18 @@ double overloadBreakingA(const StudyView& ctx, const Part& overload, std::string
             contactor = b.contactor;
             break;
         }
+    return overloadBreakingA(ctx.tables, overload, contactor, how);
+}
+
+double overloadBreakingA(const Tables& tables, const Part& overload, const Part* contactor,
+                         std::string* how) {
     const double x = kContactorBreakingX;
     if (contactor) {
         const auto k = ContactorRatings::of(*contactor);
         std::optional<double> ie = k.ac3A;
         std::string what = "AC-3 rating";
         if (!ie && k.nemaSize)
-            if (const auto* row = ctx.tables.nemaRow(*k.nemaSize)) {
+            if (const auto* row = tables.nemaRow(*k.nemaSize)) {
                 ie = row->continuousA;
                 what = "NEMA size " + *k.nemaSize + " continuous rating";
             }

@@ -7,9 +7,23 @@
 #include "studies/study_view.h"
 
 #include <optional>
+#include <unordered_map>
 #include <vector>
 
 namespace lineward {
+
+/// Every protective part's band and breaking limit, built once per check: the rules and the
+/// arc-flash study ask for the same devices many times (each motor, cable, bus and selectivity
+/// pair walks up through them), and a band built again per ask cost as much as the rule.
+class PathDeviceTable {
+public:
+    explicit PathDeviceTable(const StudyView& ctx);
+    /// The part's band, or null when it has none (not protective, or its user points are bad).
+    const PathDevice* find(PartId part) const;
+
+private:
+    std::unordered_map<PartId, PathDevice> m_devices;
+};
 
 /// How far up devicesOnPath goes: to the source; only to the first device above the part that
 /// is not an overload relay (what a selectivity check compares against); or only to the first
@@ -26,6 +40,9 @@ std::vector<PathDevice> devicesOnPath(const StudyView& ctx, PartId part,
 /// or NEMA size continuous current; the relay's setting where the branch has no rated
 /// contactor); `how` receives the reason in words.
 double overloadBreakingA(const StudyView& ctx, const Part& overload, std::string* how = nullptr);
+/// The same for a relay whose contactor is known (null: none in its branch).
+double overloadBreakingA(const Tables& tables, const Part& overload, const Part* contactor,
+                         std::string* how = nullptr);
 
 std::optional<StartProfile> startProfile(const StudyView& ctx, const Part& motor);
 

@@ -200,7 +200,8 @@ void minimumFaultReach(const RuleContext& ctx, const Part& c, std::vector<Findin
     const double amps = *imin * 1000.0 * ratio;
     if (!fast || amps >= fast->first)
         return;
-    const auto curve = TripCurve::of(dev);
+    const PathDevice* known = ctx.devices ? ctx.devices->find(dev.id) : nullptr;
+    const auto curve = known ? std::optional<TripCurve>(known->curve) : TripCurve::of(dev);
     const double t = curve ? curve->maxTime(amps) : kNoTrip;
     auto f =
         makeFinding("curve.min_fault.reach", {dev.id, c.id},
@@ -235,10 +236,16 @@ void selectivity(const RuleContext& ctx, const Part& d, const Part* overloadBelo
     if (path.empty() || path.front().part->id != d.id)
         return;
     const TripCurve& down = path.front().curve;
-    auto olCurve = overloadBelow ? TripCurve::of(*overloadBelow) : std::nullopt;
-    std::string olBreakHow;
-    const double olBreakA =
-        overloadBelow ? overloadBreakingA(ctx, *overloadBelow, &olBreakHow) : kNoTrip;
+    // The relay's band and breaking limit from the check's table; its reason in words is
+    // composed only for a finding.
+    const PathDevice* ol =
+        overloadBelow && ctx.devices ? ctx.devices->find(overloadBelow->id) : nullptr;
+    const auto olCurve = ol              ? std::optional<TripCurve>(ol->curve)
+                         : overloadBelow ? TripCurve::of(*overloadBelow)
+                                         : std::nullopt;
+    const double olBreakA = ol              ? ol->clearsUpToA
+                            : overloadBelow ? overloadBreakingA(ctx, *overloadBelow)
+                                            : kNoTrip;
     const PathDevice* up = nullptr;
     for (std::size_t i = 1; i < path.size(); ++i)
         if (path[i].part->kind != PartKind::Overload) {
@@ -285,8 +292,11 @@ void selectivity(const RuleContext& ctx, const Part& d, const Part* overloadBelo
                                                            : "")},
             {"at " + kA(i), "downstream clears by " + secs(dmax) + ", upstream may trip in " +
                                 secs(umin) + " (margin " + fmt(margin, 2) + " s)"}};
-        if (olCurve)
+        if (olCurve) {
+            std::string olBreakHow;
+            overloadBreakingA(ctx, *overloadBelow, &olBreakHow);
             f.trace.push_back({overloadBelow->tag + " credited up to " + kA(olBreakA), olBreakHow});
+        }
         f.fix =
             Fix{"raise " + up->part->tag + "'s short-time or instantaneous setting, or add a delay",
                 {}};

@@ -15,6 +15,8 @@
 
 namespace lineward {
 
+class PathDeviceTable; // curves/path_curves.h
+
 /// Inputs every curve and rule computation reads; all owned by the check result.
 struct StudyView {
     const Drawing& drawing;
@@ -23,6 +25,8 @@ struct StudyView {
     const Tables& tables;
     const StudyResults& study;
     const std::vector<MotorBranch>& branches;
+    /// Every protective part's band, built once by the check; null: curves are built per use.
+    const PathDeviceTable* devices = nullptr;
     const Settings& settings() const { return drawing.settings; }
     /// The part's tag, or "#id" for a part without one.
     std::string tag(PartId id) const;

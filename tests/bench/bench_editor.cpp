@@ -7,6 +7,7 @@
 
 #include <QAction>
 #include <QApplication>
+#include <QDockWidget>
 #include <QElapsedTimer>
 #include <QLineEdit>
 #include <QScrollBar>
@@ -29,7 +30,22 @@ QAction* action(ui::MainWindow& w, const QKeySequence& key) {
 struct Editor {
     explicit Editor(int parts) : plant(bench::makePlant(parts)), w(loadBuiltinTables()) {
         w.resize(1400, 900);
+        // The layout a first start shows (Findings, Schedules and Curves tabbed, Curves up: the
+        // window raises Findings before it is shown, which leaves the last tab up), whatever an
+        // earlier session saved in the user's settings: a saved layout with Schedules up made
+        // the figures depend on the machine's history.
+        auto* f = w.findChild<QDockWidget*>("findingsDock");
+        auto* s = w.findChild<QDockWidget*>("schedulesDock");
+        auto* c = w.findChild<QDockWidget*>("curvesDock");
+        for (auto* d : {f, s, c}) {
+            d->setFloating(false);
+            d->show();
+        }
+        w.tabifyDockWidget(f, s);
+        w.tabifyDockWidget(s, c);
         w.show();
+        c->raise();
+        QApplication::processEvents();
         w.document().reset(plant);
         QApplication::processEvents();
     }

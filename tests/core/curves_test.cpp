@@ -1,6 +1,8 @@
 // Device bands against the points their standards state, and selectivity on analytic cases.
 #include "check/check.h"
+#include "curves/path_curves.h"
 #include "curves/trip_curve.h"
+#include "plant_generator.h"
 #include "test_support.h"
 
 #include <cmath>
@@ -377,4 +379,45 @@ TEST(MinimumFault, APickupTheLeastFaultAtTheCableEndDoesNotReachIsACaution) {
     d.settings.faultCMin = 0.8;
     const double imin08 = 0.8 * v / std::abs(zSrc / 0.95 * 0.8 + zCable);
     EXPECT_EQ(static_cast<bool>(reach(d)), imin08 < 600.0);
+}
+
+// The check builds every protective part's band once (PathDeviceTable) and the paths read it;
+// a path walked without the table builds each band again. Both must give the same devices,
+// bands, breaking limits and labels for every part of a plant with motor branches.
+TEST(PathDeviceTable, PathsFromTheTableEqualPathsBuiltPerUse) {
+    const Drawing d = bench::makePlant(300, 6);
+    const auto result = runCheck(d, test::testTables());
+    const auto perUse = result->view();
+    ASSERT_TRUE(perUse);
+    ASSERT_EQ(perUse->devices, nullptr); // a result's view builds bands per use
+    const PathDeviceTable table(*perUse);
+    StudyView withTable = *perUse;
+    withTable.devices = &table;
+    int compared = 0;
+    for (const auto& p : result->drawing->parts())
+        for (auto extent :
+             {PathExtent::ToSource, PathExtent::NearestUpstream, PathExtent::OwnProtection}) {
+            const auto a = devicesOnPath(withTable, p.id, extent);
+            const auto b = devicesOnPath(*perUse, p.id, extent);
+            ASSERT_EQ(a.size(), b.size()) << p.tag;
+            for (std::size_t i = 0; i < a.size(); ++i, ++compared) {
+                EXPECT_EQ(a[i].part, b[i].part) << p.tag;
+                EXPECT_EQ(a[i].curve.label(), b[i].curve.label()) << p.tag;
+                EXPECT_EQ(a[i].clearsUpToA, b[i].clearsUpToA) << p.tag;
+                for (double amps : {50.0, 500.0, 5000.0, 50000.0}) {
+                    EXPECT_EQ(a[i].curve.minTime(amps), b[i].curve.minTime(amps)) << p.tag;
+                    EXPECT_EQ(a[i].curve.maxTime(amps), b[i].curve.maxTime(amps)) << p.tag;
+                }
+            }
+        }
+    EXPECT_GT(compared, 1000); // breakers, fuses and relays on every motor's path
+}
+
+// Each model's label words, as the legends and traces show them.
+TEST(TripCurveLabel, SaysTheSettingsAndWhatWasAssumed) {
+    const auto tm = TripCurve::of(device(PartKind::Breaker, {{"trip_a", 90.0}}));
+    EXPECT_EQ(tm->label(), "D 90 A TM, inst 900 A (assumed)");
+    const auto ol = TripCurve::of(
+        device(PartKind::Overload, {{"setting_a", 16.0}, {"trip_class", std::string("20")}}));
+    EXPECT_EQ(ol->label(), "D 16 A class 20");
 }

@@ -110,6 +110,33 @@ TEST(MainWindow, SchedulesShownAfterEditsHoldTheNewValues) {
     EXPECT_TRUE(again);
 }
 
+TEST(MainWindow, SchedulesBehindAnotherTabWaitUntilTheirTabIsUp) {
+    // A dock tabbed behind another counts as visible to Qt: the Schedules must still not refill
+    // per edit while the Findings tab is up, and must show the newest values when clicked up.
+    MainWindow w(sharedTables());
+    ASSERT_TRUE(w.openFile(sample("kestrel-mill-mcc1.lineward"), true).isEmpty());
+    test::User user(w);
+    user.showPanel("Schedules");
+    auto* motors = w.findChild<QTableView*>("schedule_motors");
+    ASSERT_NE(motors, nullptr);
+    const auto* rows = motors->model();
+    auto overloadA = [&] {
+        for (int r = 0; r < rows->rowCount(); ++r)
+            if (rows->index(r, 0).data().toString() == "P-101")
+                return rows->index(r, 7).data().toString(); // the Overload A column
+        return QString();
+    };
+    const QString before = overloadA();
+    ASSERT_FALSE(before.isEmpty());
+    ASSERT_NE(before, "33.5");
+    user.showPanel("Findings");
+    user.clickPart(w.document().drawing().partByTag("OL-101")->id);
+    user.type("setting_a", "33.5", test::Commit::Enter);
+    EXPECT_EQ(overloadA(), before); // behind the Findings tab: not refilled
+    user.showPanel("Schedules");
+    EXPECT_EQ(overloadA(), "33.5");
+}
+
 TEST(MainWindow, InspectorShowsTheBusArcFlashResultAndFollowsAnEdit) {
     // Clicking a bus shows its arc-flash result, the check result's numbers as plain text; a
     // working distance typed into the Inspector changes it after the re-check.
