@@ -14,7 +14,7 @@ std::vector<PathDevice> devicesOnPath(const StudyView& ctx, PartId id, PathExten
     if (!p)
         return out;
     auto add = [&](const Part* q) {
-        if (auto c = TripCurve::of(*q))
+        if (auto c = TripCurve::of(*q, ctx.settings().curveBands))
             out.push_back(
                 {q, *c, q->kind == PartKind::Overload ? overloadBreakingA(ctx, *q) : kNoTrip});
     };
