@@ -54,7 +54,7 @@ ojson studyJson(const Network& net, const Flow& flow, const StudyResults& r) {
         ojson j;
         j["id"] = n;
         j["tag"] = nodeTag(net, n);
-        j["kv"] = round3(r.model.baseV[static_cast<std::size_t>(b)] / 1000.0);
+        j["kv"] = round3(r.model.nominalV[static_cast<std::size_t>(b)] / 1000.0);
         j["fault_ka"] = round3(f.ikKa);
         j["x_over_r"] = round3(f.xOverR);
         j["peak_ka"] = round3(f.peakKa);

@@ -48,7 +48,7 @@ void addTripCommand(CLI::App& app, int& exitCode) {
         if (!loaded)
             return;
         const Part* p = loaded->partByTag(a->tag);
-        auto curve = p ? TripCurve::of(*p) : std::nullopt;
+        auto curve = p ? TripCurve::of(*p, loaded->settings.curveBands) : std::nullopt;
         if (!curve) {
             std::cerr << "lineward-cli trip: "
                       << (p ? a->tag + " has no trip curve (not a breaker, fuse or overload relay)"

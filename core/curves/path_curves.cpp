@@ -14,7 +14,8 @@ PathDeviceTable::PathDeviceTable(const StudyView& ctx) {
         if (b.overload)
             contactorOf.emplace(b.overload, b.contactor);
     for (const auto& p : ctx.drawing.parts()) {
-        auto c = TripCurve::of(p); // nothing for a part that is not protective
+        // Nothing for a part that is not protective; generic bands as the drawing sets them.
+        auto c = TripCurve::of(p, ctx.settings().curveBands);
 
         if (!c)
             continue;
@@ -43,7 +44,7 @@ std::vector<PathDevice> devicesOnPath(const StudyView& ctx, PartId id, PathExten
                 out.push_back(*d);
             return;
         }
-        if (auto c = TripCurve::of(*q))
+        if (auto c = TripCurve::of(*q, ctx.settings().curveBands))
             out.push_back(
                 {q, *c, q->kind == PartKind::Overload ? overloadBreakingA(ctx, *q) : kNoTrip});
     };

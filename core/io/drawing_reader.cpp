@@ -119,7 +119,7 @@ private:
                    "coordination_margin_s", "ambient_c", "asymmetry_factor", "start_pf",
                    "motor_contribution_x", "fault_c_max", "fault_conductor_c", "tx_z_tolerance_pct",
                    "fault_c_min", "arc_flash_caution_cal", "arc_flash_max_time_s",
-                   "arc_flash_findings"});
+                   "arc_flash_findings", "motor_contribution_method", "curve_bands"});
         setting(j, "vdrop_branch_pct", s.vdropBranchPct, 0.1, 50);
         setting(j, "vdrop_total_pct", s.vdropTotalPct, 0.1, 50);
         setting(j, "start_dip_pct", s.startDipPct, 1, 90);
@@ -140,6 +140,25 @@ private:
                 throw Failure{"/settings/arc_flash_findings",
                               "arc_flash_findings must be true or false"};
             s.arcFlashFindings = j.at("arc_flash_findings").get<bool>();
+        }
+        if (j.contains("motor_contribution_method")) {
+            const auto v =
+                text(j.at("motor_contribution_method"), "/settings/motor_contribution_method");
+            if (v != "multiple" && v != "iec60909")
+                throw Failure{"/settings/motor_contribution_method",
+                              "motor_contribution_method must be \"multiple\" or \"iec60909\", "
+                              "found \"" +
+                                  cut(v) + "\""};
+            s.motorContribution =
+                v == "iec60909" ? MotorContribution::Iec60909 : MotorContribution::Multiple;
+        }
+        if (j.contains("curve_bands")) {
+            const auto v = text(j.at("curve_bands"), "/settings/curve_bands");
+            if (v != "typical" && v != "listing_limits")
+                throw Failure{"/settings/curve_bands",
+                              "curve_bands must be \"typical\" or \"listing_limits\", found \"" +
+                                  cut(v) + "\""};
+            s.curveBands = v == "listing_limits" ? CurveBands::ListingLimits : CurveBands::Typical;
         }
     }
 

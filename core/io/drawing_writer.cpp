@@ -82,6 +82,10 @@ ojson settingsJson(const Settings& s) {
         j["arc_flash_max_time_s"] = fieldValueJson(s.arcFlashMaxTimeS);
     if (!s.arcFlashFindings)
         j["arc_flash_findings"] = false;
+    if (s.motorContribution == MotorContribution::Iec60909)
+        j["motor_contribution_method"] = "iec60909";
+    if (s.curveBands == CurveBands::ListingLimits)
+        j["curve_bands"] = "listing_limits";
     return j;
 }
 

@@ -29,6 +29,14 @@ struct SheetInfo {
     bool operator==(const SheetInfo&) const = default;
 };
 
+/// How running motors feed a fault: a fixed multiple of FLC (common practice under the NEC),
+/// or the IEC 60909-0 motor impedance from locked-rotor current with R/X by motor size.
+enum class MotorContribution { Multiple, Iec60909 };
+
+/// Which generic time-current bands judge selectivity and cable damage: the typical shapes of
+/// today's devices, or the maximum clearing times the listing standards allow.
+enum class CurveBands { Typical, ListingLimits };
+
 /// Limits that are recommendations or common practice; each produces a caution when exceeded.
 struct Settings {
     double vdropBranchPct = 3.0;      ///< NEC 210.19(A) informational note
@@ -40,6 +48,8 @@ struct Settings {
     double asymmetryFactor = 1.5;     ///< common practice
     double startPf = 0.3;             ///< common practice
     double motorContributionX = 4.0;  ///< common practice: running motor feeds ~4 x FLC
+    MotorContribution motorContribution = MotorContribution::Multiple;
+    CurveBands curveBands = CurveBands::Typical;
     /// Maximum fault current, for duty: the voltage factor c (IEC 60909-0 c_max; 1.0 is the
     /// usual NEC-practice prefault voltage), conductors at this temperature (20 °C: cold
     /// conductors give the highest current) and transformer impedance this % below nameplate.

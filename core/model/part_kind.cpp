@@ -86,12 +86,27 @@ const std::array<FieldSpec, 4> kSourceFields{{
     {"x_over_r", "X/R ratio", "", FT::Number, 0.1, 200, false, false, 15.0},
 }};
 
-const std::array<FieldSpec, 5> kTransformerFields{{
+const std::array<FieldSpec, 6> kTransformerFields{{
     {"kva", "Rating", "kVA", FT::Number, 1, 100000, false, true},
     {"pri_v", "Primary voltage", "V", FT::Number, 100, 765000, false, true},
     {"sec_v", "Secondary voltage", "V", FT::Number, 100, 35000, false, true},
     {"z_pct", "Impedance", "%", FT::Number, 0.5, 30, false, true},
     {"x_over_r", "X/R ratio", "", FT::Number, 0.1, 200, false, false, 6.0},
+    // Off-load primary taps: distribution transformers commonly have 2 × 2.5 % above and below
+    // rated primary voltage (common practice); +2.5 % connects 1.025 × rated primary turns, so
+    // the secondary sits 2.4 % lower for the same applied voltage.
+    {"tap_pct",
+     "Primary tap",
+     "%",
+     FT::Number,
+     -10,
+     10,
+     false,
+     false,
+     0.0,
+     {},
+     "Primary winding tap in % of rated primary voltage: +2.5 lowers the secondary voltage by "
+     "about 2.4 %, −5 raises it by about 5.3 %"},
 }};
 
 const std::array<FieldSpec, 12> kBusFields{{

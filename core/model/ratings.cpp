@@ -156,6 +156,7 @@ TransformerRatings TransformerRatings::of(const Part& p) {
     r.secV = num(p, SLOT(kSecV));
     r.zPct = num(p, SLOT(kZPct));
     r.xOverR = num(p, SLOT(kXOverR));
+    r.tapPct = num(p, SLOT(kTapPct));
     return r;
 }
 

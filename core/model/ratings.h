@@ -35,9 +35,12 @@ struct SourceRatings {
 
 struct TransformerRatings {
     static constexpr std::string_view kKva = "kva", kPriV = "pri_v", kSecV = "sec_v",
-                                      kZPct = "z_pct", kXOverR = "x_over_r";
+                                      kZPct = "z_pct", kXOverR = "x_over_r", kTapPct = "tap_pct";
     double kva = 0, priV = 0, secV = 0, zPct = 0, xOverR = 0;
+    double tapPct = 0; ///< primary tap, % of rated primary voltage
     static TransformerRatings of(const Part& p);
+    /// Secondary volts per primary volt at this tap: secV / (priV · (1 + tap/100)).
+    double voltsRatio() const { return secV / (priV * (1.0 + tapPct / 100.0)); }
 };
 
 struct BusRatings {

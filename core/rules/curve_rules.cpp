@@ -89,6 +89,14 @@ void motorChecks(const RuleContext& ctx, const Part& m, std::vector<Finding>& ou
     }
 }
 
+// Which generic bands judged a pair, for the traces.
+std::string bandsInWords(CurveBands b) {
+    return b == CurveBands::ListingLimits
+               ? "generic bands at the listing limits (UL 489 maximum tripping times at 135 % "
+                 "and 200 %, from memory; fuses UL 248; relays by trip class)"
+               : "typical generic bands (common practice; drawing setting curve_bands)";
+}
+
 void cableDamage(const RuleContext& ctx, const Part& c, std::vector<Finding>& out) {
     auto i2t = cableDamageI2t(ctx, c);
     const double fault = availableFaultA(ctx, c);
@@ -134,7 +142,9 @@ void cableDamage(const RuleContext& ctx, const Part& c, std::vector<Finding>& ou
         f.computed = combined;
         f.limit = damage;
         f.unit = "s";
-        f.trace = {{"damage curve", fmt(*i2t, 0) + " A²s (ICEA P-32-382)"}, {"current", kA(i)}};
+        f.trace = {{"damage curve", fmt(*i2t, 0) + " A²s (ICEA P-32-382)"},
+                   {"current", kA(i)},
+                   {"bands", bandsInWords(ctx.settings().curveBands)}};
         if (relayBeyondContactor)
             for (const auto& d : devices)
                 if (d.part->kind == PartKind::Overload) {
@@ -263,45 +273,87 @@ void selectivity(const RuleContext& ctx, const Part& d, const Part* overloadBelo
         1.25 * (olCurve ? std::min(down.pickupA(), olCurve->pickupA()) : down.pickupA());
     if (fault <= lo)
         return;
-    auto downMax = [&](double i) {
-        double t = down.maxTime(i);
-        // Relay, contactor and device act together as one listed combination, the relay only
-        // up to what its contactor can break.
-        if (olCurve && i <= olBreakA)
-            t = std::min(t, olCurve->maxTime(i));
-        return t;
+    // The first current at which the upstream device may trip before the downstream one has
+    // cleared, with the downstream band `down`; nothing where they are selective throughout.
+    struct Overlap {
+        double at, goodUpTo, dmax, umin;
     };
-    double goodUpTo = 0;
-    for (int k = 0; k <= 40; ++k) {
-        const double i = lo * std::pow(fault / lo, k / 40.0);
-        const double dmax = downMax(i), umin = up->curve.minTime(i * ratio);
-        if (std::isinf(umin) || (!std::isinf(dmax) && umin > dmax + margin)) {
-            goodUpTo = i;
-            continue;
+    auto firstOverlap = [&](const TripCurve& downCurve) -> std::optional<Overlap> {
+        double goodUpTo = 0;
+        for (int k = 0; k <= 40; ++k) {
+            const double i = lo * std::pow(fault / lo, k / 40.0);
+            // Relay, contactor and device act together as one listed combination, the relay
+            // only up to what its contactor can break.
+            double dmax = downCurve.maxTime(i);
+            if (olCurve && i <= olBreakA)
+                dmax = std::min(dmax, olCurve->maxTime(i));
+            const double umin = up->curve.minTime(i * ratio);
+            if (std::isinf(umin) || (!std::isinf(dmax) && umin > dmax + margin)) {
+                goodUpTo = i;
+                continue;
+            }
+            return Overlap{i, goodUpTo, dmax, umin};
         }
-        auto f = makeFinding("curve.selectivity", {d.id, up->part->id},
-                             d.tag + " and " + up->part->tag + " are selective only up to " +
-                                 kA(goodUpTo) + " of the " + kA(fault) + " available");
-        f.computed = goodUpTo / 1000.0;
-        f.limit = fault / 1000.0;
-        f.unit = "kA";
-        f.trace = {
-            {"downstream", down.label() + (olCurve ? " with " + olCurve->label() : std::string())},
+        return std::nullopt;
+    };
+    const CurveBands bands = ctx.settings().curveBands;
+    auto trace = [&](const TripCurve& downCurve, const Overlap& o) {
+        std::vector<TraceStep> t{
+            {"downstream",
+             downCurve.label() + (olCurve ? " with " + olCurve->label() : std::string())},
             {"upstream", up->curve.label() + (ratio != 1.0 ? " (currents × " + fmt(ratio, 3) +
                                                                  " across the transformer)"
                                                            : "")},
-            {"at " + kA(i), "downstream clears by " + secs(dmax) + ", upstream may trip in " +
-                                secs(umin) + " (margin " + fmt(margin, 2) + " s)"}};
+            {"at " + kA(o.at), "downstream clears by " + secs(o.dmax) + ", upstream may trip in " +
+                                   secs(o.umin) + " (margin " + fmt(margin, 2) + " s)"}};
         if (olCurve) {
             std::string olBreakHow;
             overloadBreakingA(ctx, *overloadBelow, &olBreakHow);
-            f.trace.push_back({overloadBelow->tag + " credited up to " + kA(olBreakA), olBreakHow});
+            t.push_back({overloadBelow->tag + " credited up to " + kA(olBreakA), olBreakHow});
         }
+        return t;
+    };
+    const auto overlap = firstOverlap(down);
+    if (overlap) {
+        auto f = makeFinding("curve.selectivity", {d.id, up->part->id},
+                             d.tag + " and " + up->part->tag + " are selective only up to " +
+                                 kA(overlap->goodUpTo) + " of the " + kA(fault) + " available");
+        f.computed = overlap->goodUpTo / 1000.0;
+        f.limit = fault / 1000.0;
+        f.unit = "kA";
+        f.trace = trace(down, *overlap);
+        f.trace.push_back({"bands", bandsInWords(bands)});
         f.fix =
             Fix{"raise " + up->part->tag + "'s short-time or instantaneous setting, or add a delay",
                 {}};
         out.push_back(std::move(f));
         return;
+    }
+    // Selective on the typical generic bands: would the slowest clearing the listing standard
+    // allows still be? Where not, only the manufacturers' curves can decide the pair.
+    if (bands != CurveBands::Typical || !down.generic() || !up->curve.generic())
+        return;
+    const auto listed = TripCurve::of(d, CurveBands::ListingLimits);
+    if (!listed)
+        return;
+    if (const auto o = firstOverlap(*listed)) {
+        auto f = makeFinding("curve.selectivity.listing", {d.id, up->part->id},
+                             d.tag + " and " + up->part->tag +
+                                 " are selective on typical generic bands but not at the listing "
+                                 "limits above " +
+                                 kA(o->goodUpTo) + "; check them with the manufacturers' curves");
+        f.computed = o->goodUpTo / 1000.0;
+        f.limit = fault / 1000.0;
+        f.unit = "kA";
+        f.trace = trace(*listed, *o);
+        f.trace.push_back({"bands", "selective on " + bandsInWords(CurveBands::Typical) +
+                                        "; this step uses " +
+                                        bandsInWords(CurveBands::ListingLimits)});
+        f.fix = Fix{"confirm the pair with the manufacturers' published curves (enter them as "
+                    "curve points), or raise " +
+                        up->part->tag + "'s setting so the listing limits are selective too",
+                    {}};
+        out.push_back(std::move(f));
     }
 }
 

@@ -17,12 +17,17 @@ namespace {
 
 // The assumption behind the running motors' share of every fault current.
 TraceStep motorContributionStep(const RuleContext& ctx) {
+    if (ctx.settings().motorContribution == MotorContribution::Iec60909)
+        return {"motor contribution",
+                "each running motor feeds through Z_M = U_rM / (√3 · I_LR) at R/X 0.42 (low "
+                "voltage) or 0.15 / 0.10 (medium voltage) (IEC 60909-0 3.8.2, from memory; drawing "
+                "setting motor_contribution_method)"};
     const double x = ctx.settings().motorContributionX;
     if (x <= 0)
         return {"motor contribution", "none (drawing setting 0)"};
-    return {"motor contribution", "each running motor feeds " + fmt(x, 1) + " × its FLC at X/R " +
-                                      fmt(kMotorXr, 0) +
-                                      " (drawing setting and X/R assumed, common practice)"};
+    return {"motor contribution",
+            "each running motor feeds " + fmt(x, 1) + " × its FLC at X/R " + fmt(kMotorXr, 0) +
+                " (fixed-multiple method: drawing setting and X/R assumed, common practice)"};
 }
 
 // The conservatism of the maximum fault current, from the drawing's settings.

@@ -122,6 +122,11 @@ inline constexpr std::array kRules{
     RuleInfo{"study.loadflow.diverged", "load flow did not settle", "common practice",
              Severity::Caution,
              "the fixed-point load flow converges within 200 iterations to 1e−9 per unit"},
+    RuleInfo{"study.ratio.mismatch", "transformer ratios disagree around a loop", "common practice",
+             Severity::Caution,
+             "every closed path between two buses gives the same no-load voltage ratio (turns "
+             "ratio and tap of each transformer on it); otherwise a circulating current flows "
+             "that the studies do not model"},
     RuleInfo{"study.solve.failed", "a study could not be solved", "common practice",
              Severity::Violation,
              "the network's admittance matrix factorises, so the short-circuit study and the "
@@ -157,6 +162,10 @@ inline constexpr std::array kRules{
              "NEC 2023 215.2 informational note (setting)", Severity::Caution,
              "(|V_origin| − |V_load|) / V_nominal ≤ vdrop_total_pct; origin = supplying "
              "transformer or source"},
+    RuleInfo{"voltage.motor.range", "motor runs outside its voltage range", "NEMA MG 1-12.44",
+             Severity::Violation,
+             "steady-state terminal voltage within ±10 % of the motor's rated voltage (the "
+             "load flow, with every source at its rating and each transformer at its tap)"},
     RuleInfo{"voltage.start.dip", "bus dip while a motor starts", "common practice (setting)",
              Severity::Caution,
              "dip at the motor's bus with it at locked rotor, others running ≤ start_dip_pct"},
@@ -189,6 +198,11 @@ inline constexpr std::array kRules{
              "upstream minimum time > downstream maximum time + coordination margin for every "
              "current up "
              "to the fault available at the downstream device"},
+    RuleInfo{"curve.selectivity.listing", "selective only on typical generic bands",
+             "common practice (setting curve_bands)", Severity::Note,
+             "a pair judged selective on the typical generic bands is also selective with the "
+             "downstream thermal-magnetic breaker at its listing limits (UL 489 at 135 % and "
+             "200 %); where not, the manufacturers' curves must decide"},
     RuleInfo{"drawing.tag.duplicate", "duplicate tag", "common practice", Severity::Caution,
              "no two parts share a tag"},
     RuleInfo{"topology.dangling", "unconnected terminal", "common practice", Severity::Caution,

@@ -18,6 +18,8 @@ RuleId ruleOf(StudyIssueKind k) {
         return "study.solve.failed";
     case StudyIssueKind::LoadFlowDiverged:
         return "study.loadflow.diverged";
+    case StudyIssueKind::RatioMismatch:
+        return "study.ratio.mismatch";
     }
     return "study.not_finite";
 }

@@ -1,4 +1,5 @@
 // The voltage.* rules: steady-state drop against the drawing's limits, and motor starting.
+#include "model/ratings.h"
 #include "rules/rule_catalog.h"
 #include "rules/rule_context.h"
 #include "sizing/motor_sizing.h"
@@ -68,6 +69,45 @@ void drops(const RuleContext& ctx, const Part& load, std::vector<Finding>& out) 
     }
 }
 
+// NEMA MG 1-12.44 (from memory): a motor runs successfully at rated frequency within ±10 % of
+// its rated voltage. Steady state, from the load flow: the voltage at the motor's terminals
+// follows every drop and every transformer's ratio and tap.
+constexpr double kMotorVoltageBandPct = 10.0;
+
+void motorRange(const RuleContext& ctx, const Part& motor, std::vector<Finding>& out) {
+    const NodeIndex at = ctx.net.nodeOf(motor.id, 0);
+    const int bus = ctx.study.busOf(at);
+    const double rated = MotorRatings::of(motor).volts;
+    if (bus < 0 || rated <= 0)
+        return;
+    const double nominal = ctx.study.model.nominalV[static_cast<std::size_t>(bus)];
+    const double volts = vAt(ctx, at) * nominal;
+    const double pct = volts / rated * 100.0;
+    if (std::abs(pct - 100.0) <= kMotorVoltageBandPct + 1e-9)
+        return;
+    const bool high = pct > 100.0;
+    auto f = makeFinding("voltage.motor.range", {motor.id},
+                         motor.tag + " runs at " + fmt(volts, 0) + " V, " + fmt(pct, 1) +
+                             " % of its rated " + fmt(rated, 0) + " V (outside ±" +
+                             fmt(kMotorVoltageBandPct, 0) + " %)");
+    f.computed = pct;
+    f.limit = high ? 100.0 + kMotorVoltageBandPct : 100.0 - kMotorVoltageBandPct;
+    f.unit = "%";
+    f.trace = {{"voltage at the motor", fmt(vAt(ctx, at) * 100, 2) + " % of the bus's nominal " +
+                                            fmt(nominal, 0) + " V = " + fmt(volts, 0) + " V"},
+               {"supply", "every source at its rated voltage; each transformer at its turns "
+                          "ratio and primary tap"},
+               {"band", "±" + fmt(kMotorVoltageBandPct, 0) +
+                            " % of rated voltage (NEMA MG 1-12.44, from memory)"},
+               runningMotorsStep()};
+    f.fix = Fix{high ? "set the supplying transformer's primary tap higher (a + tap lowers the "
+                       "secondary) or use a motor rated for the system voltage"
+                     : "set the supplying transformer's primary tap lower (a − tap raises the "
+                       "secondary), or use larger conductors",
+                {}};
+    out.push_back(std::move(f));
+}
+
 void starting(const RuleContext& ctx, const Part& motor, const MotorStart& ms,
               std::vector<Finding>& out) {
     const auto& s = ctx.settings();
@@ -118,6 +158,8 @@ void checkVoltage(const RuleContext& ctx, std::vector<Finding>& out) {
         if (p.kind != PartKind::Motor && p.kind != PartKind::Load)
             continue;
         drops(ctx, p, out);
+        if (p.kind == PartKind::Motor)
+            motorRange(ctx, p, out);
         if (auto it = ctx.study.starts.find(p.id); it != ctx.study.starts.end())
             starting(ctx, p, it->second, out);
     }

@@ -5,7 +5,9 @@
 #include "model/ratings.h"
 #include "sizing/motor_sizing.h"
 
+#include <algorithm>
 #include <cmath>
+#include <deque>
 #include <numeric>
 
 namespace lineward {
@@ -62,6 +64,14 @@ std::optional<Complex> cableOhms(const Part& cable, const Tables& t) {
     return Complex(*r, x) * (lengthFt / 1000.0) / sets;
 }
 
+double iecMotorROverX(double ratedV, double kw) {
+    if (ratedV <= 1000.0)
+        return 0.42; // low-voltage motors with their connection cables
+    // Medium voltage: 0.10 where the power per pole pair is 1 MW or more, else 0.15; the pole
+    // count is not in the drawing, so four poles (two pairs) are assumed.
+    return kw / 2.0 >= 1000.0 ? 0.10 : 0.15;
+}
+
 double resistanceFactorFrom75C(bool aluminium, double tempC) {
     return 1.0 + (aluminium ? 0.00330 : 0.00323) * (tempC - 75.0);
 }
@@ -97,6 +107,76 @@ void mergeBuses(NetworkModel& m, const Network& net) {
     }
 }
 
+// Each bus's per-unit base is the voltage it has at no load: sources at their rating, carried
+// through every transformer's turns ratio and tap (a cable keeps it). Where the transformers'
+// voltages match the drawing's this is the nominal voltage; an off-nominal tap or a winding
+// rated for another system voltage moves it, and with it every secondary voltage and fault
+// current. A loop whose ratios disagree keeps the first path's base and is reported.
+void ratioBases(NetworkModel& m, const Network& net) {
+    const Drawing& d = net.drawing();
+    const auto& g = net.graph();
+    const int n = m.busCount();
+    m.nominalV = m.baseV;
+    struct Link {
+        int to;
+        double ratio; ///< volts at `to` per volt here
+        PartId part;
+    };
+    std::vector<std::vector<Link>> links(static_cast<std::size_t>(n));
+    for (auto [e, end] = boost::edges(g); e != end; ++e) {
+        const Part& p = *d.part(g[*e].part);
+        const int a = m.busOfNode[boost::source(*e, g)], b = m.busOfNode[boost::target(*e, g)];
+        if (!g[*e].closed || !hasImpedance(p.kind) || a < 0 || b < 0 || a == b)
+            continue;
+        double ratio = 1.0;
+        if (p.kind == PartKind::Transformer) {
+            const double r = TransformerRatings::of(p).voltsRatio();
+            const bool aIsPrimary = m.busOfNode[net.nodeOf(p.id, 0)] == a;
+            ratio = aIsPrimary ? r : 1.0 / r;
+        }
+        links[static_cast<std::size_t>(a)].push_back({b, ratio, p.id});
+        links[static_cast<std::size_t>(b)].push_back({a, 1.0 / ratio, p.id});
+    }
+    std::vector<char> seen(static_cast<std::size_t>(n), 0);
+    std::deque<int> queue;
+    for (const auto& p : d.parts()) {
+        if (p.kind != PartKind::Source)
+            continue;
+        const int bus = m.busOfNode[net.nodeOf(p.id, 0)];
+        if (bus >= 0 && !seen[static_cast<std::size_t>(bus)]) {
+            seen[static_cast<std::size_t>(bus)] = 1;
+            m.baseV[static_cast<std::size_t>(bus)] = SourceRatings::of(p).kv * 1000.0;
+            queue.push_back(bus);
+        }
+    }
+    std::vector<PartId> reported;
+    while (!queue.empty()) {
+        const int u = queue.front();
+        queue.pop_front();
+        for (const Link& l : links[static_cast<std::size_t>(u)]) {
+            const double v = m.baseV[static_cast<std::size_t>(u)] * l.ratio;
+            auto& there = m.baseV[static_cast<std::size_t>(l.to)];
+            if (!seen[static_cast<std::size_t>(l.to)]) {
+                seen[static_cast<std::size_t>(l.to)] = 1;
+                there = v;
+                queue.push_back(l.to);
+            } else if (std::abs(v / there - 1.0) > kRatioMismatchTolerance &&
+                       std::find(reported.begin(), reported.end(), l.part) == reported.end()) {
+                reported.push_back(l.part);
+                m.issues.push_back(
+                    {StudyIssueKind::RatioMismatch,
+                     {l.part},
+                     d.part(l.part)->tag +
+                         ": the voltage ratios around a closed loop through it "
+                         "disagree (" +
+                         formatNumber(std::round(v)) + " V against " +
+                         formatNumber(std::round(there)) +
+                         " V at no load); the circulating current this drives is not modelled"});
+            }
+        }
+    }
+}
+
 // Transformers and cables between solve buses.
 void addBranches(NetworkModel& m, const Network& net, const Tables& t, const Settings& s) {
     const Drawing& d = net.drawing();
@@ -109,8 +189,13 @@ void addBranches(NetworkModel& m, const Network& net, const Tables& t, const Set
         Complex z, zMax, zMin;
         if (p.kind == PartKind::Transformer) {
             // kVA and %Z are required ratings: every drawing read or edited has them.
+            // %Z is on the rated kVA and the rated secondary voltage; the secondary bus's base
+            // differs from that rating where a tap or an off-nominal primary moves it.
             const auto tx = TransformerRatings::of(p);
-            const double zpu = tx.zPct / 100.0 * kBaseMva / (tx.kva / 1000.0);
+            const double secBase =
+                m.baseV[static_cast<std::size_t>(m.busOfNode[net.nodeOf(p.id, 1)])];
+            const double zpu = tx.zPct / 100.0 * kBaseMva / (tx.kva / 1000.0) *
+                               (tx.secV / secBase) * (tx.secV / secBase);
             z = fromMagnitude(zpu, tx.xOverR);
             zMax = z * (1.0 - s.txZTolerancePct / 100.0);
             zMin = z;
@@ -155,7 +240,15 @@ void addShunts(NetworkModel& m, const Network& net, const Tables& t, const Setti
             const double rated = motor.volts;
             const double sPu = std::sqrt(3.0) * rated * amps / (kBaseMva * 1e6);
             m.loads.push_back({bus, std::polar(sPu, std::acos(kRunningPf)), p.id});
-            if (s.motorContributionX > 0) {
+            if (s.motorContribution == MotorContribution::Iec60909) {
+                // IEC 60909-0 3.8.2 (from memory): Z_M = U_rM / (√3 · I_LR), R/X by size.
+                const auto lr = lockedRotor(p, t, nullptr);
+                const double lra = lr ? lr->amps : kAssumedLockedRotorMultiple * amps;
+                const double zOhm = rated / std::sqrt(3.0) / lra;
+                const double kw = motor.kw ? *motor.kw : motor.hp.value_or(0) * 0.746;
+                m.motors.push_back(
+                    {bus, fromMagnitude(zOhm / zBase(vb), 1.0 / iecMotorROverX(rated, kw)), p.id});
+            } else if (s.motorContributionX > 0) {
                 const double zOhm =
                     rated / std::sqrt(3.0) / (s.motorContributionX * (flc ? flc->amps : amps));
                 m.motors.push_back({bus, fromMagnitude(zOhm / zBase(vb), kMotorXr), p.id});
@@ -174,6 +267,7 @@ void addShunts(NetworkModel& m, const Network& net, const Tables& t, const Setti
 NetworkModel buildNetworkModel(const Network& net, const Tables& t, const Settings& s) {
     NetworkModel m;
     mergeBuses(m, net);
+    ratioBases(m, net);
     addBranches(m, net, t, s);
     addShunts(m, net, t, s);
     return m;

@@ -34,6 +34,11 @@ struct ModelBranch {
 /// aluminium (NEC Chapter 9 Table 8, Note 2, from memory).
 double resistanceFactorFrom75C(bool aluminium, double tempC);
 
+/// R/X of a motor's fault impedance under IEC 60909-0 3.8.2 (from memory): 0.42 for
+/// low-voltage motors (≤ 1000 V, with their connection cables); medium-voltage 0.10 where the
+/// rated power per pole pair is ≥ 1 MW, else 0.15 (four poles assumed).
+double iecMotorROverX(double ratedV, double kw);
+
 /// A source or motor seen as an EMF of 1 per unit behind an impedance to ground.
 struct ModelShunt {
     int bus = -1;
@@ -51,7 +56,11 @@ struct ModelLoad {
 /// Per-unit model of the energized network.
 struct NetworkModel {
     std::vector<int> busOfNode; ///< network node → solve bus (−1 when not energized)
-    std::vector<double> baseV;  ///< by solve bus: nominal line-to-line volts
+    /// By solve bus: the per-unit base, line-to-line volts — the bus's no-load voltage with
+    /// every source at its rating and every transformer at its turns ratio and tap (equal to
+    /// the nominal voltage where the ratios agree with the drawing's voltages).
+    std::vector<double> baseV;
+    std::vector<double> nominalV; ///< by solve bus: the node's nominal line-to-line volts
     std::vector<ModelBranch> branches;
     std::vector<ModelShunt> sources, motors;
     std::vector<ModelLoad> loads;   ///< motors running and static loads
@@ -74,6 +83,9 @@ std::optional<Complex> cableOhms(const Part& cable, const Tables& tables);
 /// voltage result in the digits shown (1e12 per unit: about 2e9 ohms at 480 V on the 100 MVA
 /// base).
 inline constexpr double kGroundLeakPu = 1e-12;
+/// Two paths' no-load voltages at a bus that differ by more than this fraction are reported as
+/// a ratio mismatch (0.5 %: a fifth of one 2.5 % tap step; common practice).
+inline constexpr double kRatioMismatchTolerance = 0.005;
 /// Impedance (per unit, R and X each) given to a cable whose size has no impedance data: a
 /// closed connection that the studies treat as having none, as their study issue says.
 inline constexpr double kNoDataCablePu = 1e-9;

@@ -66,6 +66,7 @@ NetworkModel faultModel(const NetworkModel& m, double c, bool maximum) {
     NetworkModel f;
     f.busOfNode = m.busOfNode;
     f.baseV = m.baseV;
+    f.nominalV = m.nominalV;
     f.branches = m.branches;
     for (auto& b : f.branches)
         b.z = maximum ? b.zMaxFault : b.zMinFault;
@@ -75,6 +76,15 @@ NetworkModel faultModel(const NetworkModel& m, double c, bool maximum) {
     if (maximum)
         f.motors = m.motors;
     return f;
+}
+
+// The prefault voltage at a bus in per unit of its base (its no-load voltage through the
+// transformers' ratios and taps): for the maximum fault the higher of that and the nominal
+// voltage, for the minimum the lower, so a tap can only make either case more conservative.
+double prefaultPu(const NetworkModel& m, int bus, bool maximum) {
+    const double nominalOverBase =
+        m.nominalV[static_cast<std::size_t>(bus)] / m.baseV[static_cast<std::size_t>(bus)];
+    return maximum ? std::max(1.0, nominalOverBase) : std::min(1.0, nominalOverBase);
 }
 
 // The least current a bolted three-phase fault draws at each bus: what an instantaneous or
@@ -89,7 +99,7 @@ void minimumFaultStudy(StudyResults& r, const Settings& s) {
     for (int k = 0; k < r.model.busCount(); ++k) {
         const Complex zth = z.loops ? z.loops->zth(k) : z.lu->zColumn(k)[k];
         r.minFaultKa[static_cast<std::size_t>(k)] =
-            c / std::abs(zth) * r.model.baseAmps(k) / 1000.0;
+            c * prefaultPu(r.model, k, false) / std::abs(zth) * r.model.baseAmps(k) / 1000.0;
     }
 }
 
@@ -114,7 +124,7 @@ void faultStudy(StudyResults& r, const Settings& s) {
         // networks (more than LoopSolver::kMaxChordsPerTree loops in one tree) take it.
         const Complex zth = z.loops ? z.loops->zth(k) : z.lu->zColumn(k)[k];
         FaultAtBus f;
-        f.ikKa = c / std::abs(zth) * r.model.baseAmps(k) / 1000.0;
+        f.ikKa = c * prefaultPu(r.model, k, true) / std::abs(zth) * r.model.baseAmps(k) / 1000.0;
         f.xOverR = zth.real() > 0 ? zth.imag() / zth.real() : 1e6;
         f.kappa = peakFactor(f.xOverR);
         f.peakKa = f.kappa * std::sqrt(2.0) * f.ikKa;
@@ -166,6 +176,13 @@ void loadFlow(StudyResults& r, const LoadFlowSolver& y) {
         }
     }
     r.voltage.assign(v.data(), v.data() + n);
+}
+
+// The load flow solves on each bus's base (its no-load voltage); every voltage the checks and
+// reports read is in per unit of the bus's nominal voltage.
+void toNominal(StudyResults& r) {
+    for (std::size_t b = 0; b < r.voltage.size(); ++b)
+        r.voltage[b] *= r.model.baseV[b] / r.model.nominalV[b];
 }
 
 void originVoltages(StudyResults& r, const Network& net, const Flow& flow) {
@@ -312,9 +329,10 @@ StudyResults runStudies(const Network& net, const Flow& flow, const Tables& t, c
                             "usable voltage (look for long, small feeders); voltage checks are "
                             "skipped"});
     }
-    originVoltages(r, net, flow);
     partCurrents(r, net, flow);
     motorStarting(r, net, flow, z, t, s);
+    toNominal(r);
+    originVoltages(r, net, flow);
     guardStudyResults(r, net);
     return r;
 }

@@ -33,7 +33,7 @@ struct StudyResults {
     /// Minimum fault current in kA by solve bus (c_min, conductors at their insulation
     /// rating, no motors); empty when it could not be solved.
     std::vector<double> minFaultKa;
-    std::vector<Complex> voltage;        ///< steady state, per unit, by solve bus
+    std::vector<Complex> voltage;        ///< steady state, per unit of nominal, by solve bus
     std::vector<double> originVoltagePu; ///< |V| at the bus's supplying transformer or source
     bool loadFlowConverged = false;
     /// False where the network's equations could not be solved (a singular admittance matrix):

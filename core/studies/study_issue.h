@@ -16,6 +16,7 @@ enum class StudyIssueKind {
     FaultSolveFailed,    ///< the fault study's admittance matrix did not factorise
     LoadFlowSolveFailed, ///< the load flow's admittance matrix did not factorise
     LoadFlowDiverged,    ///< the load flow did not settle within its iteration limit
+    RatioMismatch,       ///< transformers around a loop disagree on a bus's voltage
 };
 
 /// One thing a study could not compute, where and why.

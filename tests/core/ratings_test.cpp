@@ -25,8 +25,9 @@ std::set<std::string_view> declaredKeys(PartKind kind) {
         return {SourceRatings::kKv, SourceRatings::kFaultKa, SourceRatings::kFaultMva,
                 SourceRatings::kXOverR};
     case PartKind::Transformer:
-        return {TransformerRatings::kKva, TransformerRatings::kPriV, TransformerRatings::kSecV,
-                TransformerRatings::kZPct, TransformerRatings::kXOverR};
+        return {TransformerRatings::kKva,    TransformerRatings::kPriV,
+                TransformerRatings::kSecV,   TransformerRatings::kZPct,
+                TransformerRatings::kXOverR, TransformerRatings::kTapPct};
     case PartKind::Bus:
         return {BusRatings::kType,      BusRatings::kVolts,       BusRatings::kAmps,
                 BusRatings::kBracingKa, BusRatings::kPhases,      BusRatings::kAfConfig,

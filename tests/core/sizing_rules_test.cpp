@@ -36,9 +36,11 @@ void applyFix(Drawing& d, const Finding& f) {
 } // namespace
 
 TEST(BranchRules, SmallLineupIsClean) {
+    // Clean: nothing that asks for action (its one note is about generic curves).
     auto r = checkDrawing(smallLineup(), testTables());
     for (const auto& f : r.findings)
-        ADD_FAILURE() << f.ruleId << ": " << f.message;
+        if (f.severity != Severity::Note)
+            ADD_FAILURE() << f.ruleId << ": " << f.message;
 }
 
 TEST(BranchRules, ConductorTooSmallAndItsFix) {

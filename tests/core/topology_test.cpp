@@ -48,7 +48,10 @@ TEST(Network, BranchChainRunsFromMotorToItsBus) {
 }
 
 TEST(Topology, CleanLineupHasNoFindings) {
-    EXPECT_TRUE(rulesOf(smallLineup()).empty());
+    // Its one note says its generic branch breaker is undecided against the main at the
+    // listing limits (taps_and_methods_test.cpp works the numbers); nothing else.
+    const std::vector<std::string> expect{"curve.selectivity.listing"};
+    EXPECT_EQ(rulesOf(smallLineup()), expect);
 }
 
 TEST(Topology, UnwiredMotorIsUnfedAndDangling) {
