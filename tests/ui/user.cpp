@@ -142,15 +142,6 @@ void User::clickPart(PartId id, Qt::KeyboardModifiers mods) {
     settle();
 }
 
-void User::rightClickPart(PartId id) {
-    // Through the window, as the platform delivers it: the window turns a right press into the
-    // context-menu event (a mouse event sent straight to the widget would not).
-    const QPoint at = m_w.view()->viewport()->mapTo(&m_w, partPoint(id));
-    QTest::mousePress(m_w.windowHandle(), Qt::RightButton, {}, at);
-    QTest::mouseRelease(m_w.windowHandle(), Qt::RightButton, {}, at);
-    settle();
-}
-
 void User::dragRubberBand(QPointF fromScene, QPointF toScene) {
     QWidget* vp = m_w.view()->viewport();
     const QPoint from = viewPoint(fromScene);

@@ -32,9 +32,6 @@ public:
     /// Clicks the part's symbol on the Sheet (it becomes the only selection; with Ctrl held it
     /// is added to or taken from the selection).
     void clickPart(PartId id, Qt::KeyboardModifiers mods = Qt::NoModifier);
-    /// Right-clicks the part's symbol on the Sheet (press and release through the window, which
-    /// opens a context menu on the press as X11 does).
-    void rightClickPart(PartId id);
     /// Press on the Sheet at one scene point, move and release at the other: a rubber band
     /// that selects what it covers.
     void dragRubberBand(QPointF fromScene, QPointF toScene);
