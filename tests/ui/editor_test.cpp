@@ -196,142 +196,142 @@ TEST(Editor, EveryCommandUndoesToTheSameBytes) {
         user.clickPart(d.partByTag("F-103")->id);
         user.press(Qt::Key_Delete);
         EXPECT_TRUE(d.comments().empty());
-        check("multi-edit", [&] {
-            user.clickPart(d.partByTag("C-101")->id);
-            user.clickPart(d.partByTag("C-104")->id, Qt::ControlModifier);
-            user.type("length_ft", "80", Commit::Enter);
+    });
+    check("multi-edit", [&] {
+        user.clickPart(d.partByTag("C-101")->id);
+        user.clickPart(d.partByTag("C-104")->id, Qt::ControlModifier);
+        user.type("length_ft", "80", Commit::Enter);
+    });
+    check("add bucket", [&] {
+        User::whenModal<AddBucketDialog>([](AddBucketDialog* dialog) {
+            auto* hp = dialog->findChild<QLineEdit*>("bucket_hp");
+            QTest::mouseClick(hp, Qt::LeftButton);
+            QTest::keyClicks(hp, "15");
+            QTest::mouseClick(dialog->findChild<QPushButton*>("placeBucket"), Qt::LeftButton);
         });
-        check("add bucket", [&] {
-            User::whenModal<AddBucketDialog>([](AddBucketDialog* dialog) {
-                auto* hp = dialog->findChild<QLineEdit*>("bucket_hp");
-                QTest::mouseClick(hp, Qt::LeftButton);
-                QTest::keyClicks(hp, "15");
-                QTest::mouseClick(dialog->findChild<QPushButton*>("placeBucket"), Qt::LeftButton);
-            });
-            user.clickPart(d.partByTag("MCC-1")->id);
-            user.press(Qt::Key_B, Qt::ControlModifier);
-        });
+        user.clickPart(d.partByTag("MCC-1")->id);
+        user.press(Qt::Key_B, Qt::ControlModifier);
+    });
 }
 
 TEST(Editor, MoveDragPushesOneMergedCommand) {
-        MainWindow w(sharedTables());
-        User user(w);
-        const PartId id = user.clickToPlace(PartKind::Motor, QPointF(0, 0));
-        auto& stack = w.document().undoStack();
-        const int count = stack.count();
-        for (int i = 1; i <= 3; ++i)
-            user.dragPart(id, QPointF(0, 10)); // press, move, release: one move per drag
-        EXPECT_EQ(stack.count(), count + 1);   // repeated moves of the same part merge
-        EXPECT_EQ(w.document().drawing().part(id)->y, 30);
-        user.press(Qt::Key_Z, Qt::ControlModifier);
-        EXPECT_EQ(w.document().drawing().part(id)->y, 0);
+    MainWindow w(sharedTables());
+    User user(w);
+    const PartId id = user.clickToPlace(PartKind::Motor, QPointF(0, 0));
+    auto& stack = w.document().undoStack();
+    const int count = stack.count();
+    for (int i = 1; i <= 3; ++i)
+        user.dragPart(id, QPointF(0, 10)); // press, move, release: one move per drag
+    EXPECT_EQ(stack.count(), count + 1);   // repeated moves of the same part merge
+    EXPECT_EQ(w.document().drawing().part(id)->y, 30);
+    user.press(Qt::Key_Z, Qt::ControlModifier);
+    EXPECT_EQ(w.document().drawing().part(id)->y, 0);
 }
 
 TEST(Editor, WireDraggedBetweenTerminalsWithTheMouse) {
-        MainWindow w(sharedTables());
-        User user(w);
-        const PartId a = user.clickToPlace(PartKind::Breaker, QPointF(0, 0));
-        const PartId b = user.dragFromPalette(PartKind::Cable, QPointF(0, 100));
-        user.dragWire({a, 1}, {b, 0});
-        ASSERT_EQ(w.document().drawing().wires().size(), 1u);
-        const Wire& wire = w.document().drawing().wires().front();
-        EXPECT_EQ(wire.a, (WireEnd{a, 1}));
-        EXPECT_EQ(wire.b, (WireEnd{b, 0}));
+    MainWindow w(sharedTables());
+    User user(w);
+    const PartId a = user.clickToPlace(PartKind::Breaker, QPointF(0, 0));
+    const PartId b = user.dragFromPalette(PartKind::Cable, QPointF(0, 100));
+    user.dragWire({a, 1}, {b, 0});
+    ASSERT_EQ(w.document().drawing().wires().size(), 1u);
+    const Wire& wire = w.document().drawing().wires().front();
+    EXPECT_EQ(wire.a, (WireEnd{a, 1}));
+    EXPECT_EQ(wire.b, (WireEnd{b, 0}));
 }
 
 TEST(Editor, RandomEditsUndoneGiveBackTheOriginalBytes) {
-        MainWindow w(sharedTables());
-        ASSERT_TRUE(
-            w.openFile(test::samplePath("kestrel-mill-mcc1-review.lineward"), true).isEmpty());
-        User user(w);
-        const auto original = test::drawingBytes(w);
-        std::mt19937 rng(20261202);
-        const Drawing& d = w.document().drawing();
-        auto randomPart = [&] { return d.parts()[rng() % d.parts().size()].id; };
-        // Clicks a part; false where another item lies on top of it (dense lineups).
-        auto select = [&](PartId id) {
-            user.clickPart(id);
-            const auto sel = w.scene()->selectedParts();
-            return sel.size() == 1 && sel.front() == id;
-        };
-        int edits = 0;
-        for (int tries = 0; edits < 120 && tries < 1000; ++tries) {
-            const int before = w.document().undoStack().index();
-            switch (rng() % 7) {
-            case 0:
-                user.clickToPlace(static_cast<PartKind>(rng() % kPartKindCount),
-                                  QPointF(2500 + 60.0 * (rng() % 20), 60.0 * (rng() % 12)));
-                break;
-            case 1:
-                if (select(randomPart()))
-                    user.press(Qt::Key_Delete);
-                break;
-            case 2: {
-                const PartId id = randomPart();
-                if (select(id))
-                    user.dragPart(id, QPointF(10.0 * (1 + rng() % 5), 10));
-                break;
-            }
-            case 3:
-                if (select(randomPart()))
-                    user.press(Qt::Key_R, Qt::ControlModifier);
-                break;
-            case 4:
-                if (select(randomPart()))
-                    user.type("tag", QString("T-%1").arg(rng() % 10000), Commit::Enter);
-                break;
-            case 5: {
-                const PartId a = randomPart(), b = randomPart();
-                if (!(a == b))
-                    user.dragWire({a, 0}, {b, 0});
-                break;
-            }
-            default:
-                if (select(randomPart())) {
-                    user.press(Qt::Key_C, Qt::ControlModifier);
-                    user.press(Qt::Key_V, Qt::ControlModifier);
-                }
-            }
-            edits += w.document().undoStack().index() > before ? 1 : 0;
+    MainWindow w(sharedTables());
+    ASSERT_TRUE(w.openFile(test::samplePath("kestrel-mill-mcc1-review.lineward"), true).isEmpty());
+    User user(w);
+    const auto original = test::drawingBytes(w);
+    std::mt19937 rng(20261202);
+    const Drawing& d = w.document().drawing();
+    auto randomPart = [&] { return d.parts()[rng() % d.parts().size()].id; };
+    // Clicks a part; false where another item lies on top of it (dense lineups).
+    auto select = [&](PartId id) {
+        user.clickPart(id);
+        const auto sel = w.scene()->selectedParts();
+        return sel.size() == 1 && sel.front() == id;
+    };
+    int edits = 0;
+    for (int tries = 0; edits < 120 && tries < 1000; ++tries) {
+        const int before = w.document().undoStack().index();
+        switch (rng() % 7) {
+        case 0:
+            user.clickToPlace(static_cast<PartKind>(rng() % kPartKindCount),
+                              QPointF(2500 + 60.0 * (rng() % 20), 60.0 * (rng() % 12)));
+            break;
+        case 1:
+            if (select(randomPart()))
+                user.press(Qt::Key_Delete);
+            break;
+        case 2: {
+            const PartId id = randomPart();
+            if (select(id))
+                user.dragPart(id, QPointF(10.0 * (1 + rng() % 5), 10));
+            break;
         }
-        EXPECT_GE(edits, 120);
-        user.clickEmptySheet(); // the Sheet takes the keyboard; Ctrl+Z is the window's Undo
-        for (int i = 0; i < 2000 && w.document().undoStack().canUndo(); ++i)
-            user.press(Qt::Key_Z, Qt::ControlModifier);
-        EXPECT_FALSE(w.document().undoStack().canUndo());
-        EXPECT_EQ(test::drawingBytes(w), original);
+        case 3:
+            if (select(randomPart()))
+                user.press(Qt::Key_R, Qt::ControlModifier);
+            break;
+        case 4:
+            if (select(randomPart()))
+                user.type("tag", QString("T-%1").arg(rng() % 10000), Commit::Enter);
+            break;
+        case 5: {
+            const PartId a = randomPart(), b = randomPart();
+            if (!(a == b))
+                user.dragWire({a, 0}, {b, 0});
+            break;
+        }
+        default:
+            if (select(randomPart())) {
+                user.press(Qt::Key_C, Qt::ControlModifier);
+                user.press(Qt::Key_V, Qt::ControlModifier);
+            }
+        }
+        edits += w.document().undoStack().index() > before ? 1 : 0;
+    }
+    EXPECT_GE(edits, 120);
+    user.clickEmptySheet(); // the Sheet takes the keyboard; Ctrl+Z is the window's Undo
+    for (int i = 0; i < 2000 && w.document().undoStack().canUndo(); ++i)
+        user.press(Qt::Key_Z, Qt::ControlModifier);
+    EXPECT_FALSE(w.document().undoStack().canUndo());
+    EXPECT_EQ(test::drawingBytes(w), original);
 }
 
 TEST(Editor, LargePlantIsCheckedOffTheGuiThread) {
-        MainWindow w(sharedTables());
-        Drawing plant = bench::makePlant(2000);
-        w.document().reset(std::move(plant));
-        w.document().waitForCheck();
-        ASSERT_GE(w.document().drawing().parts().size(), Document::kBackgroundParts);
-        User user(w);
-        user.clickPart(w.document().drawing().partByTag("C-1-4")->id);
-        user.type("size", "14 AWG", Commit::Enter);
-        w.document().waitForCheck();
-        EXPECT_TRUE(w.document().lastCheckOffGuiThread()); // the window stayed free meanwhile
-        EXPECT_NE(test::findingOf(w, "branch.conductor.ampacity"), nullptr);
-        // A small drawing is checked at once on the GUI thread (no hand-over worth its cost).
-        MainWindow small(sharedTables());
-        ASSERT_TRUE(small.openFile(test::samplePath("kestrel-mill-mcc1.lineward"), true).isEmpty());
-        EXPECT_FALSE(small.document().lastCheckOffGuiThread());
+    MainWindow w(sharedTables());
+    Drawing plant = bench::makePlant(2000);
+    w.document().reset(std::move(plant));
+    w.document().waitForCheck();
+    ASSERT_GE(w.document().drawing().parts().size(), Document::kBackgroundParts);
+    User user(w);
+    user.clickPart(w.document().drawing().partByTag("C-1-4")->id);
+    user.type("size", "14 AWG", Commit::Enter);
+    w.document().waitForCheck();
+    EXPECT_TRUE(w.document().lastCheckOffGuiThread()); // the window stayed free meanwhile
+    EXPECT_NE(test::findingOf(w, "branch.conductor.ampacity"), nullptr);
+    // A small drawing is checked at once on the GUI thread (no hand-over worth its cost).
+    MainWindow small(sharedTables());
+    ASSERT_TRUE(small.openFile(test::samplePath("kestrel-mill-mcc1.lineward"), true).isEmpty());
+    EXPECT_FALSE(small.document().lastCheckOffGuiThread());
 }
 
 TEST(Editor, AutosaveWritesARecoveryCopyWithoutTouchingTheDocument) {
-        qputenv("LINEWARD_AUTOSAVE_SECONDS", "1");
-        MainWindow w(sharedTables());
-        qunsetenv("LINEWARD_AUTOSAVE_SECONDS");
-        ASSERT_TRUE(w.openFile(test::samplePath("kestrel-mill-mcc1.lineward"), true).isEmpty());
-        User user(w);
-        QTest::qWait(1300); // nothing changed: nothing written
-        EXPECT_FALSE(QFile::exists(w.recoveryPath()));
-        user.clickToPlace(PartKind::Load, QPointF(3000, 0));
-        QTest::qWait(1300);
-        ASSERT_TRUE(QFile::exists(w.recoveryPath()));
-        EXPECT_EQ(test::fileBytes(w.recoveryPath()), test::drawingBytes(w));
-        EXPECT_TRUE(w.document().isModified()); // still unsaved; the file path is unchanged
-        EXPECT_TRUE(w.document().filePath().endsWith("kestrel-mill-mcc1.lineward"));
+    qputenv("LINEWARD_AUTOSAVE_SECONDS", "1");
+    MainWindow w(sharedTables());
+    qunsetenv("LINEWARD_AUTOSAVE_SECONDS");
+    ASSERT_TRUE(w.openFile(test::samplePath("kestrel-mill-mcc1.lineward"), true).isEmpty());
+    User user(w);
+    QTest::qWait(1300); // nothing changed: nothing written
+    EXPECT_FALSE(QFile::exists(w.recoveryPath()));
+    user.clickToPlace(PartKind::Load, QPointF(3000, 0));
+    QTest::qWait(1300);
+    ASSERT_TRUE(QFile::exists(w.recoveryPath()));
+    EXPECT_EQ(test::fileBytes(w.recoveryPath()), test::drawingBytes(w));
+    EXPECT_TRUE(w.document().isModified()); // still unsaved; the file path is unchanged
+    EXPECT_TRUE(w.document().filePath().endsWith("kestrel-mill-mcc1.lineward"));
 }
