@@ -167,9 +167,17 @@ struct SubmittalData {
     const StudyView* view; ///< nothing where no study could run (no curve sheets then)
     SheetScene& scene;
     std::vector<PartId> curveParts;
-    std::vector<FlowTable> tables; ///< findings, accepted deviations, comments, schedules
+    std::vector<FlowTable> tables;     ///< findings, accepted deviations, comments, schedules
     std::vector<ArcFlashLabel> labels; ///< one per bus and bucket, after the curve sheets
+    /// Labels are drawn this much larger than their stock size, so that a Submittal printed at
+    /// half scale still carries them at their own size (and its text at 2 mm or more).
+    double labelScale = 1.0;
 };
+
+// The area the label grid is laid out in: the page body at the labels' own scale.
+QRectF labelArea(const QRectF& body, double labelScale) {
+    return QRectF(body.topLeft(), body.size() / labelScale);
+}
 
 // Flags each part added or changed since the previous revision; returns the revision table's
 // line about them (empty without a previous revision) and the flags' revision.
@@ -223,11 +231,18 @@ int paintPages(QPagedPaintDevice& dev, const SubmittalData& s, const SubmittalSt
         paintCurves(painter, c.body(), s.view ? buildCurveSet(*s.view, id) : CurveSet{}, st.small);
     }
     // The arc-flash labels at their printed size, as the label stock carries them.
-    const auto perPage = static_cast<std::size_t>(labelGridFor(c.body()).perPage());
+    const QRectF area = labelArea(c.body(), s.labelScale);
+    const auto perPage = static_cast<std::size_t>(labelGridFor(area).perPage());
     for (std::size_t first = 0; first < s.labels.size(); first += perPage) {
         nextPage(c);
         titleBlock(c, "Arc-flash labels");
-        if (!paintLabelGrid(painter, c.body(), s.labels, first, s.d) && error.isEmpty())
+        painter.save();
+        painter.translate(area.topLeft());
+        painter.scale(s.labelScale, s.labelScale);
+        painter.translate(-area.topLeft());
+        const bool fits = paintLabelGrid(painter, area, s.labels, first, s.d);
+        painter.restore();
+        if (!fits && error.isEmpty())
             error = "an arc-flash label does not fit its place on the Submittal";
     }
     painter.end();
@@ -263,6 +278,7 @@ SubmittalResult paintSubmittal(QPagedPaintDevice& dev, std::shared_ptr<const Che
     tb.date = o.date.isEmpty() ? QDate::currentDate().toString(Qt::ISODate) : o.date;
     tb.checkedBy = !o.checkedBy.isEmpty() ? o.checkedBy : qs(d.sheet.checkedBy);
     data.labels = arcFlashLabels(*result, tb.date.toStdString());
+    data.labelScale = o.printScale > 0 && o.printScale < 1 ? 1.0 / o.printScale : 1.0;
     tb.status = qs(checkStatusWords(result->report));
     const SubmittalStyle st = SubmittalStyle::forDevice(dev, o.printScale);
     const double minScale = oneLineMinScale(st, o);
@@ -271,7 +287,8 @@ SubmittalResult paintSubmittal(QPagedPaintDevice& dev, std::shared_ptr<const Che
     const QRectF body = submittalBodyRect(dev, st);
     const FlowLayout flow = layoutFlow(dev, st, body, data.tables);
     const QRectF src = scene.itemsBoundingRect().adjusted(-30, -30, 30, 30);
-    const auto perPage = static_cast<std::size_t>(labelGridFor(body).perPage());
+    const auto perPage =
+        static_cast<std::size_t>(labelGridFor(labelArea(body, data.labelScale)).perPage());
     const auto labelPages = (data.labels.size() + perPage - 1) / perPage;
     const int pages = oneLineSheetCount(src, body, minScale) + static_cast<int>(flow.pages.size()) +
                       static_cast<int>(data.curveParts.size() + labelPages);
