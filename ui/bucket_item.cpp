@@ -48,7 +48,7 @@ void BucketItem::setArcFlashMark(const QString& text) {
 }
 
 QRectF BucketItem::boundingRect() const {
-    return m_frame.adjusted(-2, -14, 2, m_arcFlashMark.isEmpty() ? 2 : 8);
+    return m_frame.adjusted(-2, -14, 2, m_arcFlashMark.isEmpty() ? 2 : 9);
 }
 
 QPainterPath BucketItem::shape() const {
@@ -84,12 +84,12 @@ void BucketItem::paint(QPainter* p, const QStyleOptionGraphicsItem* option, QWid
 void BucketItem::paintArcFlashMark(QPainter* p) const {
     // The bus's arc-flash mark in small: a notched amber tab astride the frame's bottom edge.
     QFont f;
-    f.setPixelSize(8);
+    f.setPixelSize(10); // no smaller than the labels: the Submittal sizes print by the smallest
     const QFontMetricsF fm(f);
     const qreal room = m_frame.width() - 8;
     const QString text = fm.elidedText(m_arcFlashMark, Qt::ElideRight, room - 6);
     const qreal w = std::min(room, fm.horizontalAdvance(text) + 8);
-    const QRectF r(m_frame.right() - 4 - w, m_frame.bottom() - 5, w, 11);
+    const QRectF r(m_frame.right() - 4 - w, m_frame.bottom() - 6, w, 13);
     QPainterPath tab;
     tab.moveTo(r.left() + 3, r.top());
     tab.lineTo(r.right(), r.top());
