@@ -232,6 +232,8 @@ TEST(AddBucket, RightClickOnTheMccBusOffersIt) {
         QTest::keyClick(dialog, Qt::Key_Escape);
     });
     user.rightClickPart(w.document().drawing().partByTag("MCC-1")->id);
+    // The part menu is a popup: the person reads it and picks the entry a moment later.
+    QTest::qWaitFor([&] { return !title.isEmpty(); }, 5000);
     user.settle();
     EXPECT_EQ(title, "Add Bucket to MCC-1");
 }
