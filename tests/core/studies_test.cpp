@@ -20,24 +20,6 @@ using namespace lineward::test;
 
 namespace {
 
-struct Studied {
-    Drawing d;
-    std::unique_ptr<Network> net;
-    std::unique_ptr<Flow> flow;
-    StudyResults r;
-    explicit Studied(Drawing dr) : d(std::move(dr)) {
-        net = std::make_unique<Network>(d);
-        flow = std::make_unique<Flow>(*net);
-        r = runStudies(*net, *flow, testTables(), d.settings);
-    }
-    const FaultAtBus& faultAt(PartId part, int terminal = 0) const {
-        return *r.faultAtNode(net->nodeOf(part, terminal));
-    }
-    double vAt(PartId part, int terminal = 0) const {
-        return std::abs(r.voltage[static_cast<std::size_t>(r.busOf(net->nodeOf(part, terminal)))]);
-    }
-};
-
 // Source → transformer → bus, optionally → cable → second bus.
 Drawing transformerLineup(double sourceMva, double kva, double zPct, double xr,
                           const char* cableSize = nullptr, double lengthFt = 0, double sets = 1) {
@@ -322,13 +304,6 @@ static Drawing sourceOnBus(double faultKa, double xOverR, PartKind device,
     b.wire(dev, 1, c, 0);
     b.wire(c, 1, ld, 0);
     return b.drawing();
-}
-
-static const Finding* findRule(const CheckReport& r, std::string_view rule) {
-    for (const auto& f : r.findings)
-        if (f.ruleId == rule)
-            return &f;
-    return nullptr;
 }
 
 // IEEE Std 1015 method (from memory): a rating tested at X/R 4.9 (UL 489 above 20 kA, power

@@ -17,23 +17,13 @@ using namespace lineward::test;
 
 namespace {
 
-struct Studied {
-    Drawing d;
-    std::unique_ptr<Network> net;
-    std::unique_ptr<Flow> flow;
-    StudyResults r;
-    explicit Studied(Drawing dr) : d(std::move(dr)) {
-        net = std::make_unique<Network>(d);
-        flow = std::make_unique<Flow>(*net);
-        r = runStudies(*net, *flow, testTables(), d.settings);
-    }
-    int bus(PartId part) const { return r.busOf(net->nodeOf(part, 0)); }
-    double vPu(PartId part) const {
-        return std::abs(r.voltage[static_cast<std::size_t>(bus(part))]);
-    }
-    double ikKa(PartId part) const { return r.faultAtNode(net->nodeOf(part, 0))->ikKa; }
-    double minKa(PartId part) const { return *r.minFaultAtNode(net->nodeOf(part, 0)); }
-};
+// The solve bus of a part's first terminal, and its fault currents.
+int busOf(const Studied& s, PartId part) {
+    return s.r.busOf(s.net->nodeOf(part, 0));
+}
+double minKa(const Studied& s, PartId part) {
+    return *s.r.minFaultAtNode(s.net->nodeOf(part, 0));
+}
 
 // 13.8 kV source of `mva` (X/R 15) → 1000 kVA, 5.75 %Z, X/R 6 transformer → 480 V bus (id 3).
 Drawing tappedLineup(double tapPct, double priV = 13800, double mva = 1e5) {
@@ -63,13 +53,6 @@ std::complex<double> secondaryOhms(double noLoadV, double mva) {
     return polar(noLoadV * noLoadV / (mva * 1e6), 15) + polar(0.0575 * 480 * 480 / 1e6, 6);
 }
 
-const Finding* findRule(const CheckReport& r, std::string_view rule) {
-    for (const auto& f : r.findings)
-        if (f.ruleId == rule)
-            return &f;
-    return nullptr;
-}
-
 } // namespace
 
 TEST(TransformerTap, MinusFivePercentRaisesTheSecondaryAndItsFaultCurrent) {
@@ -78,16 +61,16 @@ TEST(TransformerTap, MinusFivePercentRaisesTheSecondaryAndItsFaultCurrent) {
     const double mva = 500;
     Studied s(tappedLineup(-5.0, 13800, mva));
     ASSERT_TRUE(s.r.loadFlowConverged);
-    EXPECT_NEAR(s.vPu(PartId(3)), 1.0 / 0.95, 1e-9);
+    EXPECT_NEAR(s.vAt(PartId(3)), 1.0 / 0.95, 1e-9);
     const double v = 480 / 0.95;
     const double expected = v / std::sqrt(3.0) / std::abs(secondaryOhms(v, mva)) / 1000;
-    EXPECT_NEAR(s.ikKa(PartId(3)), expected, expected * 1e-9);
+    EXPECT_NEAR(s.faultAt(PartId(3)).ikKa, expected, expected * 1e-9);
     // Against the untapped transformer: the voltage rises by 1/0.95, and the source's share of
     // the impedance, referred through the new ratio, rises with its square.
     Studied plain(tappedLineup(0.0, 13800, mva));
     const double ratio =
         (v / std::abs(secondaryOhms(v, mva))) / (480 / std::abs(secondaryOhms(480, mva)));
-    EXPECT_NEAR(s.ikKa(PartId(3)) / plain.ikKa(PartId(3)), ratio, 1e-9);
+    EXPECT_NEAR(s.faultAt(PartId(3)).ikKa / plain.faultAt(PartId(3)).ikKa, ratio, 1e-9);
     EXPECT_GT(ratio, 1.04);
 }
 
@@ -96,23 +79,23 @@ TEST(TransformerTap, PlusTapLowersTheVoltageButNeverTheMaximumFault) {
     // voltage of the nominal 480 V (the higher of the two); the minimum fault takes the lower.
     const double mva = 500;
     Studied s(tappedLineup(2.5, 13800, mva));
-    EXPECT_NEAR(s.vPu(PartId(3)), 1.0 / 1.025, 1e-9);
+    EXPECT_NEAR(s.vAt(PartId(3)), 1.0 / 1.025, 1e-9);
     const double v = 480 / 1.025;
     const double z = std::abs(secondaryOhms(v, mva));
-    EXPECT_NEAR(s.ikKa(PartId(3)), 480 / std::sqrt(3.0) / z / 1000, 1e-9);
+    EXPECT_NEAR(s.faultAt(PartId(3)).ikKa, 480 / std::sqrt(3.0) / z / 1000, 1e-9);
     // c_min 0.95 on the EMF and on the source's impedance (its stated level at its terminals).
     const std::complex<double> zMin =
         0.95 * polar(v * v / (mva * 1e6), 15) + polar(0.0575 * 480 * 480 / 1e6, 6);
-    EXPECT_NEAR(s.minKa(PartId(3)), 0.95 * v / std::sqrt(3.0) / std::abs(zMin) / 1000, 1e-9);
+    EXPECT_NEAR(minKa(s, PartId(3)), 0.95 * v / std::sqrt(3.0) / std::abs(zMin) / 1000, 1e-9);
 }
 
 TEST(TransformerTap, AWindingRatedBelowTheSystemVoltageRaisesTheSecondary) {
     // A 13.2 kV primary winding on a 13.8 kV system: 480 × 13.8 / 13.2 = 501.8 V at no load.
     Studied s(tappedLineup(0.0, 13200));
-    EXPECT_NEAR(s.vPu(PartId(3)), 13.8 / 13.2, 1e-9);
+    EXPECT_NEAR(s.vAt(PartId(3)), 13.8 / 13.2, 1e-9);
     // The nominal voltage stays the drawing's; only the base moved.
-    EXPECT_DOUBLE_EQ(s.r.model.nominalV[static_cast<std::size_t>(s.bus(PartId(3)))], 480.0);
-    EXPECT_NEAR(s.r.model.baseV[static_cast<std::size_t>(s.bus(PartId(3)))], 480 * 13.8 / 13.2,
+    EXPECT_DOUBLE_EQ(s.r.model.nominalV[static_cast<std::size_t>(busOf(s, PartId(3)))], 480.0);
+    EXPECT_NEAR(s.r.model.baseV[static_cast<std::size_t>(busOf(s, PartId(3)))], 480 * 13.8 / 13.2,
                 1e-9);
 }
 
@@ -176,7 +159,7 @@ TEST(MotorContribution, Iec60909MotorImpedanceFromLockedRotorCurrent) {
     Drawing multiple = d;
     multiple.settings.motorContribution = MotorContribution::Multiple;
     Studied a(d), b(multiple);
-    EXPECT_GT(a.ikKa(PartId(4)), b.ikKa(PartId(4)));
+    EXPECT_GT(a.faultAt(PartId(4)).ikKa, b.faultAt(PartId(4)).ikKa);
     // The setting survives the file, and a bad value is refused with where and why.
     d.settings.curveBands = CurveBands::ListingLimits;
     const auto back = io::parseDrawing(io::serializeDrawing(d));

@@ -1,11 +1,33 @@
 // Test helpers: drawings assembled in code so each test states its own network.
 #include "test_support.h"
 
+#include <cmath>
 #include <fstream>
 #include <sstream>
 #include <stdexcept>
 
 namespace lineward::test {
+
+Studied::Studied(Drawing dr) : d(std::move(dr)) {
+    net = std::make_unique<Network>(d);
+    flow = std::make_unique<Flow>(*net);
+    r = runStudies(*net, *flow, testTables(), d.settings);
+}
+
+const FaultAtBus& Studied::faultAt(PartId part, int terminal) const {
+    return *r.faultAtNode(net->nodeOf(part, terminal));
+}
+
+double Studied::vAt(PartId part, int terminal) const {
+    return std::abs(r.voltage[static_cast<std::size_t>(r.busOf(net->nodeOf(part, terminal)))]);
+}
+
+const Finding* findRule(const CheckReport& r, std::string_view rule) {
+    for (const auto& f : r.findings)
+        if (f.ruleId == rule)
+            return &f;
+    return nullptr;
+}
 
 PartId DrawingBuilder::add(PartKind kind, const std::string& tag,
                            std::initializer_list<std::pair<const char*, FieldValue>> values) {
