@@ -8,6 +8,7 @@
 #include <QApplication>
 #include <QCoreApplication>
 #include <QDir>
+#include <QSettings>
 #include <QStandardPaths>
 #include <fstream>
 #include <gtest/gtest.h>
@@ -60,14 +61,19 @@ int main(int argc, char** argv) {
     // same tests in a real X window).
     if (qEnvironmentVariableIsEmpty("QT_QPA_PLATFORM"))
         qputenv("QT_QPA_PLATFORM", "offscreen");
-    // Recovery slots and settings live under XDG_DATA_HOME: one folder per process, so that
-    // tests running at the same time never share a recovery slot.
+    // Recovery slots live under XDG_DATA_HOME: one folder per process, so that tests running at
+    // the same time never share a recovery slot.
     const QString data = QDir::tempPath() + "/lineward-ui-data-" + QString::number(::getpid());
     qputenv("XDG_DATA_HOME", data.toUtf8());
     lineward::ui::Application app(argc, argv); // the program's own exception boundary
     QApplication::setOrganizationName("LinewardTests");
     QApplication::setApplicationName("LinewardTests");
     QStandardPaths::setTestModeEnabled(true);
+    // Settings too (window geometry and dock state, recent files, reviewer name): a test starts
+    // from none, whatever tests ran before it, so dock widths and the fitted zoom do not depend
+    // on the order the tests happen to run in.
+    for (const auto format : {QSettings::NativeFormat, QSettings::IniFormat})
+        QSettings::setPath(format, QSettings::UserScope, data + "/config");
     ::testing::InitGoogleTest(&argc, argv);
     const int failed = RUN_ALL_TESTS();
     QDir(data).removeRecursively();
