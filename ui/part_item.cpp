@@ -283,6 +283,15 @@ QString PartItem::ratingTextOf(const Part& p) {
         const auto r = OverloadRatings::of(p);
         return num(r.settingA, " A") + "  cl " + text(r.tripClass);
     }
+    case PartKind::Vfd: {
+        const auto r = VfdRatings::of(p);
+        return num(r.hp, " hp") + "  " + num(r.outputA, " A out");
+    }
+    case PartKind::SoftStarter: {
+        const auto r = SoftStarterRatings::of(p);
+        return num(r.amps, " A") + "  " + num(r.startLimitX, "× start") +
+               (r.bypass ? "  bypass" : "");
+    }
     case PartKind::Cable: {
         const auto r = CableRatings::of(p);
         return text(r.size) + "  " + num(r.lengthFt, " ft");
