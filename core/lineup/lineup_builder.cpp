@@ -161,19 +161,27 @@ std::vector<Part> starterParts(const LoadRow& row, const BucketProposal& p, IdSo
     return {std::move(k), std::move(ol), std::move(c), std::move(m)};
 }
 
+// The soft starter's current limit where none is entered: its field's default.
+double defaultStartLimitX() {
+    return SoftStarterRatings::of(Part::make(PartKind::SoftStarter, PartId(1), "SS")).startLimitX;
+}
+
 std::vector<std::string> rowNotes(const LoadRow& row) {
     const std::string tag = row.motor.tag;
     switch (row.starter) {
     case LoadStarter::Soft:
         return {tag + ": soft starter SS-" + tag +
-                " rated at the motor current with an integral bypass and a 3.5 × FLC start "
-                "limit (common practice); enter its nameplate, bypass rating and current limit"};
+                " rated at the motor current with an integral bypass and a " +
+                fmt(defaultStartLimitX(), 1) +
+                " × FLC start limit (common practice); enter its nameplate, bypass rating and "
+                "current limit"};
     case LoadStarter::Vfd: {
         std::vector<std::string> notes{
-            tag + ": drive VFD-" + tag +
-            " sized from the motor: input current 1.1 × output assumed, short-circuit device "
-            "within 1.75 × input assumed as its listing's maximum (common practice); enter "
-            "the drive's nameplate input current and its listed maximum (max_scpd_a)"};
+            tag + ": drive VFD-" + tag + " sized from the motor: input current " +
+            fmt(kAssumedDriveInputX, 2) + " × output assumed, short-circuit device within " +
+            fmt(kAssumedDriveScpdX, 2) +
+            " × input assumed as its listing's maximum (common practice); enter the drive's "
+            "nameplate input current and its listed maximum (max_scpd_a)"};
         if (row.protection == LoadProtection::InstBreaker)
             notes.push_back(tag + ": an inverse-time breaker instead of the instantaneous-only "
                                   "breaker asked for: the drive's bucket has no overload relay, "
@@ -326,10 +334,12 @@ ProposalLine deviceLine(const Part& p, const BucketProposal& b) {
                       "of 240.6(A) (430.52(C)(1) Exception No. 1)"};
     case PartKind::InstBreaker:
         return {p.tag, "instantaneous setting " + fmt(b.deviceRatingA, 0) + " A",
-                b.softStarterA ? "lowest setting above the soft starter's 3.5 × FLC start limit "
-                                 "(common practice), within the 430.52(C)(3) limit"
-                               : "lowest setting above the asymmetrical inrush (common practice), "
-                                 "within the 430.52(C)(3) limit"};
+                b.softStarterA
+                    ? "lowest setting above the soft starter's " + fmt(defaultStartLimitX(), 1) +
+                          " × FLC start limit (common practice), within the "
+                          "430.52(C)(3) limit"
+                    : "lowest setting above the asymmetrical inrush (common practice), "
+                      "within the 430.52(C)(3) limit"};
     case PartKind::Disconnect:
         return {p.tag, "fused switch " + fmt(DisconnectRatings::of(p).amps, 0) + " A",
                 "at least 115 % of the FLC (" + fmt(b.disconnectMinA) +
@@ -382,7 +392,8 @@ std::vector<ProposalLine> describeBucket(const PlannedBucket& b) {
         case PartKind::SoftStarter:
             out.push_back({part.tag, "soft starter " + fmt(p.softStarterA.value_or(0), 0) + " A",
                            "at least the motor current (the larger of FLC and nameplate FLA); "
-                           "integral bypass; start limit 3.5 × FLC (common practice)"});
+                           "integral bypass; start limit " +
+                               fmt(defaultStartLimitX(), 1) + " × FLC (common practice)"});
             break;
         case PartKind::Cable:
             out.push_back(
