@@ -289,8 +289,7 @@ QString PartItem::ratingTextOf(const Part& p) {
     }
     case PartKind::SoftStarter: {
         const auto r = SoftStarterRatings::of(p);
-        return num(r.amps, " A") + "  " + num(r.startLimitX, "× start") +
-               (r.bypass ? "  bypass" : "");
+        return num(r.amps, " A") + (r.bypass ? "  bypass" : ""); // short: a bucket is narrow
     }
     case PartKind::Cable: {
         const auto r = CableRatings::of(p);

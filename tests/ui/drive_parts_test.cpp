@@ -40,7 +40,7 @@ TEST(DriveParts, PlacedFromThePaletteShowsItsRatingsInTheInspector) {
         labels << l->text();
     EXPECT_TRUE(labels.join('\n').contains("Rated input current"))
         << labels.join('|').toStdString();
-    EXPECT_TRUE(labels.join('\n').contains("Largest short-circuit device of its listing"));
+    EXPECT_TRUE(labels.join('\n').contains("Largest listed SCPD"));
     user.type("max_scpd_a", "30", Commit::Enter);
     EXPECT_TRUE(user.inspectorMessage().isEmpty()) << user.inspectorMessage().toStdString();
     EXPECT_EQ(*w.document().drawing().part(id)->number("max_scpd_a"), 30);
