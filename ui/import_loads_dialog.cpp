@@ -45,6 +45,14 @@ QString bucketText(const PlannedBucket& b) {
         case PartKind::Contactor:
             parts << q(p.tag + " NEMA " + b.proposal.nemaSize);
             break;
+        case PartKind::Vfd: {
+            const auto v = VfdRatings::of(p);
+            parts << q(p.tag + " drive " + fmt(v.outputA) + " A out, " + fmt(v.inputA) + " A in");
+            break;
+        }
+        case PartKind::SoftStarter:
+            parts << q(p.tag + " soft starter " + fmt(SoftStarterRatings::of(p).amps, 0) + " A");
+            break;
         case PartKind::Overload:
             parts << q(p.tag + " " + fmt(b.proposal.overloadSettingA) + " A class " +
                        b.proposal.tripClass);

@@ -283,6 +283,14 @@ QString PartItem::ratingTextOf(const Part& p) {
         const auto r = OverloadRatings::of(p);
         return num(r.settingA, " A") + "  cl " + text(r.tripClass);
     }
+    case PartKind::Vfd: {
+        const auto r = VfdRatings::of(p);
+        return num(r.hp, " hp") + "  " + num(r.outputA, " A out");
+    }
+    case PartKind::SoftStarter: {
+        const auto r = SoftStarterRatings::of(p);
+        return num(r.amps, " A") + (r.bypass ? "  bypass" : ""); // short: a bucket is narrow
+    }
     case PartKind::Cable: {
         const auto r = CableRatings::of(p);
         return text(r.size) + "  " + num(r.lengthFt, " ft");

@@ -3,6 +3,7 @@
 
 #include "model/ratings.h"
 #include "sizing/motor_sizing.h"
+#include "topology/network.h"
 
 #include <cmath>
 
@@ -118,12 +119,16 @@ std::optional<StartProfile> startProfile(const StudyView& ctx, const Part& m) {
         return std::nullopt;
     StartProfile s;
     s.runningA = running;
-    const auto lr = lockedRotor(m, ctx.tables, nullptr);
+    const auto lr =
+        startingCurrent(m, startingDevice(ctx.drawing, ctx.net.branchChain(m.id)), ctx.tables);
     if (!lr)
         return std::nullopt;
     s.lraAssumed = lr->assumed;
     s.lockedRotorA = lr->amps;
-    s.asymA = lr->amps * ctx.settings().asymmetryFactor;
+    // A drive or soft starter ramps the current up: no asymmetrical offset (common practice).
+    s.asymA = lr->limited ? lr->amps : lr->amps * ctx.settings().asymmetryFactor;
+    if (lr->limited)
+        s.limitBasis = lr->basis;
     s.accelS = motor.accelS;
     return s;
 }

@@ -31,6 +31,9 @@ struct StartProfile {
     static constexpr double kAsymS =
         0.1; ///< asymmetrical inrush lasts a few cycles (common practice)
     bool lraAssumed = false;
+    /// Set where a drive or soft starter limits the start (asymA and lockedRotorA then hold
+    /// the limited current): how it was found, for traces.
+    std::string limitBasis;
 };
 
 /// What the check computed for one motor, once: its branch, full-load current (NEC Table

@@ -75,6 +75,24 @@ std::vector<Stroke> strokesOf(PartKind kind) {
         return {line(0, -20, 0, -8),
                 curve({0, -8}, {{{{8, -8}, {8, 0}, {0, 0}}}, {{{-8, 0}, {-8, 8}, {0, 8}}}}),
                 line(0, 8, 0, 20)};
+    case PartKind::Vfd:
+        return {
+            line(0, -20, 0, -10),
+            rect(-11, -10, 22, 20),
+            line(-11, 10, 11, -10),
+            curve({-8, -5}, {{{{-7, -9}, {-5, -9}, {-4, -5}}}, {{{-3, -1}, {-1, -1}, {0, -5}}}}),
+            line(2, 4, 8, 4),
+            line(2, 7, 8, 7),
+            line(0, 10, 0, 20)};
+    case PartKind::SoftStarter:
+        return {line(0, -20, 0, -10),
+                rect(-11, -10, 22, 20),
+                path({{-8, 6}, {-3, 6}, {4, -5}, {8, -5}}),
+                path({{0, -14}, {15, -14}, {15, -4}}),
+                line(12, -4, 18, -4),
+                line(15, 5, 13, -2),
+                path({{15, 5}, {15, 14}, {0, 14}}),
+                line(0, 10, 0, 20)};
     case PartKind::Cable:
         return {line(0, -20, 0, 20), line(-6, -4, 6, 2), line(-6, 1, 6, 7)};
     case PartKind::Motor: {

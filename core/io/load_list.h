@@ -13,8 +13,8 @@ namespace lineward {
 
 /// The bucket's short-circuit device a row asks for.
 enum class LoadProtection { Breaker, InstBreaker, Fuse };
-/// The starter a row asks for. Soft starters and drives have no part kind yet; the lineup
-/// builder draws them as a full-voltage starter and says so (docs/load-list.md).
+/// The starter a row asks for: full voltage (non-reversing, reversing), soft starter or
+/// variable-frequency drive (their buckets: docs/load-list.md).
 enum class LoadStarter { Fvnr, Fvr, Soft, Vfd };
 
 std::string_view loadProtectionKey(LoadProtection p);

@@ -46,6 +46,15 @@ std::string builderBasis(PartKind k, std::string_view key) {
         if (key == "fused")
             return "the row's short-circuit device: fused switch";
         break;
+    case PartKind::Vfd:
+    case PartKind::SoftStarter:
+        if (key == "hp")
+            return "the motor's hp";
+        if (key == "volts")
+            return "the bus's system voltage";
+        if (key == "bypass")
+            return "a bypass contactor, integral (common practice)";
+        break;
     case PartKind::Overload:
         if (key == "range_min_a" || key == "range_max_a")
             return "adjustment range 0.75–1.3 × the setting (common practice)";
@@ -86,6 +95,10 @@ bool isSizedKey(PartKind k, std::string_view key) {
         return key == "nema_size";
     case PartKind::Overload:
         return key == "setting_a" || key == "trip_class";
+    case PartKind::Vfd:
+        return key == "input_a" || key == "output_a";
+    case PartKind::SoftStarter:
+        return key == "amps";
     case PartKind::Cable:
         return key == "size" || key == "egc_size";
     default:

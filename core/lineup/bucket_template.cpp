@@ -72,8 +72,15 @@ std::optional<LoadRow> templateRow(const Drawing& fragment, std::string& why) {
     LoadRow row;
     int motors = 0;
     bool device = false;
+    row.starter = LoadStarter::Fvnr; // a drive or soft starter in the fragment says otherwise
     for (const auto& p : fragment.parts()) {
         switch (p.kind) {
+        case PartKind::Vfd:
+            row.starter = LoadStarter::Vfd;
+            break;
+        case PartKind::SoftStarter:
+            row.starter = LoadStarter::Soft;
+            break;
         case PartKind::Motor:
             ++motors;
             row.motor = p;
@@ -108,7 +115,6 @@ std::optional<LoadRow> templateRow(const Drawing& fragment, std::string& why) {
     }
     if (row.lengthFt <= 0)
         row.lengthFt = kLoadListDefaultLengthFt;
-    row.starter = LoadStarter::Fvnr;
     return row;
 }
 

@@ -17,9 +17,9 @@ namespace lineward {
 std::optional<Drawing> bucketFragment(const Drawing& d, BucketId bucket, std::string& why);
 
 /// The row a template stands for: its motor (every rating kept), its short-circuit device
-/// (inverse-time breaker, instantaneous-only breaker or fused switch), full-voltage starter and
-/// its cable's length. Refused (reason in `why`) for a fragment without exactly one motor or
-/// without a short-circuit device.
+/// (inverse-time breaker, instantaneous-only breaker or fused switch), its starter (a drive or
+/// soft starter where the fragment holds one, else full voltage) and its cable's length. Refused
+/// (reason in `why`) for a fragment without exactly one motor or without a short-circuit device.
 std::optional<LoadRow> templateRow(const Drawing& fragment, std::string& why);
 
 } // namespace lineward

@@ -29,8 +29,13 @@ constexpr double kRelayLow = 0.75, kRelayHigh = 1.3;
 using lineup_detail::firstAtOrAbove;
 using lineup_detail::put;
 
-ScpdType deviceFor(LoadProtection p) {
-    switch (p) {
+ScpdType deviceFor(const LoadRow& row) {
+    // An instantaneous-only breaker is permitted only in a combination controller with its
+    // overload relay (430.52(C)(3)); a drive's bucket has no relay, so it takes an inverse-time
+    // breaker (rowNotes says so).
+    if (row.starter == LoadStarter::Vfd && row.protection == LoadProtection::InstBreaker)
+        return ScpdType::InverseTimeBreaker;
+    switch (row.protection) {
     case LoadProtection::InstBreaker:
         return ScpdType::InstantaneousBreaker;
     case LoadProtection::Fuse:
@@ -53,7 +58,7 @@ std::vector<Part> scpdParts(const LoadRow& row, const BucketProposal& p, double 
                             double x, double y) {
     const std::string& tag = row.motor.tag;
     std::vector<Part> out;
-    if (row.protection == LoadProtection::Breaker) {
+    if (p.device == ScpdType::InverseTimeBreaker) {
         Part b = Part::make(PartKind::Breaker, ids.nextPart(), "CB-" + tag);
         put(b, {{BreakerRatings::kTripType, std::string("thermal_magnetic")},
                 {BreakerRatings::kFrameA, firstAtOrAbove(kFrames, p.deviceRatingA).value_or(4000)},
@@ -61,7 +66,7 @@ std::vector<Part> scpdParts(const LoadRow& row, const BucketProposal& p, double 
                 {BreakerRatings::kInterruptingKa, kA},
                 {"inst_x", 10.0}});
         out.push_back(std::move(b));
-    } else if (row.protection == LoadProtection::InstBreaker) {
+    } else if (p.device == ScpdType::InstantaneousBreaker) {
         Part m = Part::make(PartKind::InstBreaker, ids.nextPart(), "MCP-" + tag);
         double amps = 1200;
         for (double a : kMcpAmps)
@@ -97,12 +102,39 @@ std::vector<Part> scpdParts(const LoadRow& row, const BucketProposal& p, double 
     return out;
 }
 
-std::vector<Part> starterParts(const LoadRow& row, const BucketProposal& p, IdSource& ids, double x,
-                               double y) {
+// The part that starts the motor: a contactor (full voltage), a soft starter (its bypass
+// contactor a field of it: integral, rated with the starter) or a drive.
+Part startingPart(const LoadRow& row, const BucketProposal& p, IdSource& ids, double volts) {
     const std::string& tag = row.motor.tag;
+    const double hp = std::ceil(std::max(p.flc.hpUsed, motorHp(row.motor)) * 10) / 10;
+    if (row.starter == LoadStarter::Vfd) {
+        Part v = Part::make(PartKind::Vfd, ids.nextPart(), "VFD-" + tag);
+        put(v, {{VfdRatings::kHp, hp},
+                {VfdRatings::kVolts, volts},
+                {VfdRatings::kInputA, p.driveInputA.value_or(0)},
+                {VfdRatings::kOutputA, p.driveOutputA.value_or(0)}});
+        return v;
+    }
+    if (row.starter == LoadStarter::Soft) {
+        Part ss = Part::make(PartKind::SoftStarter, ids.nextPart(), "SS-" + tag);
+        put(ss, {{SoftStarterRatings::kHp, hp},
+                 {SoftStarterRatings::kVolts, volts},
+                 {SoftStarterRatings::kAmps, p.softStarterA.value_or(0)},
+                 {SoftStarterRatings::kBypass, true}});
+        return ss;
+    }
     Part k = Part::make(PartKind::Contactor, ids.nextPart(), "K-" + tag);
     if (!p.nemaSize.empty())
         put(k, {{ContactorRatings::kNemaSize, p.nemaSize}});
+    return k;
+}
+
+// The starter, overload relay (none for a drive), cable and motor; `volts` is the bus's
+// system voltage, the rated voltage of a drive or soft starter.
+std::vector<Part> starterParts(const LoadRow& row, const BucketProposal& p, IdSource& ids, double x,
+                               double y, double volts) {
+    const std::string& tag = row.motor.tag;
+    Part k = startingPart(row, p, ids, volts);
     Part ol = Part::make(PartKind::Overload, ids.nextPart(), "OL-" + tag);
     put(ol, {{OverloadRatings::kSettingA, p.overloadSettingA},
              {OverloadRatings::kRangeMinA, std::round(kRelayLow * p.overloadSettingA * 10) / 10},
@@ -124,19 +156,38 @@ std::vector<Part> starterParts(const LoadRow& row, const BucketProposal& p, IdSo
     ol.y = y + kOverloadDy;
     c.y = y + kCableDy;
     m.y = y + kMotorDy;
+    if (row.starter == LoadStarter::Vfd) // the drive protects the motor against overload
+        return {std::move(k), std::move(c), std::move(m)};
     return {std::move(k), std::move(ol), std::move(c), std::move(m)};
+}
+
+// The soft starter's current limit where none is entered: its field's default.
+double defaultStartLimitX() {
+    return SoftStarterRatings::of(Part::make(PartKind::SoftStarter, PartId(1), "SS")).startLimitX;
 }
 
 std::vector<std::string> rowNotes(const LoadRow& row) {
     const std::string tag = row.motor.tag;
     switch (row.starter) {
     case LoadStarter::Soft:
-        return {tag + ": soft starter drawn as a full-voltage starter; Lineward has no "
-                      "soft-starter part yet (docs/load-list.md)"};
-    case LoadStarter::Vfd:
-        return {tag + ": drive drawn as a full-voltage starter; Lineward has no drive part yet, "
-                      "so 430.122 input conductors and 430.124 overload are not applied "
-                      "(docs/load-list.md)"};
+        return {tag + ": soft starter SS-" + tag +
+                " rated at the motor current with an integral bypass and a " +
+                fmt(defaultStartLimitX(), 1) +
+                " × FLC start limit (common practice); enter its nameplate, bypass rating and "
+                "current limit"};
+    case LoadStarter::Vfd: {
+        std::vector<std::string> notes{
+            tag + ": drive VFD-" + tag + " sized from the motor: input current " +
+            fmt(kAssumedDriveInputX, 2) + " × output assumed, short-circuit device within " +
+            fmt(kAssumedDriveScpdX, 2) +
+            " × input assumed as its listing's maximum (common practice); enter the drive's "
+            "nameplate input current and its listed maximum (max_scpd_a)"};
+        if (row.protection == LoadProtection::InstBreaker)
+            notes.push_back(tag + ": an inverse-time breaker instead of the instantaneous-only "
+                                  "breaker asked for: the drive's bucket has no overload relay, "
+                                  "which 430.52(C)(3) requires beside one");
+        return notes;
+    }
     case LoadStarter::Fvr:
         return {tag + ": reversing starter drawn with one contactor, as a one-line shows it"};
     case LoadStarter::Fvnr:
@@ -218,11 +269,18 @@ BucketPlan planBuckets(const Drawing& d, PartId busId, const std::vector<LoadRow
     std::set<std::string> planned; // tags of the buckets planned so far
     for (const auto& row : rows) {
         SizeOptions o;
-        o.device = deviceFor(row.protection);
+        o.device = deviceFor(row);
         o.ambientC = d.settings.ambientC;
         o.asymmetryFactor = d.settings.asymmetryFactor;
         std::string why;
         auto p = proposeBucket(row.motor, o, t, why);
+        if (p && row.starter == LoadStarter::Vfd)
+            if (auto fail = sizeForDrive(*p, row.motor, o, t)) {
+                why = *fail;
+                p.reset();
+            }
+        if (p && row.starter == LoadStarter::Soft)
+            sizeForSoftStarter(*p, row.motor, t);
         if (!p) {
             plan.refused.push_back({row.line, 1, "cannot size " + row.motor.tag + ": " + why});
             continue;
@@ -231,7 +289,7 @@ BucketPlan planBuckets(const Drawing& d, PartId busId, const std::vector<LoadRow
         b.line = row.line;
         IdSource trial = ids; // ids are taken only when the row is kept
         b.parts = scpdParts(row, *p, interruptingKa, trial, x, bus->y);
-        auto rest = starterParts(row, *p, trial, x, bus->y);
+        auto rest = starterParts(row, *p, trial, x, bus->y, BusRatings::of(*bus).volts);
         b.parts.insert(b.parts.end(), rest.begin(), rest.end());
         if (auto why = tagClash(d, planned, b.parts)) {
             plan.refused.push_back({row.line, row.tagColumn, *why});
@@ -267,19 +325,34 @@ ProposalLine deviceLine(const Part& p, const BucketProposal& b) {
     switch (p.kind) {
     case PartKind::Breaker:
         return {p.tag, "inverse-time breaker " + fmt(b.deviceRatingA, 0) + " A",
-                "largest rating NEC 2023 Table 430.52(C)(1) permits, next standard rating of "
-                "240.6(A) (430.52(C)(1) Exception No. 1)"};
+                b.driveMaxScpdA
+                    ? "largest standard rating within Table 430.52(C)(1) and the drive's listing "
+                      "maximum, assumed " +
+                          fmt(kAssumedDriveScpdX, 2) + " × input = " + fmt(*b.driveMaxScpdA, 1) +
+                          " A (common practice)"
+                    : "largest rating NEC 2023 Table 430.52(C)(1) permits, next standard rating "
+                      "of 240.6(A) (430.52(C)(1) Exception No. 1)"};
     case PartKind::InstBreaker:
         return {p.tag, "instantaneous setting " + fmt(b.deviceRatingA, 0) + " A",
-                "lowest setting above the asymmetrical inrush (common practice), within the "
-                "430.52(C)(3) limit"};
+                b.softStarterA
+                    ? "lowest setting above the soft starter's " + fmt(defaultStartLimitX(), 1) +
+                          " × FLC start limit (common practice), within the "
+                          "430.52(C)(3) limit"
+                    : "lowest setting above the asymmetrical inrush (common practice), "
+                      "within the 430.52(C)(3) limit"};
     case PartKind::Disconnect:
         return {p.tag, "fused switch " + fmt(DisconnectRatings::of(p).amps, 0) + " A",
                 "at least 115 % of the FLC (" + fmt(b.disconnectMinA) +
                     " A, 430.110(A)) and the fuses; hp rating at least the motor's (430.109)"};
     case PartKind::Fuse:
         return {p.tag, "time-delay fuses " + fmt(b.deviceRatingA, 0) + " A",
-                "largest rating NEC 2023 Table 430.52(C)(1) permits, next standard fuse rating"};
+                b.driveMaxScpdA
+                    ? "largest standard fuse rating within Table 430.52(C)(1) and the drive's "
+                      "listing maximum, assumed " +
+                          fmt(kAssumedDriveScpdX, 2) + " × input = " + fmt(*b.driveMaxScpdA, 1) +
+                          " A (common practice)"
+                    : "largest rating NEC 2023 Table 430.52(C)(1) permits, next standard fuse "
+                      "rating"};
     default:
         return {p.tag, "", ""};
     }
@@ -306,12 +379,30 @@ std::vector<ProposalLine> describeBucket(const PlannedBucket& b) {
                                     "enter the FLA (430.6(A)(2)); ")) +
                      "class that outlasts the acceleration time (IEC 60947-4-1 Table 3)"});
             break;
+        case PartKind::Vfd:
+            out.push_back(
+                {part.tag,
+                 "drive " + fmt(p.driveOutputA.value_or(0)) + " A out, " +
+                     fmt(p.driveInputA.value_or(0)) + " A in",
+                 "output at the motor current (the larger of FLC and nameplate FLA); input " +
+                     fmt(kAssumedDriveInputX, 2) +
+                     " × output assumed (common practice, from memory); the drive provides the "
+                     "overload protection (430.124(A))"});
+            break;
+        case PartKind::SoftStarter:
+            out.push_back({part.tag, "soft starter " + fmt(p.softStarterA.value_or(0), 0) + " A",
+                           "at least the motor current (the larger of FLC and nameplate FLA); "
+                           "integral bypass; start limit " +
+                               fmt(defaultStartLimitX(), 1) + " × FLC (common practice)"});
+            break;
         case PartKind::Cable:
             out.push_back(
                 {part.tag,
                  p.conductorSize + " Cu" + (p.egcSize.empty() ? "" : ", EGC " + p.egcSize),
-                 "125 % of FLC = " + fmt(p.conductorMinA) + " A (430.22), Table 310.16 at " +
-                     std::to_string(p.terminationC) +
+                 (p.driveInputA ? "125 % of the drive's input current = " + fmt(p.conductorMinA) +
+                                      " A (430.122(A); covers 125 % FLC on the output side)"
+                                : "125 % of FLC = " + fmt(p.conductorMinA) + " A (430.22)") +
+                     ", Table 310.16 at " + std::to_string(p.terminationC) +
                      " °C terminations (110.14(C)); EGC Table 250.122"});
             break;
         case PartKind::Motor:

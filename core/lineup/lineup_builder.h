@@ -22,10 +22,11 @@ struct CheckResult;
 struct PlannedBucket {
     int line = 0; ///< the load list's line
     BucketProposal proposal;
-    std::vector<Part> parts; ///< device(s), contactor, overload relay, cable, motor
+    std::vector<Part>
+        parts; ///< device(s), contactor/drive/soft starter, overload relay, cable, motor
     std::vector<Wire> wires; ///< bus → device → ... → motor
     Bucket bucket;
-    std::vector<std::string> notes; ///< what the bucket lacks (soft starter and drive rows)
+    std::vector<std::string> notes; ///< values assumed for a drive or soft starter, to enter
     /// Values the designer changed after sizing (part index, field key): changeBucketValue.
     std::vector<std::pair<std::size_t, std::string>> changed;
 };

@@ -60,6 +60,17 @@ Part makeStarterPart(PartKind kind, PartId id, std::string tag) {
     case PartKind::Overload:
         set("setting_a", 14.0);
         break;
+    case PartKind::Vfd: // sized for the default 10 hp, 460 V motor (14 A, NEC Table 430.250)
+        set("hp", 10.0);
+        set("volts", 480.0);
+        set("input_a", 15.4);
+        set("output_a", 14.0);
+        break;
+    case PartKind::SoftStarter:
+        set("hp", 10.0);
+        set("volts", 480.0);
+        set("amps", 17.0);
+        break;
     case PartKind::Cable:
         set("size", std::string("12 AWG"));
         set("length_ft", 50.0);

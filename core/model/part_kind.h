@@ -21,12 +21,14 @@ enum class PartKind {
     Disconnect,  ///< disconnect switch
     Contactor,   ///< motor contactor
     Overload,    ///< overload relay
+    Vfd,         ///< variable-frequency drive (power conversion equipment, NEC 430 Part X)
+    SoftStarter, ///< reduced-voltage solid-state soft starter, with or without a bypass contactor
     Cable,       ///< cable run (one or more parallel sets)
     Motor,       ///< induction motor
     Load,        ///< static load
 };
 
-inline constexpr int kPartKindCount = 12;
+inline constexpr int kPartKindCount = 14;
 
 /// Two ratings of which a part gives exactly one (a source's kA or MVA; a motor's hp or kW).
 struct FieldAlternative {

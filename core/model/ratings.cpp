@@ -262,6 +262,29 @@ OverloadRatings OverloadRatings::of(const Part& p) {
     return r;
 }
 
+VfdRatings VfdRatings::of(const Part& p) {
+    expectKind(p, PartKind::Vfd);
+    VfdRatings r;
+    r.hp = num(p, SLOT(kHp));
+    r.volts = num(p, SLOT(kVolts));
+    r.inputA = num(p, SLOT(kInputA));
+    r.outputA = num(p, SLOT(kOutputA));
+    r.maxScpdA = opt(p, SLOT(kMaxScpdA));
+    return r;
+}
+
+SoftStarterRatings SoftStarterRatings::of(const Part& p) {
+    expectKind(p, PartKind::SoftStarter);
+    SoftStarterRatings r;
+    r.hp = num(p, SLOT(kHp));
+    r.volts = num(p, SLOT(kVolts));
+    r.amps = num(p, SLOT(kAmps));
+    r.startLimitX = num(p, SLOT(kStartLimitX));
+    r.bypass = flag(p, SLOT(kBypass));
+    r.bypassA = opt(p, SLOT(kBypassA));
+    return r;
+}
+
 CableRatings CableRatings::of(const Part& p) {
     expectKind(p, PartKind::Cable);
     static constexpr std::pair<std::string_view, Material> kMaterials[] = {{"cu", Material::Cu},

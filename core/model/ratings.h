@@ -144,6 +144,32 @@ struct OverloadRatings {
     static OverloadRatings of(const Part& p);
 };
 
+/// A variable-frequency drive (NEC 2023 Article 430 Part X, power conversion equipment).
+struct VfdRatings {
+    static constexpr std::string_view kHp = "hp", kVolts = "volts", kInputA = "input_a",
+                                      kOutputA = "output_a", kMaxScpdA = "max_scpd_a";
+    double hp = 0, volts = 0;
+    double inputA = 0;  ///< rated input (line-side) current
+    double outputA = 0; ///< rated continuous output current
+    /// Largest short-circuit device the drive's listing names; nothing: not given (the rule
+    /// then assumes kAssumedDriveScpdX × the input current).
+    std::optional<double> maxScpdA;
+    static VfdRatings of(const Part& p);
+};
+
+/// A soft starter with its bypass contactor (a field of its own: the bypass is part of the
+/// starter's assembly and carries the motor once it is up to speed).
+struct SoftStarterRatings {
+    static constexpr std::string_view kHp = "hp", kVolts = "volts", kAmps = "amps",
+                                      kStartLimitX = "start_limit_x", kBypass = "bypass",
+                                      kBypassA = "bypass_a";
+    double hp = 0, volts = 0, amps = 0;
+    double startLimitX = 0; ///< starting current limit, multiple of the motor's FLC
+    bool bypass = true;
+    std::optional<double> bypassA; ///< nothing: integral bypass rated with the starter
+    static SoftStarterRatings of(const Part& p);
+};
+
 struct CableRatings {
     static constexpr std::string_view kMaterial = "material", kSize = "size", kSets = "sets",
                                       kLengthFt = "length_ft", kInsulationC = "insulation_c",

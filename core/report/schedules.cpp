@@ -34,6 +34,16 @@ std::string deviceText(const Part* d) {
         return std::string(fuse.type == FuseType::Fast ? "fuse " : "TD fuse ") + fmt(fuse.amps, 0) +
                " A";
     }
+    case PartKind::Vfd: {
+        const auto v = VfdRatings::of(*d);
+        return "drive " + fmt(v.inputA, 1) + " A in, " + fmt(v.outputA, 1) + " A out";
+    }
+    case PartKind::SoftStarter: {
+        const auto ss = SoftStarterRatings::of(*d);
+        return "soft starter " + fmt(ss.amps, 0) + " A" +
+               (ss.bypass ? ss.bypassA ? ", bypass " + fmt(*ss.bypassA, 0) + " A" : ", bypass"
+                          : "");
+    }
     default:
         return "";
     }
@@ -178,7 +188,12 @@ std::vector<Schedule> buildSchedules(const CheckResult& result) {
         motors.rows.push_back(
             {m.tag, mr.hp ? fmt(*mr.hp, 2) + " hp" : num(mr.kw, 2) + " kW", fmt(mr.volts, 0),
              flc ? fmt(flc->amps) : "", num(mr.fla), deviceText(b.scpd),
-             kr ? (kr->nemaSize ? "NEMA " + *kr->nemaSize : num(kr->ac3A, 0) + " A AC-3") : "",
+             // The column names what starts the motor: a contactor, else a drive or soft
+             // starter.
+             kr        ? (kr->nemaSize ? "NEMA " + *kr->nemaSize : num(kr->ac3A, 0) + " A AC-3")
+             : b.drive ? deviceText(b.drive)
+             : b.softStarter ? deviceText(b.softStarter)
+                             : "",
              ol ? fmt(ol->settingA) : "", ol ? ol->tripClass : "",
              cr ? (cr->sets > 1 ? std::to_string(cr->sets) + " × " : "") + cr->size : "",
              cr ? fmt(cr->lengthFt, 0) : "", cr ? cr->egcSize : "",
@@ -199,7 +214,8 @@ std::vector<Schedule> buildSchedules(const CheckResult& result) {
                                    load == r.loadAmps.end() ? "" : fmt(load->second),
                                    std::isnan(drop) ? "" : fmt(drop, 2),
                                    faultAt(r, flow.lineNode(p.id)), findingsOf({&p})});
-        } else if (kindInfo(p.kind).protective) {
+        } else if (kindInfo(p.kind).protective || p.kind == PartKind::Vfd ||
+                   p.kind == PartKind::SoftStarter) {
             const auto* f = r.faultAtNode(flow.lineNode(p.id));
             const auto data = protectiveDataOf(p);
             const auto ic = data ? std::optional(data->interruptingKa) : std::nullopt;

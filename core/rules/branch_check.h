@@ -32,5 +32,7 @@ struct BranchCheck {
 
 /// Overload relay, contactor, disconnect and EGC checks (motor_branch_devices.cpp).
 void checkBranchDevices(BranchCheck& c);
+/// Drive and soft-starter checks (motor_branch_starters.cpp).
+void checkBranchStarters(BranchCheck& c);
 
 } // namespace lineward

@@ -81,6 +81,8 @@ void motorChecks(const RuleContext& ctx, const Part& m, std::vector<Finding>& ou
                                                 fmt(prof->lockedRotorA, 0) + " A for " +
                                                 fmt(prof->accelS, 1) + " s, then " +
                                                 fmt(prof->runningA, 1) + " A"}};
+            if (!prof->limitBasis.empty())
+                f.trace.push_back({"starting current", prof->limitBasis});
             f.fix =
                 Fix{"raise " + d.part->tag + "'s setting or rating within the code's limits", {}};
             out.push_back(std::move(f));

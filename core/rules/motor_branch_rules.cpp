@@ -2,6 +2,7 @@
 #include "model/ratings.h"
 #include "rules/branch_check.h"
 
+#include <algorithm>
 #include <cmath>
 
 namespace lineward {
@@ -11,6 +12,10 @@ namespace {
 void conductor(BranchCheck& c) {
     const double need = 1.25 * c.flc.amps;
     for (const Part* cable : c.b.cables) {
+        // A drive's input conductors are sized from its input current (branch.drive.*).
+        if (std::find(c.b.driveInputCables.begin(), c.b.driveInputCables.end(), cable) !=
+            c.b.driveInputCables.end())
+            continue;
         const std::string size = CableRatings::of(*cable).size;
         const auto cond = conditionsOf(*cable, c.ctx.settings());
         auto amp = cableAmpacity(size, cond, c.ctx.tables, false);
@@ -97,7 +102,15 @@ void instantaneous(BranchCheck& c, const Part& d, const ScpdLimit& lim) {
     const double setting = mcp.pickupA;
     std::vector<TraceStep> inrushTrace;
     auto lra = lockedRotorA(*c.b.motor, c.ctx.tables, &inrushTrace);
-    const double asym = c.ctx.settings().asymmetryFactor;
+    double asym = c.ctx.settings().asymmetryFactor;
+    // A drive or soft starter limits the start: its starting current, with no asymmetrical
+    // offset, stands for the inrush (the check's starting profile).
+    if (const MotorFacts* facts = c.ctx.facts(c.b.motor->id);
+        facts && facts->start && !facts->start->limitBasis.empty()) {
+        lra = facts->start->lockedRotorA;
+        asym = 1.0;
+        inrushTrace = {{"starting current", facts->start->limitBasis}};
+    }
     const double needSetting = lra ? *lra * asym / (1.0 - kInstantaneousTolerance) : 0;
     // 430.52(C)(3): above the table value only where the table setting cannot carry the start;
     // the inrush calculation shows whether it can.
@@ -195,6 +208,7 @@ void checkMotorBranches(const RuleContext& ctx, std::vector<Finding>& out) {
         conductor(c);
         scpd(c);
         checkBranchDevices(c);
+        checkBranchStarters(c);
     }
 }
 

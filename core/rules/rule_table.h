@@ -34,9 +34,10 @@ inline constexpr std::array kRules{
              Severity::Violation,
              "motor: |V_system − V_rated| ≤ 10 % of V_rated; bus, load, transformer winding: "
              "|V_system − V_rated| ≤ 5 % of V_rated"},
-    RuleInfo{"topology.motor.no_overload", "motor without overload protection", "NEC 2023 430.32",
-             Severity::Violation,
-             "an overload relay lies in the branch between the motor and its feeding bus"},
+    RuleInfo{"topology.motor.no_overload", "motor without overload protection",
+             "NEC 2023 430.32; 430.124(A)", Severity::Violation,
+             "an overload relay, or a drive that provides the overload protection (430.124(A)), "
+             "lies in the branch between the motor and its feeding bus"},
     RuleInfo{"topology.inst_breaker.no_overload",
              "instantaneous-only breaker without an overload relay in its bucket",
              "NEC 2023 430.52(C)(3)", Severity::Violation,
@@ -85,6 +86,23 @@ inline constexpr std::array kRules{
              Severity::Violation,
              "NEMA size hp at the motor voltage ≥ motor hp and continuous A ≥ "
              "motor current; or AC-3 A ≥ motor current"},
+    RuleInfo{"branch.drive.input_conductor", "drive input conductor too small",
+             "NEC 2023 430.122(A)", Severity::Violation,
+             "ampacity of each cable between the bus and the drive ≥ 1.25 × the drive's rated "
+             "input current"},
+    RuleInfo{"branch.drive.scpd", "short-circuit device above the drive's listing",
+             "NEC 2023 110.3(B); 430.130 (from memory)", Severity::Violation,
+             "branch short-circuit device rating ≤ the drive's listed maximum (max_scpd_a; "
+             "blank: 1.75 × rated input current, common practice)"},
+    RuleInfo{"branch.drive.output", "drive output current below the motor's",
+             "common practice (430.122, 430.124(A) context)", Severity::Violation,
+             "rated output current ≥ motor current (the larger of table FLC and nameplate FLA)"},
+    RuleInfo{"branch.soft_starter.rating", "soft starter rated below the motor",
+             "common practice; NEC 2023 110.3(B)", Severity::Violation,
+             "rated current ≥ motor current (the larger of table FLC and nameplate FLA)"},
+    RuleInfo{"branch.soft_starter.bypass", "bypass contactor too small",
+             "IEC 60947-4-1 AC-3; common practice", Severity::Violation,
+             "where a bypass rating is given: bypass AC-3 rated current ≥ motor current"},
     RuleInfo{"branch.disconnect.rating", "disconnect ampere rating too low", "NEC 2023 430.110(A)",
              Severity::Violation, "ampere rating ≥ 1.15 × FLC"},
     RuleInfo{"branch.disconnect.hp", "disconnect horsepower rating too low",

@@ -120,8 +120,11 @@ void motorOverload(const Network& net, std::vector<Finding>& out) {
         if (p.kind != PartKind::Motor || !net.partReachable(p.id))
             continue;
         auto chain = net.branchChain(p.id);
+        // A drive provides the motor's overload protection (NEC 2023 430.124(A)): its branch
+        // needs no separate relay. A soft starter does not; its branch still does.
         const bool has = std::any_of(chain.begin(), chain.end(), [&](PartId id) {
-            return d.part(id)->kind == PartKind::Overload;
+            const PartKind k = d.part(id)->kind;
+            return k == PartKind::Overload || k == PartKind::Vfd;
         });
         if (has)
             continue;

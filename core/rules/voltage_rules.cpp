@@ -114,10 +114,13 @@ void starting(const RuleContext& ctx, const Part& motor, const MotorStart& ms,
     if (ms.busDipPct <= s.startDipPct + 1e-9 && ms.terminalPctOfRated >= s.startTerminalPct - 1e-9)
         return;
     std::vector<TraceStep> trace{
-        {"locked-rotor current", fmt(ms.lockedRotorA, 0) + " A" +
-                                     (ms.lraAssumed ? " (" + fmt(kAssumedLockedRotorMultiple, 0) +
-                                                          " × table FLC assumed, common practice)"
-                                                    : std::string())},
+        ms.limitBasis.empty()
+            ? TraceStep{"locked-rotor current",
+                        fmt(ms.lockedRotorA, 0) + " A" +
+                            (ms.lraAssumed ? " (" + fmt(kAssumedLockedRotorMultiple, 0) +
+                                                 " × table FLC assumed, common practice)"
+                                           : std::string())}
+            : TraceStep{"starting current", ms.limitBasis},
         {"starting power factor", fmt(s.startPf, 2) + " (setting)"},
         {"method", "superposition on the load-flow state: the motor at locked-rotor impedance, "
                    "others running"}};

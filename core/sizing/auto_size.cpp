@@ -4,6 +4,7 @@
 
 #include "model/ratings.h"
 
+#include <algorithm>
 #include <cmath>
 
 namespace lineward {
@@ -84,6 +85,73 @@ std::optional<BucketProposal> proposeBucket(const Part& motor, const SizeOptions
     if (auto egc = egcSize(egcDevice, o.material, p.conductorSize, p.conductorSize, t))
         p.egcSize = egc->size;
     return p;
+}
+
+namespace {
+
+double motorCurrentA(const BucketProposal& p, const Part& motor) {
+    return std::max(p.flc.amps, MotorRatings::of(motor).fla.value_or(p.flc.amps));
+}
+
+} // namespace
+
+std::optional<std::string> sizeForDrive(BucketProposal& p, const Part& motor, const SizeOptions& o,
+                                        const Tables& t) {
+    // To 0.1 A up; the 1e-9 keeps a product such as 1.1 × 11 = 12.100000000000001 at 12.1.
+    const double out = std::ceil(motorCurrentA(p, motor) * 10.0 - 1e-9) / 10.0;
+    const double in = std::ceil(kAssumedDriveInputX * out * 10.0 - 1e-9) / 10.0;
+    p.driveOutputA = out;
+    p.driveInputA = in;
+    p.trace.push_back({"drive", "output " + fmt(out) + " A (motor current); input " +
+                                    fmt(kAssumedDriveInputX, 2) + " × " + fmt(out) + " = " +
+                                    fmt(in) + " A assumed (common practice, from memory)"});
+    p.conductorMinA = 1.25 * in;
+    CableConditions c{o.material, o.insulationC, 75, o.ambientC, o.conductors, 1};
+    c.terminationC = o.terminationC.value_or(p.conductorMinA <= 100 ? 60 : 75);
+    p.terminationC = c.terminationC;
+    auto cable = smallestCable(p.conductorMinA, c, t);
+    if (!cable)
+        return "no single conductor in Table 310.16 carries " + fmt(p.conductorMinA) + " A";
+    p.conductorSize = cable->first;
+    p.conductorAmpacityA = cable->second.amps;
+    p.trace.push_back({"conductor", "1.25 × drive input " + fmt(in) + " = " + fmt(p.conductorMinA) +
+                                        " A (430.122(A)) → " + cable->first + " (" +
+                                        fmt(p.conductorAmpacityA) + " A)"});
+    const bool fuse = p.device == ScpdType::TimeDelayFuse || p.device == ScpdType::NonTimeDelayFuse;
+    const double listed = kAssumedDriveScpdX * in;
+    p.driveMaxScpdA = listed;
+    if (auto rated = t.standardAtOrBelow(listed, fuse); rated && *rated < p.deviceRatingA) {
+        p.deviceRatingA = *rated;
+        p.trace.push_back({"short-circuit device",
+                           fmt(*rated, 0) + " A: the largest standard rating within " +
+                               fmt(kAssumedDriveScpdX, 2) + " × " + fmt(in) + " = " +
+                               fmt(listed, 1) +
+                               " A, the drive listing's maximum assumed (common practice)"});
+    }
+    // 250.122(B): the EGC grows with the phase conductor over the size 430.22 needs.
+    CableConditions one = c;
+    auto minPhase = smallestCable(1.25 * p.flc.amps, one, t, "14 AWG", false);
+    if (auto egc = egcSize(p.deviceRatingA, o.material, p.conductorSize,
+                           minPhase ? minPhase->first : p.conductorSize, t))
+        p.egcSize = egc->size;
+    return std::nullopt;
+}
+
+void sizeForSoftStarter(BucketProposal& p, const Part& motor, const Tables& t) {
+    p.softStarterA = std::ceil(motorCurrentA(p, motor) - 1e-9);
+    if (p.device != ScpdType::InstantaneousBreaker)
+        return;
+    // The instantaneous setting needs to clear only the starter's current limit (no
+    // asymmetrical inrush), at the field's default multiple of the FLC: the lowest setting
+    // above it, within the 430.52(C)(3) table value.
+    const double x =
+        SoftStarterRatings::of(Part::make(PartKind::SoftStarter, PartId(1), "SS")).startLimitX;
+    const double need = std::ceil(x * p.flc.amps / (1 - kInstantaneousTolerance) / 5) * 5;
+    const auto lim = scpdLimit(p.device, motorTypeOf(motor), p.flc.amps, t);
+    p.deviceRatingA = std::min(need, lim.maxA);
+    p.trace.push_back({"instantaneous setting",
+                       fmt(p.deviceRatingA, 0) + " A: above the soft starter's " + fmt(x, 1) +
+                           " × FLC start limit at the −20 % pickup tolerance (common practice)"});
 }
 
 } // namespace lineward

@@ -24,6 +24,11 @@ struct BucketProposal {
     double disconnectMinA = 0;
     std::string nemaSize;
     std::string egcSize;
+    /// A drive row (sizeForDrive): the drive's rated output and input currents and the largest
+    /// short-circuit device assumed for its listing; the conductor and device above follow them.
+    std::optional<double> driveOutputA, driveInputA, driveMaxScpdA;
+    /// A soft-starter row: the starter's rated current.
+    std::optional<double> softStarterA;
     std::vector<TraceStep> trace;
 };
 
@@ -37,6 +42,26 @@ struct SizeOptions {
     int conductors = 3;
     double asymmetryFactor = 1.5;
 };
+
+/// A drive's rated input current assumed from its output current where only the motor is known:
+/// 1.1 × (common practice, from memory: a six-pulse drive with a DC-link choke draws about
+/// 100–110 % of its output current from the line at rated load). Enter the nameplate value.
+inline constexpr double kAssumedDriveInputX = 1.1;
+
+/// Turns a proposal into a drive bucket's: drive output current = the motor current (the larger
+/// of table FLC and nameplate FLA, to 0.1 A up), input = kAssumedDriveInputX × output, the
+/// conductor sized at 125 % of the input current (430.122(A); it also covers the output side's
+/// 125 % FLC), the EGC per 250.122 with 250.122(B) against the 430.22 size, and the
+/// short-circuit device no larger than the drive's assumed listing maximum
+/// (kAssumedDriveScpdX × input, down to a standard rating) nor the 430.52 limit.
+/// Returns the reason where no conductor carries the current.
+std::optional<std::string> sizeForDrive(BucketProposal& p, const Part& motor, const SizeOptions& o,
+                                        const Tables& t);
+/// Turns a proposal into a soft-starter bucket's: the starter rated at the motor current (the
+/// larger of table FLC and nameplate FLA), rounded up to a whole ampere; an instantaneous-only
+/// breaker set just above the starter's default current limit instead of the across-the-line
+/// inrush.
+void sizeForSoftStarter(BucketProposal& p, const Part& motor, const Tables& t);
 
 /// Proposes a bucket; returns the reason when it cannot (no FLC, no conductor large enough...).
 std::optional<BucketProposal> proposeBucket(const Part& motor, const SizeOptions& o,

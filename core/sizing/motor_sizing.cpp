@@ -210,6 +210,44 @@ std::optional<LockedRotor> lockedRotor(const Part& m, const Tables& t,
     return LockedRotor{amps, true};
 }
 
+std::optional<StartingCurrent> startingCurrent(const Part& m, const Part* starter,
+                                               const Tables& t) {
+    const auto lr = lockedRotor(m, t, nullptr);
+    if (starter && starter->kind == PartKind::Vfd) {
+        const double input = VfdRatings::of(*starter).inputA;
+        if (input <= 0)
+            return std::nullopt;
+        return StartingCurrent{input, true, false,
+                               "drive " + starter->tag + "'s rated input current " + fmt(input, 1) +
+                                   " A (assumed: a drive starts the motor within its current "
+                                   "limit; no across-the-line inrush)"};
+    }
+    if (starter && starter->kind == PartKind::SoftStarter) {
+        const auto flc = motorFlc(m, t, false);
+        const double base = flc ? flc->amps : MotorRatings::of(m).fla.value_or(0);
+        const double x = SoftStarterRatings::of(*starter).startLimitX;
+        if (base <= 0)
+            return std::nullopt;
+        double amps = x * base;
+        std::string basis = "soft starter " + starter->tag + "'s current limit " + fmt(x, 1) +
+                            " × " + fmt(base, 1) + " A " + (flc ? "table FLC" : "nameplate FLA") +
+                            " = " + fmt(amps, 0) +
+                            " A (3–4 × FLC is common practice; no asymmetrical inrush)";
+        if (lr && lr->amps < amps) {
+            amps = lr->amps;
+            basis += ", at most the locked-rotor current " + fmt(lr->amps, 0) + " A";
+        }
+        return StartingCurrent{amps, true, false, basis};
+    }
+    if (!lr)
+        return std::nullopt;
+    return StartingCurrent{lr->amps, false, lr->assumed,
+                           "locked-rotor current " + fmt(lr->amps, 0) + " A across the line" +
+                               (lr->assumed ? " (" + fmt(kAssumedLockedRotorMultiple, 0) +
+                                                  " × FLC assumed, common practice)"
+                                            : "")};
+}
+
 CableConditions conditionsOf(const Part& cable, const Settings& s) {
     const auto c = CableRatings::of(cable);
     CableConditions k;

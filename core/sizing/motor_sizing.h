@@ -64,6 +64,28 @@ struct LockedRotor {
 };
 std::optional<LockedRotor> lockedRotor(const Part& motor, const Tables& t,
                                        std::vector<TraceStep>* trace);
+/// The largest short-circuit device assumed for a drive whose listing maximum is not given: 175 %
+/// of its rated input current (common practice, from memory: drive instructions commonly name
+/// fuses or breakers of about 150–200 % of the input current). Shown in every trace that uses it.
+inline constexpr double kAssumedDriveScpdX = 1.75;
+
+/// What a motor draws from its supply while it starts. Across the line: its locked-rotor
+/// current (lockedRotor), with an asymmetrical offset. Through a drive: the drive's rated input
+/// current (assumed: the drive accelerates the motor within its current limit, and the line
+/// side draws no more than about its rated input current; no asymmetrical inrush, the DC bus
+/// charges through its pre-charge circuit). Through a soft starter: its current limit
+/// (start_limit_x) × the motor's FLC, at most the locked-rotor current, no asymmetrical offset
+/// (the starter ramps the voltage from a fraction of rated).
+struct StartingCurrent {
+    double amps = 0;
+    bool limited = false; ///< a drive or soft starter sets it (no asymmetrical inrush)
+    bool assumed = false; ///< across the line with the locked-rotor current assumed
+    std::string basis;    ///< how it was found, for traces
+};
+/// `starter` is the drive or soft starter of the motor's branch, or null (across the line).
+std::optional<StartingCurrent> startingCurrent(const Part& motor, const Part* starter,
+                                               const Tables& t);
+
 /// Instantaneous pickup tolerance assumed below the setting (common practice: ±20 %).
 inline constexpr double kInstantaneousTolerance = 0.20;
 

@@ -7,6 +7,7 @@
 #include "studies/admittance.h"
 #include "studies/finite_guard.h"
 #include "studies/loop_solver.h"
+#include "topology/motor_branch.h"
 
 #include <cmath>
 
@@ -256,17 +257,20 @@ void motorStarting(StudyResults& r, const Network& net, const Flow& flow, const 
         if (p.kind != PartKind::Motor)
             continue;
         MotorStart ms;
-        const auto lr = lockedRotor(p, t, nullptr);
+        auto chain = net.branchChain(p.id);
+        // A drive or soft starter in the branch limits the current drawn while starting.
+        const auto lr = startingCurrent(p, startingDevice(d, chain), t);
         if (!lr)
             continue; // no current to start with: the motor's own findings say what is missing
         ms.lraAssumed = lr->assumed;
         ms.lockedRotorA = lr->amps;
+        if (lr->limited)
+            ms.limitBasis = lr->basis;
         const int m = l.bus;
         const double vb = r.model.baseV[static_cast<std::size_t>(m)];
         const double rated = MotorRatings::of(p).volts;
         const double zOhm = rated / std::sqrt(3.0) / lr->amps;
         const Complex zlr = std::polar(zOhm / (vb * vb / (kBaseMva * 1e6)), std::acos(s.startPf));
-        auto chain = net.branchChain(p.id);
         const NodeIndex busNode = chain.empty() ? net.nodeOf(p.id, 0) : flow.lineNode(chain.back());
         ms.bus = r.busOf(busNode);
         // Driving-point and transfer impedances: from the loop solver, else a Z column.

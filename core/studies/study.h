@@ -24,7 +24,10 @@ struct MotorStart {
     double terminalPctOfRated = 0; ///< motor terminal voltage while starting, % of its rating
     double lockedRotorA = 0;
     bool lraAssumed = false; ///< 6 × FLC used (common practice) for want of data
-    int bus = -1;            ///< solve bus of the motor's feeding bus
+    /// Set where a drive or soft starter limits the starting current (lockedRotorA then holds
+    /// that current): how it was found.
+    std::string limitBasis;
+    int bus = -1; ///< solve bus of the motor's feeding bus
 };
 
 struct StudyResults {

@@ -5,6 +5,14 @@
 
 namespace lineward {
 
+const Part* startingDevice(const Drawing& d, const std::vector<PartId>& chain) {
+    for (auto id : chain)
+        if (const Part* q = d.part(id);
+            q && (q->kind == PartKind::Vfd || q->kind == PartKind::SoftStarter))
+            return q;
+    return nullptr;
+}
+
 std::vector<MotorBranch> findMotorBranches(const Drawing& d, const Network& net) {
     std::vector<MotorBranch> out;
     for (const auto& p : d.parts()) {
@@ -30,8 +38,18 @@ std::vector<MotorBranch> findMotorBranches(const Drawing& d, const Network& net)
             case PartKind::Overload:
                 b.overload = q;
                 break;
+            case PartKind::Vfd:
+                if (!b.drive)
+                    b.drive = q;
+                break;
+            case PartKind::SoftStarter:
+                if (!b.softStarter)
+                    b.softStarter = q;
+                break;
             case PartKind::Cable:
                 b.cables.push_back(q);
+                if (b.drive)
+                    b.driveInputCables.push_back(q); // met after the drive: on its line side
                 break;
             default:
                 break;

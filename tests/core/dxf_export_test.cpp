@@ -143,7 +143,7 @@ TEST_P(DxfSample, EveryLayerTagRatingAndWireIsThere) {
             declared.insert(e.get(2));
     for (const auto& l : allLayers())
         EXPECT_TRUE(declared.count(l)) << l;
-    EXPECT_EQ(allLayers().size(), 12u + 6u); // one per part kind, then wires .. title block
+    EXPECT_EQ(allLayers().size(), 14u + 6u); // one per part kind, then wires .. title block
 
     const auto ents = section(dxf, "ENTITIES");
     std::multiset<std::string> tags, ratings;

@@ -75,14 +75,53 @@ TEST(LineupBuilder, FeederFollowsTheLoad) {
         << violations(checkDrawing(d, testTables()));
 }
 
-TEST(LineupBuilder, SoftAndDriveRowsSayWhatIsMissing) {
-    const auto list = readLoadList("tag,hp,volts,starter\nP-1,20,460,vfd\nP-2,20,460,soft\n");
+TEST(LineupBuilder, DriveAndSoftStarterRowsBuildTheirBucketsAndCheckClean) {
+    const auto list = readLoadList("tag,hp,volts,fla,protection,starter\n"
+                                   "P-1,7.5,460,10.5,breaker,vfd\n"
+                                   "P-2,40,460,49,fuse,vfd\n"
+                                   "P-3,20,460,25,breaker,soft\n"
+                                   "P-4,10,460,13,inst_breaker,vfd\n"
+                                   "P-5,60,460,72,inst_breaker,soft\n");
+    ASSERT_TRUE(list.ok());
     const auto lineup = buildLineup(list.rows, {}, testTables());
+    ASSERT_TRUE(lineup.refused.empty());
+    const Drawing& d = lineup.drawing;
+    const auto report = checkDrawing(d, testTables());
+    EXPECT_EQ(report.openCounts[2], 0) << violations(report);
+    for (const auto& f : report.findings)
+        EXPECT_NE(f.ruleId, "curve.nuisance") << f.message;
+    // A drive bucket: no contactor, no overload relay (430.124(A)); its output current is the
+    // motor current, the larger of FLC 11 A (NEC 2023 Table 430.250, from memory) and FLA
+    // 10.5 A; input 1.1 × output = 12.1 A (common practice); the cable carries 1.25 × 12.1 =
+    // 15.1 A (430.122(A)): 12 AWG, 20 A at 60 °C terminations (NEC 2023 Table 310.16, from
+    // memory), where 125 % FLC = 13.75 A alone would take 14 AWG (15 A).
+    EXPECT_EQ(d.partByTag("OL-P-1"), nullptr);
+    EXPECT_EQ(d.partByTag("K-P-1"), nullptr);
+    const auto vfd = VfdRatings::of(*d.partByTag("VFD-P-1"));
+    EXPECT_DOUBLE_EQ(vfd.outputA, 11.0);
+    EXPECT_DOUBLE_EQ(vfd.inputA, 12.1);
+    EXPECT_EQ(CableRatings::of(*d.partByTag("C-P-1")).size, "12 AWG");
+    // Its breaker: within 1.75 × 12.1 = 21.2 A (the listing maximum assumed, common practice)
+    // → 20 A (240.6(A)), below the 430.52 limit 250 % × 11 = 27.5 → 30 A.
+    EXPECT_DOUBLE_EQ(BreakerRatings::of(*d.partByTag("CB-P-1")).tripA, 20.0);
+    // An instantaneous-only breaker cannot stand without a relay: the drive row gets an
+    // inverse-time breaker and a note says why.
+    EXPECT_EQ(d.partByTag("MCP-P-4"), nullptr);
+    EXPECT_NE(d.partByTag("CB-P-4"), nullptr);
+    // A soft-starter bucket keeps its overload relay and has no contactor (the bypass is a
+    // field of the soft starter).
+    EXPECT_NE(d.partByTag("OL-P-3"), nullptr);
+    EXPECT_EQ(d.partByTag("K-P-3"), nullptr);
+    const auto ss = SoftStarterRatings::of(*d.partByTag("SS-P-3"));
+    EXPECT_DOUBLE_EQ(ss.amps, 27.0);
+    EXPECT_TRUE(ss.bypass);
     int said = 0;
     for (const auto& n : lineup.notes)
-        said += n.find("no drive part") != std::string::npos ||
-                n.find("no soft-starter part") != std::string::npos;
-    EXPECT_EQ(said, 2);
+        said += n.find("assumed") != std::string::npos ||
+                n.find("inverse-time breaker instead") != std::string::npos;
+    EXPECT_GE(said, 4);
+    for (const auto& n : lineup.notes)
+        EXPECT_EQ(n.find("no drive part"), std::string::npos) << n;
 }
 
 TEST(LineupBuilder, BucketsForAnExistingBusGoRightOfItsBuckets) {

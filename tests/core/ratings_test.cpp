@@ -54,6 +54,13 @@ std::set<std::string_view> declaredKeys(PartKind kind) {
         return {OverloadRatings::kSettingA,      OverloadRatings::kRangeMinA,
                 OverloadRatings::kRangeMaxA,     OverloadRatings::kTripClass,
                 OverloadRatings::kUltimateTripX, OverloadRatings::kCurvePoints};
+    case PartKind::Vfd:
+        return {VfdRatings::kHp, VfdRatings::kVolts, VfdRatings::kInputA, VfdRatings::kOutputA,
+                VfdRatings::kMaxScpdA};
+    case PartKind::SoftStarter:
+        return {SoftStarterRatings::kHp,     SoftStarterRatings::kVolts,
+                SoftStarterRatings::kAmps,   SoftStarterRatings::kStartLimitX,
+                SoftStarterRatings::kBypass, SoftStarterRatings::kBypassA};
     case PartKind::Cable:
         return {CableRatings::kMaterial,     CableRatings::kSize,        CableRatings::kSets,
                 CableRatings::kLengthFt,     CableRatings::kInsulationC, CableRatings::kRaceway,
@@ -102,6 +109,12 @@ void readTyped(const Part& p) {
         break;
     case PartKind::Overload:
         OverloadRatings::of(p);
+        break;
+    case PartKind::Vfd:
+        VfdRatings::of(p);
+        break;
+    case PartKind::SoftStarter:
+        SoftStarterRatings::of(p);
         break;
     case PartKind::Cable:
         CableRatings::of(p);

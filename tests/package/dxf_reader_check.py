@@ -14,7 +14,7 @@ import sys
 import ezdxf
 
 KINDS = ["source", "transformer", "bus", "breaker", "inst_breaker", "fuse", "disconnect",
-         "contactor", "overload", "cable", "motor", "load"]
+         "contactor", "overload", "vfd", "soft_starter", "cable", "motor", "load"]
 OTHER_LAYERS = ["LW-WIRES", "LW-TEXT-TAGS", "LW-TEXT-RATINGS", "LW-BADGES", "LW-BUCKETS",
                 "LW-TITLE-BLOCK"]
 
