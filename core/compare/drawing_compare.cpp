@@ -249,8 +249,12 @@ void compareBuckets(const Drawing& o, const Drawing& n, const Pairing& pairing,
 
 ojson revisionsJson(const std::vector<Revision>& revs) {
     ojson a = ojson::array();
-    for (const auto& r : revs)
-        a.push_back(ojson{{"rev", r.rev}, {"date", r.date}, {"by", r.by}, {"note", r.note}});
+    for (const auto& r : revs) {
+        ojson row{{"rev", r.rev}, {"date", r.date}, {"by", r.by}, {"note", r.note}};
+        if (!r.file.empty()) // as the file writes it: only where an issued drawing was kept
+            row["file"] = r.file;
+        a.push_back(std::move(row));
+    }
     return a;
 }
 
