@@ -209,11 +209,9 @@ void SchedulesPanel::rebuild() {
             // The edit runs after the cell's editor has closed: it re-checks the drawing and
             // refills this model, which must not happen inside the view's commit of the editor.
             auto onEdit = [this](ScheduleField f, QString text) {
-                QMetaObject::invokeMethod(
-                    this,
-                    guarded(this, tr("Changing a rating"),
-                            [this, f, text] { editCell(f, text); }),
-                    Qt::QueuedConnection);
+                auto edit = guarded(this, tr("Changing a rating"),
+                                    [this, f, text] { editCell(f, text); });
+                QMetaObject::invokeMethod(this, [edit] { edit(); }, Qt::QueuedConnection);
             };
             auto* model = new ScheduleModel(m_doc, onEdit, this);
             auto* view = new QTableView;

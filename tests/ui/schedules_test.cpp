@@ -176,7 +176,7 @@ QString reviewSampleWithAcceptance() {
     const int at = text.indexOf(marker);
     EXPECT_GE(at, 0);
     text.insert(at + marker.size(),
-                "    {\"rule\":\"branch.overload.setting\",\"parts\":[13],\"by\":\"R. Vance\","
+                "    {\"rule\":\"branch.overload.setting\",\"parts\":[13,15],\"by\":\"R. Vance\","
                 "\"date\":\"2026-12-03\",\"note\":\"relay to be replaced at the outage\"},\n");
     const QString path = test::tempDir("schedules_accepted") + "/accepted.lineward";
     QFile out(path);
