@@ -61,13 +61,19 @@ QString cell(const QTableView* view, const QString& tag, const QString& header) 
 bool typeIntoCell(test::User& user, QTableView* view, const QString& tag, const QString& header,
                   const QString& text) {
     const QModelIndex at = view->model()->index(rowOf(view, tag), columnOf(view, header));
+    // A menu opened before may have taken activation; a person's click activates the window.
+    QApplication::setActiveWindow(view->window());
     view->scrollTo(at);
     const QPoint p = view->visualRect(at).center();
     QTest::mouseClick(view->viewport(), Qt::LeftButton, {}, p);
     QTest::mouseDClick(view->viewport(), Qt::LeftButton, {}, p);
-    auto* editor = qobject_cast<QLineEdit*>(QApplication::focusWidget());
-    if (!editor || !view->isAncestorOf(editor))
+    QLineEdit* editor = nullptr;
+    for (auto* e : view->findChildren<QLineEdit*>())
+        if (e->isVisible())
+            editor = e;
+    if (!editor)
         return false;
+    EXPECT_EQ(QApplication::focusWidget(), editor); // the person types into it
     QTest::keyClick(editor, Qt::Key_A, Qt::ControlModifier);
     QTest::keyClicks(editor, text);
     QTest::keyClick(editor, Qt::Key_Return);
