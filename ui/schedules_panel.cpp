@@ -153,13 +153,14 @@ SchedulesPanel::SchedulesPanel(Document& doc, QWidget* parent)
     m_message->setTextFormat(Qt::PlainText); // tags and typed text
     m_message->setWordWrap(true);
     m_message->setStyleSheet(kRefusedStyle);
+    m_message->hide(); // shown only with a refusal: an empty line would still take height
     auto* lay = new QVBoxLayout(this);
     lay->setContentsMargins(0, 0, 0, 0);
     lay->addWidget(m_tabs, 1);
     lay->addWidget(m_message);
     connect(&doc, &Document::reportChanged, this,
             guarded(this, tr("Building the schedules"), [this] { refresh(); }));
-    connect(&doc, &Document::drawingReset, this, [this] { m_message->clear(); });
+    connect(&doc, &Document::drawingReset, this, [this] { showMessage({}); });
     refresh();
 }
 
@@ -192,13 +193,18 @@ void SchedulesPanel::editCell(ScheduleField field, const QString& text) {
     if (why.isEmpty())
         why = changedParts({p}, changes, after);
     if (!why.isEmpty()) {
-        m_message->setText(refusedText(why));
+        showMessage(refusedText(why));
         return;
     }
-    m_message->clear();
+    showMessage({});
     if (!after.empty())
         emit editRequested(std::move(after),
                            setFieldText(peopleFieldName(*findField(p->kind, field.key)), {p}));
+}
+
+void SchedulesPanel::showMessage(const QString& text) {
+    m_message->setText(text);
+    m_message->setVisible(!text.isEmpty());
 }
 
 void SchedulesPanel::rebuild() {

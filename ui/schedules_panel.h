@@ -67,6 +67,8 @@ private:
     void rebuild();
     /// A typed cell value: checked as the Inspector checks it, then asked for or refused.
     void editCell(ScheduleField field, const QString& text);
+    /// The refusal line under the tables; hidden when empty.
+    void showMessage(const QString& text);
     Document& m_doc;
     QTabWidget* m_tabs;
     QLabel* m_message;
