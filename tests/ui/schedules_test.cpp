@@ -136,6 +136,8 @@ TEST(Schedules, ACellEditGoesThroughTheInspectorsChecksAndUndo) {
     ASSERT_TRUE(typeIntoCell(user, view, "OL-101", "Setting A", "-5"));
     const QString refused = schedulesMessage(w);
     EXPECT_TRUE(refused.startsWith("Refused: ")) << refused.toStdString();
+    if (const QByteArray dir = qgetenv("LINEWARD_SHOT_DIR"); !dir.isEmpty())
+        w.grab().save(QString::fromUtf8(dir) + "/schedules-refused.png");
     EXPECT_EQ(test::drawingBytes(w), edited);
     EXPECT_EQ(cell(view, "OL-101", "Setting A"), "34");
     EXPECT_EQ(undoText(user), "Undo Set Setting (A) of OL-101");
@@ -215,6 +217,8 @@ TEST(Schedules, ARowWithAnOpenFindingShowsItsSeverityAndAnAcceptedOneDoesNot) {
     const QRect r = view->visualRect(tag);
     const QColor seen = shot.pixelColor(r.left() + 2, r.center().y());
     EXPECT_GT(seen.red() - seen.blue(), 20) << seen.name().toStdString();
+    if (const QByteArray dir = qgetenv("LINEWARD_SHOT_DIR"); !dir.isEmpty())
+        w.grab().save(QString::fromUtf8(dir) + "/schedules-marked.png");
 
     // The same file with that finding accepted: the row is no longer marked, and says so.
     MainWindow accepted(sharedTables());
