@@ -42,8 +42,8 @@ void addCompareCommand(CLI::App& app, const TablesRef& tables, int& exitCode) {
     auto opts = std::make_shared<CompareOptions>();
     auto* cmd = app.add_subcommand(
         "compare", "Compare two revisions of a drawing: parts, wires and buckets added, removed "
-                   "or changed, sheet and settings changes, and findings new, resolved and still "
-                   "open. Exit 0: the same drawing; 1: they differ; 2: a file could not be read.");
+                   "or changed, sheet and settings changes, review comments added, removed or "
+                   "changed, and findings new, resolved and still open. Exit 0: the same drawing; 1: they differ; 2: a file could not be read.");
     cmd->add_option("old", opts->oldFile, "the older revision (.lineward)")
         ->required()
         ->check(CLI::ExistingFile);

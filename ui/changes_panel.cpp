@@ -119,6 +119,36 @@ void findingRows(QTreeWidget* list, const QString& title, const std::vector<Find
     }
 }
 
+QString commentText(const CommentRef& x) {
+    return (x.resolved ? QObject::tr("resolved") : QObject::tr("open")) + " · " + q(x.by) + " " +
+           q(x.date) + ": " + q(x.text);
+}
+
+// Review comments: an added or changed one's part is on the Sheet; a removed one's is found
+// through the pairing when its part is still there.
+void commentRows(QTreeWidget* list, const DrawingComparison& c) {
+    auto oneSide = [&](const QString& title, const std::vector<CommentRef>& items, bool onSheet) {
+        if (items.empty())
+            return;
+        auto* g = group(list, title, items.size());
+        for (const auto& x : items) {
+            auto* r = row(g, "C" + QString::number(x.id) + " · " + q(x.tag), commentText(x));
+            if (onSheet)
+                r->setData(0, ChangesPanel::kPartRole, x.part.value);
+            else if (auto it = c.pairedParts.find(x.part); it != c.pairedParts.end())
+                r->setData(0, ChangesPanel::kPartRole, it->second.value);
+        }
+    };
+    oneSide(QObject::tr("Comments added"), c.commentsAdded, true);
+    oneSide(QObject::tr("Comments removed"), c.commentsRemoved, false);
+    if (c.commentsChanged.empty())
+        return;
+    auto* g = group(list, QObject::tr("Comments changed"), c.commentsChanged.size());
+    for (const auto& x : c.commentsChanged)
+        row(g, "C" + QString::number(x.newId) + " · " + q(x.tag), changesText(x.fields))
+            ->setData(0, ChangesPanel::kPartRole, x.part.value);
+}
+
 } // namespace
 
 ChangesPanel::ChangesPanel(QWidget* parent)
@@ -208,6 +238,7 @@ void ChangesPanel::showComparison(const DrawingComparison& c, const QString& oth
     }
     valueRows(m_list, tr("Sheet"), c.sheet);
     valueRows(m_list, tr("Settings"), c.settings);
+    commentRows(m_list, c);
     findingRows(m_list, tr("Findings introduced"), c.findingsNew, c, true);
     findingRows(m_list, tr("Findings resolved"), c.findingsResolved, c, false);
 }

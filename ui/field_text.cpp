@@ -74,4 +74,49 @@ QString parseFieldText(const FieldSpec& spec, const QString& text, FieldValue& o
     return {};
 }
 
+QString typedFieldChanges(PartKind kind, std::string_view key, const QString& text,
+                          FieldChanges& out) {
+    const FieldSpec* spec = findField(kind, key);
+    if (!spec)
+        return tr("%1 has no rating %2").arg(qs(kindInfo(kind).name), qs(key));
+    FieldValue v;
+    if (QString why = parseFieldText(*spec, text, v); !why.isEmpty())
+        return why;
+    out.emplace_back(spec->key, v);
+    // Giving one of an either-or pair clears the other (the file holds exactly one).
+    for (const auto& alt : kindInfo(kind).alternatives) {
+        if (alt.first == spec->key)
+            out.emplace_back(alt.second, FieldValue{});
+        else if (alt.second == spec->key)
+            out.emplace_back(alt.first, FieldValue{});
+    }
+    return {};
+}
+
+QString changedParts(const std::vector<const Part*>& parts, const FieldChanges& changes,
+                     std::vector<Part>& after) {
+    std::vector<Part> out;
+    for (const Part* p : parts) {
+        Part trial = *p;
+        if (auto why = trial.set(changes, FieldNaming::People))
+            // All or none: one part refusing the value leaves every part as it was.
+            return (parts.size() > 1 ? QString::fromStdString(p->tag) + ": " : QString()) +
+                   QString::fromStdString(*why);
+        if (!(trial == *p))
+            out.push_back(std::move(trial));
+    }
+    after = std::move(out);
+    return {};
+}
+
+QString setFieldText(const QString& what, const std::vector<const Part*>& parts) {
+    return parts.size() == 1
+               ? tr("Set %1 of %2").arg(what, QString::fromStdString(parts.front()->tag))
+               : tr("Set %1 of %2 parts").arg(what).arg(parts.size());
+}
+
+QString refusedText(const QString& why) {
+    return tr("Refused: %1").arg(why);
+}
+
 } // namespace lineward::ui

@@ -2,7 +2,7 @@
 // multi-edit form's one way to show a value and to read typed text back into a value.
 #pragma once
 
-#include "model/field.h"
+#include "model/part.h"
 
 #include <QString>
 
@@ -19,5 +19,27 @@ QString parseFieldText(const FieldSpec& spec, const QString& text, FieldValue& o
 
 /// "Rated output (hp)": the rating's name for people.
 QString peopleFieldName(const FieldSpec& spec);
+
+/// The changes of one typed rating.
+using FieldChanges = std::vector<std::pair<std::string_view, FieldValue>>;
+
+/// What typing `text` into rating `key` of a part of `kind` asks for: that value, and, where the
+/// rating is one of an either-or pair, the other cleared. Returns the reason it is refused
+/// (parseFieldText's), or "" with the changes appended to `out`.
+QString typedFieldChanges(PartKind kind, std::string_view key, const QString& text,
+                          FieldChanges& out);
+
+/// The parts as the changes make them, all or none, each checked by the part's own validation
+/// (Part::set). Returns the first refusal (named by the part's tag when there are several), or ""
+/// with the copies that differ from their part in `after`. The Inspector, multi-edit and the
+/// Schedules panel's cells all edit through this one check.
+QString changedParts(const std::vector<const Part*>& parts, const FieldChanges& changes,
+                     std::vector<Part>& after);
+
+/// The undo text of a rating edit: "Set Trip rating (A) of CB-1", "Set … of 3 parts".
+QString setFieldText(const QString& what, const std::vector<const Part*>& parts);
+
+/// How a refused value is shown: "Refused: <reason>".
+QString refusedText(const QString& why);
 
 } // namespace lineward::ui

@@ -297,15 +297,7 @@ std::string_view Inspector::rowKey(const Row& row) const {
 
 QString Inspector::parseRow(const Row& row, const QString& text,
                             std::vector<std::pair<std::string_view, FieldValue>>& changes) const {
-    const std::string_view key = rowKey(row);
-    FieldValue v;
-    if (QString why = parseFieldText(*findField(*m_formKind, key), text, v); !why.isEmpty())
-        return why;
-    changes.emplace_back(key, v);
-    if (row.pair)
-        changes.emplace_back(row.pairChoice == 0 ? row.pair->second : row.pair->first,
-                             FieldValue{});
-    return {};
+    return typedFieldChanges(*m_formKind, rowKey(row), text, changes);
 }
 
 void Inspector::onTextEdited(std::size_t index) {
@@ -315,14 +307,9 @@ void Inspector::onTextEdited(std::size_t index) {
     Row& row = m_rows[index];
     std::vector<std::pair<std::string_view, FieldValue>> changes;
     QString why = parseRow(row, row.edit->text(), changes);
-    for (const Part* p : parts) {
-        if (!why.isEmpty())
-            break;
-        Part trial = *p;
-        if (auto refused = trial.set(changes, FieldNaming::People))
-            why = (parts.size() > 1 ? QString::fromStdString(p->tag) + ": " : QString()) +
-                  QString::fromStdString(*refused);
-    }
+    std::vector<Part> after;
+    if (why.isEmpty())
+        why = changedParts(parts, changes, after);
     row.edit->setStyleSheet(why.isEmpty() ? QString() : kRefusedStyle);
     m_message->setText(why);
 }
@@ -338,7 +325,7 @@ void Inspector::onTextCommitted(std::size_t index) {
     std::vector<std::pair<std::string_view, FieldValue>> changes;
     const QString why = parseRow(row, edit->text(), changes);
     if (!why.isEmpty()) {
-        m_message->setText(tr("Refused: %1").arg(why));
+        m_message->setText(refusedText(why));
         return;
     }
     commit(changes, peopleName(*findField(*m_formKind, rowKey(row))));
@@ -350,25 +337,13 @@ QString Inspector::commit(const std::vector<std::pair<std::string_view, FieldVal
     if (parts.empty())
         return tr("no part selected");
     std::vector<Part> after;
-    for (const Part* p : parts) {
-        Part trial = *p;
-        if (auto why = trial.set(changes, FieldNaming::People)) {
-            // All or none: one part refusing the value leaves every part as it was.
-            const QString reason =
-                (parts.size() > 1 ? QString::fromStdString(p->tag) + ": " : QString()) +
-                QString::fromStdString(*why);
-            m_message->setText(tr("Refused: %1").arg(reason));
-            return reason;
-        }
-        if (!(trial == *p))
-            after.push_back(std::move(trial));
+    if (QString why = changedParts(parts, changes, after); !why.isEmpty()) {
+        m_message->setText(refusedText(why));
+        return why;
     }
     m_message->clear();
     if (!after.empty())
-        emit editRequested(std::move(after),
-                           parts.size() == 1
-                               ? tr("Set %1 of %2").arg(what, QString::fromStdString(parts[0]->tag))
-                               : tr("Set %1 of %2 parts").arg(what).arg(parts.size()));
+        emit editRequested(std::move(after), setFieldText(what, parts));
     // The edit may have been refused further up, or changed nothing: show the model's values.
     if (current())
         refreshValues();
@@ -386,7 +361,7 @@ QString Inspector::commitTag(const QString& text) {
     else if (t.size() > 200)
         why = tr("the tag is longer than 200 characters");
     if (!why.isEmpty()) {
-        m_message->setText(tr("Refused: %1").arg(why));
+        m_message->setText(refusedText(why));
         return why;
     }
     m_message->clear();

@@ -103,10 +103,14 @@ MainWindow::MainWindow(std::shared_ptr<const Tables> tables, QWidget* parent)
                 if (maybeSave())
                     openFile(files.first());
             }));
+    // A rating typed in the Inspector or in a Schedules cell: one command, one undo step.
+    auto setFields = [this](std::vector<Part> after, QString text) {
+        m_doc.undoStack().push(new SetFieldsCommand(m_doc, std::move(after), text));
+    };
     connect(m_inspector, &Inspector::editRequested, this,
-            guarded(this, tr("Changing a rating"), [this](std::vector<Part> after, QString text) {
-                m_doc.undoStack().push(new SetFieldsCommand(m_doc, std::move(after), text));
-            }));
+            guarded(this, tr("Changing a rating"), setFields));
+    connect(m_schedules, &SchedulesPanel::editRequested, this,
+            guarded(this, tr("Changing a rating"), setFields));
     connect(&m_doc, &Document::modifiedChanged, this, &MainWindow::refreshTitle);
     connect(m_scene, &QGraphicsScene::selectionChanged, this,
             guarded(this, tr("Showing the selection"), [this] { selectionChanged(); }));

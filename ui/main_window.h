@@ -127,8 +127,15 @@ private:
     void addCompareActions(QMenu* file);
     void refreshCompare();
     void clearCompareMarks();
-    /// In compare mode, the Submittal flags the parts changed since the compared revision.
-    void flagRevisions(SubmittalOptions& o) const;
+    /// The Submittal flags the parts changed since the compared revision (compare mode: the
+    /// file the person picked), else since the drawing as issued at the last revision before
+    /// the newest that kept one (Revision::file). Returns what was flagged against, or why a
+    /// recorded revision could not be used, for the status line.
+    QString flagRevisions(SubmittalOptions& o) const;
+    /// After a Submittal PDF: saves the drawing as issued beside it and records that file in the
+    /// newest revision row (one undoable edit), so the next revision's Submittal can flag what
+    /// changed since. Returns the reason it could not, or "" (also where there is no revision).
+    QString keepIssuedDrawing(const QString& pdfPath);
     /// The Submittal's CHECKED name: the drawing's checked_by, else the reviewer's name from the
     /// settings (whoever prints the checked drawing), else none.
     QString checkedByForSubmittal() const;

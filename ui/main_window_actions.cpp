@@ -145,10 +145,18 @@ void MainWindow::buildExportMenu(QMenu* exportMenu) {
             return;
         m_doc.waitForCheck();
         SubmittalOptions o;
-        flagRevisions(o);
+        const QString flags = flagRevisions(o);
         o.checkedBy = checkedByForSubmittal();
         auto r = writeSubmittalPdf(path, m_doc.sharedResult(), m_doc.sharedTables(), o);
-        done(path, r.error, tr(" (%1 pages)").arg(r.pages));
+        QString more = tr(" (%1 pages").arg(r.pages);
+        if (o.previous)
+            more += tr("; %1 parts flagged, %2").arg(r.revisionFlags).arg(flags);
+        else if (!flags.isEmpty())
+            more += "; " + flags;
+        if (r.error.isEmpty())
+            if (const QString kept = keepIssuedDrawing(path); !kept.isEmpty())
+                more += tr("; the issued drawing was not kept: %1").arg(kept);
+        done(path, r.error, more + ")");
     });
     menuAction(exportMenu, tr("One-line &SVG…"), QKeySequence(), this, [this, done] {
         const auto path = askSavePath(this, tr("Export one-line SVG"), baseName() + ".svg",

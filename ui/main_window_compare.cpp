@@ -2,6 +2,7 @@
 // One comparison (core/compare) feeds the Changes panel and the Sheet's marks; it is made again
 // from each new check result, so edits made while comparing show at once.
 #include "changes_panel.h"
+#include "commands/sheet_info_command.h"
 #include "compare_mark.h"
 #include "file_dialogs.h"
 #include "guard.h"
@@ -13,6 +14,8 @@
 #include "submittal.h"
 
 #include <QAction>
+#include <QDir>
+#include <QRegularExpression>
 #include <QDockWidget>
 #include <QFileInfo>
 #include <QMenu>
@@ -94,11 +97,67 @@ void MainWindow::refreshCompare() {
             .arg(c.findingsResolved.size()));
 }
 
-void MainWindow::flagRevisions(SubmittalOptions& o) const {
-    if (!m_compareBase)
-        return;
-    o.previous = m_compareBase;
-    o.previousName = m_compareFile;
+QString MainWindow::flagRevisions(SubmittalOptions& o) const {
+    if (m_compareBase) { // the person picked the older revision: it wins over the recorded one
+        o.previous = m_compareBase;
+        o.previousName = m_compareFile;
+        return tr("flags since %1").arg(m_compareFile);
+    }
+    // The newest row is the revision being issued; its own kept file (a re-issue) is not the
+    // previous revision.
+    const auto& revs = m_doc.drawing().sheet.revisions;
+    const Revision* last = nullptr;
+    for (std::size_t i = 0; i + 1 < revs.size(); ++i)
+        if (!revs[i].file.empty())
+            last = &revs[i];
+    if (!last)
+        return {};
+    const QDir base = m_doc.filePath().isEmpty() ? QDir::current()
+                                                 : QFileInfo(m_doc.filePath()).absoluteDir();
+    const QString path = base.absoluteFilePath(QString::fromStdString(last->file));
+    const QString rev = QString::fromStdString(last->rev);
+    auto loaded = io::loadDrawing(path.toStdString());
+    if (!loaded)
+        return tr("no flags: revision %1's issued drawing cannot be read (%2)")
+            .arg(rev, QString::fromStdString(loaded.error->text()));
+    o.previous = runCheck(std::move(*loaded.drawing), m_doc.tables());
+    o.previousName = tr("REV %1 (%2)").arg(rev, QFileInfo(path).fileName());
+    return tr("flags since revision %1 (%2)").arg(rev, QFileInfo(path).fileName());
+}
+
+QString MainWindow::keepIssuedDrawing(const QString& pdfPath) {
+    SheetInfo sheet = m_doc.drawing().sheet;
+    if (sheet.revisions.empty())
+        return {}; // no revision to keep it for
+    Revision& rev = sheet.revisions.back();
+    QString word = QString::fromStdString(rev.rev);
+    word.replace(QRegularExpression("[^A-Za-z0-9_-]"), "_");
+    const QFileInfo pdf(pdfPath);
+    const QString copy =
+        pdf.absoluteDir().absoluteFilePath(pdf.completeBaseName() + "-rev-" + word + ".lineward");
+    if (!m_doc.filePath().isEmpty() &&
+        QFileInfo(copy).absoluteFilePath() == QFileInfo(m_doc.filePath()).absoluteFilePath())
+        return tr("the issued copy would overwrite the drawing itself");
+    // Relative to the drawing's folder where the copy lies there or below, so the two can move
+    // together; otherwise the whole path.
+    QString recorded = copy;
+    if (!m_doc.filePath().isEmpty()) {
+        const QString rel = QFileInfo(m_doc.filePath()).absoluteDir().relativeFilePath(copy);
+        if (!rel.startsWith("../"))
+            recorded = rel;
+    }
+    rev.file = recorded.toStdString();
+    Drawing issued = m_doc.drawing();
+    issued.sheet = sheet;
+    if (auto why = io::saveDrawing(issued, copy.toStdString()))
+        return QString::fromStdString(*why);
+    if (!(sheet == m_doc.drawing().sheet)) {
+        auto* cmd = new SheetInfoCommand(m_doc, sheet);
+        cmd->setText(tr("Record the issued drawing of revision %1")
+                         .arg(QString::fromStdString(rev.rev)));
+        m_doc.undoStack().push(cmd);
+    }
+    return {};
 }
 
 void MainWindow::buildCompare() {

@@ -31,6 +31,8 @@ TitleBlockDialog::TitleBlockDialog(const SheetInfo& s, QWidget* parent)
         int c = 0;
         for (const auto* v : {&rev.rev, &rev.date, &rev.by, &rev.note})
             m_revisions->setItem(r, c++, new QTableWidgetItem(QString::fromStdString(*v)));
+        // The issued drawing's file is not edited here; it stays with its row.
+        m_revisions->item(r, 0)->setData(Qt::UserRole, QString::fromStdString(rev.file));
     }
     auto* form = new QFormLayout;
     form->addRow(tr("Title"), m_title);
@@ -67,8 +69,11 @@ SheetInfo TitleBlockDialog::result() const {
             return m_revisions->item(r, c) ? m_revisions->item(r, c)->text().toStdString()
                                            : std::string();
         };
+        const std::string file = m_revisions->item(r, 0)
+                                     ? m_revisions->item(r, 0)->data(Qt::UserRole).toString().toStdString()
+                                     : std::string();
         if (!cell(0).empty() || !cell(3).empty())
-            s.revisions.push_back({cell(0), cell(1), cell(2), cell(3)});
+            s.revisions.push_back({cell(0), cell(1), cell(2), cell(3), file});
     }
     return s;
 }

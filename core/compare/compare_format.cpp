@@ -58,6 +58,15 @@ ojson acceptedJson(const AcceptedRef& a) {
                  {"note", a.note}};
 }
 
+ojson commentJson(const CommentRef& x) {
+    return ojson{{"id", "C" + std::to_string(x.id)},
+                 {"part", x.tag},
+                 {"status", x.resolved ? "resolved" : "open"},
+                 {"by", x.by},
+                 {"date", x.date},
+                 {"text", x.text}};
+}
+
 template <typename T, typename F> ojson listJson(const std::vector<T>& items, F toJson) {
     ojson a = ojson::array();
     for (const auto& item : items)
@@ -159,6 +168,25 @@ std::string comparisonText(const DrawingComparison& c, const std::string& oldFil
     };
     section(s, "Accepted deviations added", c.acceptedAdded, acceptedLine("+"));
     section(s, "Accepted deviations removed", c.acceptedRemoved, acceptedLine("-"));
+    auto commentLine = [](const char* mark) {
+        return [mark](const CommentRef& x) {
+            return std::string(mark) + " C" + std::to_string(x.id) + " on " +
+                   escapeControls(x.tag) + " · " + (x.resolved ? "resolved" : "open") + " · " +
+                   escapeControls(x.by) + " " + escapeControls(x.date) + ": " +
+                   escapeControls(x.text);
+        };
+    };
+    section(s, "Comments added", c.commentsAdded, commentLine("+"));
+    section(s, "Comments removed", c.commentsRemoved, commentLine("-"));
+    section(s, "Comments changed", c.commentsChanged, [](const CommentChange& x) {
+        std::string line = "~ C" + std::to_string(x.newId) + " on " + escapeControls(x.tag);
+        if (x.oldId != x.newId)
+            line += " (was C" + std::to_string(x.oldId) + ")";
+        line += ":";
+        for (std::size_t i = 0; i < x.fields.size(); ++i)
+            line += (i ? "; " : " ") + changeText(x.fields[i]);
+        return line;
+    });
     section(s, "Findings new", c.findingsNew, findingText);
     section(s, "Findings resolved", c.findingsResolved, findingText);
     section(s, "Findings still open", c.findingsOpen, findingText);
@@ -195,6 +223,15 @@ ojson comparisonJson(const DrawingComparison& c, const std::string& oldFile,
     j["settings"] = changesJson(c.settings);
     j["accepted_added"] = listJson(c.acceptedAdded, acceptedJson);
     j["accepted_removed"] = listJson(c.acceptedRemoved, acceptedJson);
+    j["comments_added"] = listJson(c.commentsAdded, commentJson);
+    j["comments_removed"] = listJson(c.commentsRemoved, commentJson);
+    j["comments_changed"] = listJson(c.commentsChanged, [](const CommentChange& x) {
+        ojson o{{"id", "C" + std::to_string(x.newId)},
+                {"old_id", "C" + std::to_string(x.oldId)},
+                {"part", x.tag}};
+        o["fields"] = changesJson(x.fields);
+        return o;
+    });
     j["findings_new"] = listJson(c.findingsNew, findingJson);
     j["findings_resolved"] = listJson(c.findingsResolved, findingJson);
     j["findings_open"] = listJson(c.findingsOpen, findingJson);

@@ -13,8 +13,8 @@ std::string comparisonText(const DrawingComparison& c, const std::string& oldFil
                            const std::string& newFile);
 /// One JSON object (docs/compare.md): "old", "new", "same", parts_added, parts_removed,
 /// parts_changed, wires_added, wires_removed, buckets_added, buckets_removed, buckets_changed,
-/// sheet, settings, accepted_added, accepted_removed, findings_new, findings_resolved,
-/// findings_open.
+/// sheet, settings, accepted_added, accepted_removed, comments_added, comments_removed,
+/// comments_changed, findings_new, findings_resolved, findings_open.
 nlohmann::ordered_json comparisonJson(const DrawingComparison& c, const std::string& oldFile,
                                       const std::string& newFile);
 /// "P-101" for a part ("#15" where it has no tag).

@@ -249,8 +249,12 @@ void compareBuckets(const Drawing& o, const Drawing& n, const Pairing& pairing,
 
 ojson revisionsJson(const std::vector<Revision>& revs) {
     ojson a = ojson::array();
-    for (const auto& r : revs)
-        a.push_back(ojson{{"rev", r.rev}, {"date", r.date}, {"by", r.by}, {"note", r.note}});
+    for (const auto& r : revs) {
+        ojson row{{"rev", r.rev}, {"date", r.date}, {"by", r.by}, {"note", r.note}};
+        if (!r.file.empty()) // as the file writes it: only where an issued drawing was kept
+            row["file"] = r.file;
+        a.push_back(std::move(row));
+    }
     return a;
 }
 
@@ -281,6 +285,63 @@ void compareAccepted(const Drawing& o, const Drawing& n, DrawingComparison& c) {
     for (std::size_t i = 0; i < news.size(); ++i)
         if (!newUsed[i])
             c.acceptedAdded.push_back(news[i]);
+}
+
+CommentRef commentRef(const Drawing& d, const Comment& x) {
+    return {x.id, x.part, tagOf(d, x.part), x.by, x.date, x.text, x.resolved};
+}
+
+std::vector<ValueChange> commentChanges(const Comment& a, const Comment& b) {
+    std::vector<ValueChange> out;
+    auto status = [](const Comment& x) { return x.resolved ? "resolved" : "open"; };
+    if (a.resolved != b.resolved)
+        out.push_back({"status", status(a), status(b)});
+    if (a.text != b.text)
+        out.push_back({"text", a.text, b.text});
+    if (a.by != b.by)
+        out.push_back({"by", a.by, b.by});
+    if (a.date != b.date)
+        out.push_back({"date", a.date, b.date});
+    return out;
+}
+
+void compareComments(const Drawing& o, const Drawing& n, const Pairing& pairing,
+                     DrawingComparison& c) {
+    auto samePart = [&](const Comment& a, const Comment& b) {
+        auto it = pairing.oldToNew.find(a.part);
+        return it != pairing.oldToNew.end() && it->second == b.part;
+    };
+    const auto& olds = o.comments();
+    const auto& news = n.comments();
+    std::vector<int> pairOf(olds.size(), -1);
+    std::vector<bool> newUsed(news.size(), false);
+    // Two passes: the same id on the paired part; then, for ids renumbered, the same author,
+    // date and text on the paired part.
+    auto pass = [&](auto same) {
+        for (std::size_t i = 0; i < olds.size(); ++i)
+            for (std::size_t k = 0; k < news.size() && pairOf[i] < 0; ++k)
+                if (!newUsed[k] && samePart(olds[i], news[k]) && same(olds[i], news[k])) {
+                    pairOf[i] = static_cast<int>(k);
+                    newUsed[k] = true;
+                }
+    };
+    pass([](const Comment& a, const Comment& b) { return a.id == b.id; });
+    pass([](const Comment& a, const Comment& b) {
+        return a.by == b.by && a.date == b.date && a.text == b.text;
+    });
+    for (std::size_t i = 0; i < olds.size(); ++i) {
+        if (pairOf[i] < 0) {
+            c.commentsRemoved.push_back(commentRef(o, olds[i]));
+            continue;
+        }
+        const Comment& b = news[static_cast<std::size_t>(pairOf[i])];
+        if (auto fields = commentChanges(olds[i], b); !fields.empty())
+            c.commentsChanged.push_back(
+                {olds[i].id, b.id, b.part, tagOf(n, b.part), std::move(fields)});
+    }
+    for (std::size_t k = 0; k < news.size(); ++k)
+        if (!newUsed[k])
+            c.commentsAdded.push_back(commentRef(n, news[k]));
 }
 
 // A finding's identity across revisions: its rule and its parts, old parts named as the newer
@@ -336,7 +397,8 @@ bool DrawingComparison::same() const {
     return partsAdded.empty() && partsRemoved.empty() && partsChanged.empty() &&
            wiresAdded.empty() && wiresRemoved.empty() && bucketsAdded.empty() &&
            bucketsRemoved.empty() && bucketsChanged.empty() && sheet.empty() && settings.empty() &&
-           acceptedAdded.empty() && acceptedRemoved.empty();
+           acceptedAdded.empty() && acceptedRemoved.empty() && commentsAdded.empty() &&
+           commentsRemoved.empty() && commentsChanged.empty();
 }
 
 DrawingComparison compareDrawings(const CheckResult& oldResult, const CheckResult& newResult) {
@@ -353,6 +415,7 @@ DrawingComparison compareDrawings(const CheckResult& oldResult, const CheckResul
             {"revisions", revisionsJson(o.sheet.revisions), revisionsJson(n.sheet.revisions)});
     c.settings = objectChanges(io::settingsJson(o.settings), io::settingsJson(n.settings));
     compareAccepted(o, n, c);
+    compareComments(o, n, pairing, c);
     compareFindings(oldResult, newResult, pairing, c);
     c.pairedParts = pairing.oldToNew;
     return c;

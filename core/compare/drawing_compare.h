@@ -78,6 +78,23 @@ struct AcceptedRef {
     std::string by, date, note;
 };
 
+/// A review comment present on one side only (its part named by tag; "C<id>" in the file).
+struct CommentRef {
+    std::uint32_t id = 0;
+    PartId part; ///< its part, an id of its own revision
+    std::string tag; ///< the tag of the part it is pinned to, in its own revision
+    std::string by, date, text;
+    bool resolved = false;
+};
+
+/// A review comment in both revisions whose status, text, author or date differ.
+struct CommentChange {
+    std::uint32_t oldId = 0, newId = 0;
+    PartId part;                     ///< its part in the newer revision
+    std::string tag;                 ///< the newer tag of its part
+    std::vector<ValueChange> fields; ///< "status" ("open"/"resolved"), "text", "by", "date"
+};
+
 /// Everything that differs between an older and a newer revision.
 struct DrawingComparison {
     std::vector<PartOnOneSide> partsAdded, partsRemoved;
@@ -88,6 +105,9 @@ struct DrawingComparison {
     std::vector<ValueChange> sheet;    ///< title-block values and "revisions"
     std::vector<ValueChange> settings; ///< the drawing's limits
     std::vector<AcceptedRef> acceptedAdded, acceptedRemoved;
+    /// Review comments: pinned to a part on one side only, or changed (see compareDrawings).
+    std::vector<CommentRef> commentsAdded, commentsRemoved;
+    std::vector<CommentChange> commentsChanged;
     /// Findings of the newer revision it did not have before (ids of the newer drawing).
     std::vector<FindingRef> findingsNew;
     /// Findings of the older revision the newer one no longer has (ids of the older drawing).
@@ -105,7 +125,10 @@ struct DrawingComparison {
 /// still unpaired and always of the same kind: same id and tag; the same tag (unique on both
 /// sides); the same place on the Sheet; the same id. Wires are the same when they join the
 /// same terminals of paired parts; buckets pair by tag, then by id. Findings are the same when
-/// their rule and their (paired) parts are the same, whatever their message says.
+/// their rule and their (paired) parts are the same, whatever their message says. Review
+/// comments are the same when they carry the same id on paired parts, or else (ids renumbered)
+/// the same author, date and text on paired parts; a comment moved to another part is one
+/// removed and one added.
 DrawingComparison compareDrawings(const CheckResult& oldResult, const CheckResult& newResult);
 
 /// Checks both drawings (runCheck) and compares them.

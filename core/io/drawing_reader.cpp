@@ -95,9 +95,10 @@ private:
         for (std::size_t i = 0; i < j.size(); ++i) {
             const std::string ptr = "/revisions/" + std::to_string(i);
             object(j[i], ptr);
-            checkKeys(j[i], ptr, {"rev", "date", "by", "note"});
+            checkKeys(j[i], ptr, {"rev", "date", "by", "note", "file"});
             s.revisions.push_back({optText(j[i], ptr, "rev"), optText(j[i], ptr, "date"),
-                                   optText(j[i], ptr, "by"), optText(j[i], ptr, "note")});
+                                   optText(j[i], ptr, "by"), optText(j[i], ptr, "note"),
+                                   optText(j[i], ptr, "file")});
         }
     }
 

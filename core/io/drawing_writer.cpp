@@ -121,6 +121,8 @@ std::string serializeDrawing(const Drawing& d) {
             j["date"] = r.date;
             j["by"] = r.by;
             j["note"] = r.note;
+            if (!r.file.empty()) // only where a Submittal kept the issued drawing
+                j["file"] = r.file;
             return j;
         },
         false);

@@ -17,6 +17,10 @@ enum class UnitSystem { US, SI };
 /// One row of the revision table.
 struct Revision {
     std::string rev, date, by, note;
+    /// The drawing as issued at this revision: the copy the editor saved beside this
+    /// revision's Submittal (relative to the drawing's folder where it lies there or below).
+    /// Empty: none kept. The next revision's Submittal flags the parts changed since it.
+    std::string file;
     bool operator==(const Revision&) const = default;
 };
 

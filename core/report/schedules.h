@@ -4,16 +4,38 @@
 
 #include "check/check.h"
 
+#include <optional>
 #include <string>
 #include <vector>
 
 namespace lineward {
 
-/// One schedule: a name, column headers and rows of text cells.
+/// A cell that shows one rating of one part as the drawing holds it, so the editor can edit it
+/// there (the motor row's overload setting is the overload's `setting_a`).
+struct ScheduleField {
+    PartId part;
+    std::string_view key; ///< the field table's key (static storage)
+    bool operator==(const ScheduleField&) const = default;
+};
+
+/// What the check found about a row's parts: the worst open severity and how many findings are
+/// open (not accepted), and how many are accepted. Accepted findings do not mark a row.
+struct RowFindings {
+    std::optional<Severity> worst;
+    int open = 0, worstCount = 0, accepted = 0;
+};
+
+/// One schedule: a name, column headers and rows of text cells; beside each row, the rating
+/// each cell shows (where a cell shows one rating of one part) and the row's findings.
 struct Schedule {
     std::string name; ///< "motors", "cables", "devices", "arcflash"
     std::vector<std::string> headers;
     std::vector<std::vector<std::string>> rows;
+    /// Per row, per column: the one rating the cell shows, or nothing (a computed value, or a
+    /// cell made of several ratings). Empty or shorter than the row where nothing is editable.
+    std::vector<std::vector<std::optional<ScheduleField>>> fields;
+    /// Per row (empty for the arc-flash schedule, whose rows are studies, not parts).
+    std::vector<RowFindings> findings;
 };
 
 /// Motor, cable, device and arc-flash schedules of a drawing, read from its check result.

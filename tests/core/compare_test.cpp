@@ -164,7 +164,7 @@ TEST(Compare, SheetSettingsBucketsAndAcceptedDeviations) {
     const Drawing before = smallLineup();
     Drawing after = before;
     after.sheet.checkedBy = "R. Vance";
-    after.sheet.revisions.push_back({"C", "2026-12-01", "R. Vance", "feeder resized"});
+    after.sheet.revisions.push_back({"C", "2026-12-01", "R. Vance", "feeder resized", ""});
     after.settings.vdropBranchPct = 2.5;
     Bucket b = after.buckets().front();
     b.sccrKa = 42.0;
@@ -213,6 +213,91 @@ TEST(Compare, TextEscapesControlCharactersFromTheFile) {
     const std::string text = comparisonText(compareDrawings(before, after, testTables()), "a", "b");
     EXPECT_EQ(text.find('\x1b'), std::string::npos);
     EXPECT_NE(text.find("M-1\\x1b[2J"), std::string::npos) << text;
+}
+
+// Review comments: one resolved, one reworded, one deleted and one new between revisions.
+Drawing withComments() {
+    Drawing d = smallLineup();
+    d.comments().push_back({1, d.partByTag("OL-1")->id, "R. Vance", "2026-11-20",
+                            "setting from the nameplate?", false});
+    d.comments().push_back({2, d.partByTag("M-1")->id, "R. Vance", "2026-11-20", "FLA?", false});
+    d.comments().push_back({3, d.partByTag("MCC")->id, "T. Okafor", "2026-11-21", "bracing", false});
+    return d;
+}
+
+const CommentChange* commentChangeOf(const DrawingComparison& c, std::uint32_t id) {
+    for (const auto& x : c.commentsChanged)
+        if (x.newId == id)
+            return &x;
+    return nullptr;
+}
+
+TEST(Compare, CommentsAddedRemovedResolvedAndReworded) {
+    const Drawing before = withComments();
+    Drawing after = before;
+    auto& comments = after.comments();
+    comments[0].resolved = true;           // C1 resolved
+    comments[1].text = "FLA from the data sheet"; // C2 reworded
+    comments.erase(comments.begin() + 2);  // C3 deleted
+    comments.push_back({4, after.partByTag("CB-1")->id, "T. Okafor", "2026-12-01", "trip?", false});
+    const auto c = compareDrawings(before, after, testTables());
+    EXPECT_FALSE(c.same()); // only comments differ, and that is a difference (exit 1)
+    EXPECT_TRUE(c.partsChanged.empty());
+    ASSERT_EQ(c.commentsAdded.size(), 1u);
+    EXPECT_EQ(c.commentsAdded[0].id, 4u);
+    EXPECT_EQ(c.commentsAdded[0].tag, "CB-1");
+    ASSERT_EQ(c.commentsRemoved.size(), 1u);
+    EXPECT_EQ(c.commentsRemoved[0].id, 3u);
+    EXPECT_EQ(c.commentsRemoved[0].tag, "MCC");
+    ASSERT_EQ(c.commentsChanged.size(), 2u);
+    const CommentChange* resolved = commentChangeOf(c, 1);
+    ASSERT_NE(resolved, nullptr);
+    ASSERT_EQ(resolved->fields.size(), 1u);
+    EXPECT_EQ(resolved->fields[0].key, "status");
+    EXPECT_EQ(valueText(resolved->fields[0].oldValue), "open");
+    EXPECT_EQ(valueText(resolved->fields[0].newValue), "resolved");
+    const CommentChange* reworded = commentChangeOf(c, 2);
+    ASSERT_NE(reworded, nullptr);
+    ASSERT_EQ(reworded->fields.size(), 1u);
+    EXPECT_EQ(reworded->fields[0].key, "text");
+    EXPECT_EQ(valueText(reworded->fields[0].newValue), "FLA from the data sheet");
+    EXPECT_EQ(reworded->tag, "M-1");
+
+    const std::string text = comparisonText(c, "a", "b");
+    EXPECT_NE(text.find("Comments added (1)\n  + C4 on CB-1 · open · T. Okafor 2026-12-01: trip?"),
+              std::string::npos)
+        << text;
+    EXPECT_NE(text.find("Comments removed (1)\n  - C3 on MCC"), std::string::npos) << text;
+    EXPECT_NE(text.find("~ C1 on OL-1: status open → resolved"), std::string::npos) << text;
+
+    const auto j = comparisonJson(c, "a", "b");
+    ASSERT_TRUE(j["comments_added"].is_array());
+    EXPECT_EQ(j["comments_added"][0]["id"], "C4");
+    EXPECT_EQ(j["comments_added"][0]["part"], "CB-1");
+    EXPECT_EQ(j["comments_added"][0]["status"], "open");
+    EXPECT_EQ(j["comments_removed"][0]["text"], "bracing");
+    ASSERT_EQ(j["comments_changed"].size(), 2u);
+    EXPECT_EQ(j["comments_changed"][0]["id"], "C1");
+    EXPECT_EQ(j["comments_changed"][0]["fields"]["status"].dump(), "[\"open\",\"resolved\"]");
+}
+
+TEST(Compare, CommentsRenumberedWithTheirPartsAreTheSame) {
+    const Drawing before = withComments();
+    Drawing after = renumbered(before, 50);
+    for (Comment x : before.comments()) {
+        x.id += 10; // renumbered comments, same author, date and text on the paired parts
+        x.part = PartId(x.part.value + 50);
+        after.comments().push_back(x);
+    }
+    const auto c = compareDrawings(before, after, testTables());
+    EXPECT_TRUE(c.same()) << comparisonText(c, "a", "b");
+    // A comment moved to another part is one removed and one added, not a change.
+    Drawing moved = before;
+    moved.comments()[1].part = moved.partByTag("OL-1")->id;
+    const auto m = compareDrawings(before, moved, testTables());
+    EXPECT_EQ(m.commentsAdded.size(), 1u);
+    EXPECT_EQ(m.commentsRemoved.size(), 1u);
+    EXPECT_TRUE(m.commentsChanged.empty());
 }
 
 // The samples: the colleague's earlier layout (with the mistakes samples/README.md lists)

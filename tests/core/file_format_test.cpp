@@ -42,7 +42,7 @@ TEST(FileFormat, SamplesRoundTripByteForByte) {
 TEST(FileFormat, BuiltDrawingSurvivesSaveAndLoad) {
     Drawing d = smallLineup();
     d.sheet.title = "Round trip — ümlauts and \"quotes\"";
-    d.sheet.revisions.push_back({"A", "2026-12-01", "R. Quill", "first issue"});
+    d.sheet.revisions.push_back({"A", "2026-12-01", "R. Quill", "first issue", "issued/plant-A.lineward"});
     d.accepted().push_back({"topology.dangling", {PartId(9)}, "R. Quill", "2026-12-01", "spare"});
     d.settings.vdropBranchPct = 2.5;
     const std::string text = io::serializeDrawing(d);
