@@ -176,15 +176,28 @@ void paintTitleBlock(QPainter& p, const QPaintDevice& dev, const SubmittalStyle&
         p.drawText(QRectF(c.left(), y, c.width(), st.line), Qt::AlignLeft | Qt::AlignVCenter, text);
         y += st.line;
     };
+    // Text in the big size where it fits the room, else in the body size; clipped to the
+    // room, so it never runs under what follows.
     auto bigText = [&](const QRectF& c, const QString& text, double maxH) {
-        p.setFont(st.font(st.big, true));
         const QRectF box(c.left(), y, c.width(), maxH);
-        const QRectF used = p.boundingRect(box, Qt::TextWordWrap, text);
+        p.setFont(st.font(st.big, true));
+        QRectF used = p.boundingRect(box, Qt::TextWordWrap, text);
+        if (used.height() > maxH) {
+            p.setFont(st.font(st.body, true));
+            used = p.boundingRect(box, Qt::TextWordWrap, text);
+        }
+        p.save();
+        p.setClipRect(box);
         p.drawText(box, Qt::TextWordWrap, text);
+        p.restore();
         y += std::min(used.height(), maxH) + 2;
     };
     label(c2, "PROJECT");
-    bigText(c2, qs(d.sheet.project), st.line * 2.6);
+    // At most two lines of the project name at the big size (a longer one drops to the body
+    // size): its second line ran under the TITLE label when the room was counted in lines of
+    // the small size.
+    const double bigLine = QFontMetricsF(st.font(st.big, true), &dev).lineSpacing();
+    bigText(c2, qs(d.sheet.project), bigLine * 2 + 1);
     label(c2, "TITLE");
     bigText(c2, qs(d.sheet.title) + (sheetTitle.isEmpty() ? "" : " — " + sheetTitle),
             c2.bottom() - y);

@@ -62,6 +62,28 @@ double smallestWordBox(const QString& pdf, QString* word) {
     return least;
 }
 
+struct WordBox {
+    QString word;
+    QRectF box;
+};
+
+// Every word of one page with its box (pdftotext -bbox), in points.
+std::vector<WordBox> wordBoxes(const QString& pdf, int page) {
+    const QString html = run("pdftotext", {"-bbox", "-f", QString::number(page), "-l",
+                                           QString::number(page), pdf, "-"});
+    static const QRegularExpression re(
+        R"re(<word xMin="([\d.]+)" yMin="([\d.]+)" xMax="([\d.]+)" yMax="([\d.]+)">([^<]*)</word>)re");
+    std::vector<WordBox> words;
+    for (auto it = re.globalMatch(html); it.hasNext();) {
+        const auto m = it.next();
+        words.push_back({m.captured(5), QRectF(QPointF(m.captured(1).toDouble(),
+                                                       m.captured(2).toDouble()),
+                                               QPointF(m.captured(3).toDouble(),
+                                                       m.captured(4).toDouble()))});
+    }
+    return words;
+}
+
 SubmittalResult write(const Drawing& d, const QString& pdf, SubmittalOptions o) {
     return writeSubmittalPdf(pdf, runCheck(d, *test::sharedTables()), test::sharedTables(), o);
 }
@@ -144,4 +166,39 @@ TEST(SubmittalReading, TheCleanDrawingSaysSoInASentence) {
     EXPECT_TRUE(pageText(pdf, 1).contains("CHECK STATUS: " +
                                           QString::fromStdString(checkStatusWords(report))))
         << pageText(pdf, 1).toStdString();
+}
+
+// The title block's words never overlap: the review sample's project name takes two lines,
+// and its second line once ran under the TITLE label.
+TEST(SubmittalReading, TitleBlockWordsDoNotOverlap) {
+    const Drawing d = sample("kestrel-mill-mcc1-review.lineward");
+    const QString dir = test::tempDir("reading-title");
+    for (const auto& [paper, scale] : std::vector<std::pair<const char*, double>>{
+             {"tabloid", 1.0}, {"a3", 1.0}, {"tabloid", 0.5}}) {
+        SubmittalOptions o;
+        o.paper = *paperByName(paper);
+        o.printScale = scale;
+        const QString pdf = dir + "/" + paper + QString::number(scale) + ".pdf";
+        ASSERT_TRUE(write(d, pdf, o).error.isEmpty());
+        const auto words = wordBoxes(pdf, 1);
+        ASSERT_FALSE(words.empty()) << "pdftotext (poppler-utils) is needed";
+        // The title block starts at its first line, the caution's heading.
+        double top = -1;
+        for (const auto& w : words)
+            if (w.word == "CAUTION")
+                top = std::max(top, w.box.top());
+        ASSERT_GT(top, 0);
+        std::vector<WordBox> block;
+        for (const auto& w : words)
+            if (w.box.top() >= top - 0.5)
+                block.push_back(w);
+        ASSERT_GT(block.size(), 40u);
+        for (size_t i = 0; i < block.size(); ++i)
+            for (size_t j = i + 1; j < block.size(); ++j) {
+                const QRectF both = block[i].box.intersected(block[j].box);
+                EXPECT_LT(both.width() * both.height(), 0.5)
+                    << paper << " " << scale << ": \"" << block[i].word.toStdString()
+                    << "\" and \"" << block[j].word.toStdString() << "\" overlap";
+            }
+    }
 }
