@@ -1,0 +1,175 @@
+// Field tables of the conductors and loads (cable, motor, static load). Ranges are physical sanity
+// limits for low-voltage work, not code limits; the rules judge compliance.
+#include "model/part_fields.h"
+
+#include <array>
+
+namespace lineward::part_fields {
+
+namespace {
+
+using FT = FieldType;
+
+const std::array<FieldSpec, 10> kCableFields{{
+    {"material", "Conductor", "", FT::Choice, 0, 0, false, true, std::string("cu"), {"cu", "al"}},
+    {"size", "Size", "", FT::Text, 0, 0, false, true},
+    {"sets", "Parallel sets", "", FT::Integer, 1, 20, false, false, 1.0},
+    {"length_ft", "Length", "ft", FT::Number, 0.1, 20000, false, true},
+    {"insulation_c",
+     "Insulation rating",
+     "°C",
+     FT::Integer,
+     60,
+     90,
+     false,
+     false,
+     90.0,
+     {},
+     "60, 75 or 90"},
+    {"termination_c",
+     "Termination rating",
+     "°C",
+     FT::Integer,
+     60,
+     90,
+     false,
+     false,
+     75.0,
+     {},
+     "60, 75 or 90"},
+    {"raceway",
+     "Raceway",
+     "",
+     FT::Choice,
+     0,
+     0,
+     false,
+     false,
+     std::string("steel"),
+     {"steel", "pvc", "aluminum"}},
+    {"conductors", "Current-carrying conductors in raceway", "", FT::Integer, 1, 200, false, false,
+     3.0},
+    {"ambient_c",
+     "Ambient",
+     "°C",
+     FT::Number,
+     -40,
+     90,
+     false,
+     false,
+     {},
+     {},
+     "blank: the drawing's ambient"},
+    {"egc_size",
+     "Equipment grounding conductor",
+     "",
+     FT::Text,
+     0,
+     0,
+     false,
+     false,
+     {},
+     {},
+     "blank: the raceway serves as the EGC (NEC 250.118)"},
+}};
+
+const std::array<FieldSpec, 16> kMotorFields{{
+    {"hp", "Rated output", "hp", FT::Number, 0.1, 5000, false, false, {}, {}, "give this or kw"},
+    {"kw", "Rated output", "kW", FT::Number, 0.05, 4000, false, false, {}, {}, "give this or hp"},
+    {"volts", "Rated voltage", "V", FT::Number, 100, 15000, false, true},
+    {"phases", "Phases", "", FT::Integer, 1, 3, false, false, 3.0},
+    {"fla", "Nameplate full-load current", "A", FT::Number, 0.1, 5000, false, false},
+    {"sf", "Service factor", "", FT::Number, 1, 1.5, false, false, 1.15},
+    {"design",
+     "Design letter",
+     "",
+     FT::Choice,
+     0,
+     0,
+     false,
+     false,
+     std::string("B"),
+     {"A", "B", "C", "D", "E"}},
+    {"rotor",
+     "Motor type",
+     "",
+     FT::Choice,
+     0,
+     0,
+     false,
+     false,
+     std::string("squirrel_cage"),
+     {"squirrel_cage", "wound_rotor", "synchronous"},
+     "row of NEC Table 430.52(C)(1)"},
+    {"code_letter",
+     "Code letter",
+     "",
+     FT::Choice,
+     0,
+     0,
+     false,
+     false,
+     {},
+     {"A", "B", "C", "D", "E", "F", "G", "H", "J", "K", "L", "M", "N", "P", "R", "S", "T", "U",
+      "V"}},
+    {"lra", "Locked-rotor current", "A", FT::Number, 0.1, 50000, false, false},
+    {"accel_s", "Acceleration time", "s", FT::Number, 0.01, 600, false, false, 5.0},
+    {"stall_hot_s", "Safe stall time, hot", "s", FT::Number, 0.1, 600, false, false},
+    {"stall_cold_s", "Safe stall time, cold", "s", FT::Number, 0.1, 600, false, false},
+    {"temp_rise_c", "Marked temperature rise", "°C", FT::Number, 10, 200, false, false},
+    {"premium_eff",
+     "Design B premium efficiency",
+     "",
+     FT::Flag,
+     0,
+     0,
+     false,
+     false,
+     false,
+     {},
+     "NEMA premium efficiency; Table 430.52 allows a higher instantaneous setting"},
+    {"hard_to_start",
+     "Hard to start",
+     "",
+     FT::Flag,
+     0,
+     0,
+     false,
+     false,
+     false,
+     {},
+     "set where the motor will not start at the Table 430.52 rating (Exception No. 2)"},
+}};
+
+const std::array<FieldSpec, 6> kLoadFields{{
+    {"kva",
+     "Apparent power",
+     "kVA",
+     FT::Number,
+     0.05,
+     100000,
+     false,
+     false,
+     {},
+     {},
+     "give this or kw"},
+    {"kw", "Real power", "kW", FT::Number, 0.05, 100000, false, false, {}, {}, "give this or kva"},
+    {"pf", "Power factor", "", FT::Number, 0.1, 1, false, false, 0.9},
+    {"volts", "Rated voltage", "V", FT::Number, 100, 35000, false, true},
+    {"phases", "Phases", "", FT::Integer, 1, 3, false, false, 3.0},
+    {"continuous", "Continuous (3 h or more)", "", FT::Flag, 0, 0, false, false, true},
+}};
+
+} // namespace
+
+std::span<const FieldSpec> cableFields() {
+    return kCableFields;
+}
+std::span<const FieldSpec> motorFields() {
+    return kMotorFields;
+}
+std::span<const FieldSpec> loadFields() {
+    return kLoadFields;
+}
+
+} // namespace lineward::part_fields
