@@ -36,80 +36,91 @@ QString pageText(const QString& pdf, int page) {
         .simplified();
 }
 
-// The smallest word box in the PDF, in points, from poppler's word boxes (pdftotext -bbox).
-// A box spans the font's ascent to its descent: more than the type size itself.
-double smallestWordBox(const QString& pdf, QString* word) {
-    const QString html = run("pdftotext", {"-bbox", pdf, "-"});
-    static const QRegularExpression re(
-        R"re(<word xMin="([\d.]+)" yMin="([\d.]+)" xMax="([\d.]+)" yMax="([\d.]+)">([^<]*)</word>)re");
-    double least = 1e9;
-    for (auto it = re.globalMatch(html); it.hasNext();) {
-        const auto m = it.next();
-        const double w = m.captured(3).toDouble() - m.captured(1).toDouble();
-        double h = m.captured(4).toDouble() - m.captured(2).toDouble();
-        // A turned word (the time axis title, a vertical match line) has its box turned: a
-        // letter's size is then its width. A word of several letters taller than wide is turned
-        // (or too narrow to tell): left out; a single letter counts by its larger side.
-        if (m.captured(5).size() == 1)
-            h = std::max(w, h);
-        else if (h > w)
-            continue;
-        if (h < least) {
-            least = h;
-            *word = m.captured(5);
-        }
-    }
-    return least;
-}
-
 struct WordBox {
     QString word;
     QRectF box;
 };
 
-// Every word of one page with its box (pdftotext -bbox), in points.
-std::vector<WordBox> wordBoxes(const QString& pdf, int page) {
-    const QString html = run("pdftotext", {"-bbox", "-f", QString::number(page), "-l",
-                                           QString::number(page), pdf, "-"});
+// Every word with its box (pdftotext -bbox), in points: of one page, or of all with page 0.
+std::vector<WordBox> wordBoxes(const QString& pdf, int page = 0) {
+    QStringList args{"-bbox"};
+    if (page > 0)
+        args << "-f" << QString::number(page) << "-l" << QString::number(page);
+    const QString html = run("pdftotext", args << pdf << "-");
     static const QRegularExpression re(
         R"re(<word xMin="([\d.]+)" yMin="([\d.]+)" xMax="([\d.]+)" yMax="([\d.]+)">([^<]*)</word>)re");
     std::vector<WordBox> words;
     for (auto it = re.globalMatch(html); it.hasNext();) {
         const auto m = it.next();
-        words.push_back({m.captured(5), QRectF(QPointF(m.captured(1).toDouble(),
-                                                       m.captured(2).toDouble()),
-                                               QPointF(m.captured(3).toDouble(),
-                                                       m.captured(4).toDouble()))});
+        words.push_back(
+            {m.captured(5), QRectF(QPointF(m.captured(1).toDouble(), m.captured(2).toDouble()),
+                                   QPointF(m.captured(3).toDouble(), m.captured(4).toDouble()))});
     }
     return words;
+}
+
+// The smallest word box in the PDF, in points. A box spans the font's ascent to its descent:
+// more than the type size itself.
+double smallestWordBox(const QString& pdf, QString* word) {
+    double least = 1e9;
+    for (const auto& [text, box] : wordBoxes(pdf)) {
+        double h = box.height();
+        // A turned word (the time axis title, a vertical match line) has its box turned: a
+        // letter's size is then its width. A word of several letters taller than wide is turned
+        // (or too narrow to tell): left out; a single letter counts by its larger side.
+        if (text.size() == 1)
+            h = std::max(box.width(), h);
+        else if (h > box.width())
+            continue;
+        if (h < least) {
+            least = h;
+            *word = text;
+        }
+    }
+    return least;
 }
 
 SubmittalResult write(const Drawing& d, const QString& pdf, SubmittalOptions o) {
     return writeSubmittalPdf(pdf, runCheck(d, *test::sharedTables()), test::sharedTables(), o);
 }
 
-} // namespace
-
-TEST(SubmittalReading, NoWordIsSmallerThanTheReadableSize) {
+// The review sample's Submittal on tabloid, on A3 and on tabloid at half scale.
+struct OnPaper {
+    std::string what; // "tabloid 0.5"
+    double scale;
+    QString pdf;
+    SubmittalResult result;
+};
+std::vector<OnPaper> reviewOnEachPaper(const char* dirName) {
     const Drawing d = sample("kestrel-mill-mcc1-review.lineward");
-    const QString dir = test::tempDir("reading-size");
+    const QString dir = test::tempDir(dirName);
+    std::vector<OnPaper> out;
     for (const auto& [paper, scale] : std::vector<std::pair<const char*, double>>{
              {"tabloid", 1.0}, {"a3", 1.0}, {"tabloid", 0.5}}) {
         SubmittalOptions o;
         o.paper = *paperByName(paper);
         o.printScale = scale;
         const QString pdf = dir + "/" + paper + QString::number(scale) + ".pdf";
-        const auto r = write(d, pdf, o);
+        out.push_back(
+            {std::string(paper) + " " + std::to_string(scale), scale, pdf, write(d, pdf, o)});
+    }
+    return out;
+}
+
+} // namespace
+
+TEST(SubmittalReading, NoWordIsSmallerThanTheReadableSize) {
+    for (const auto& [what, scale, pdf, r] : reviewOnEachPaper("reading-size")) {
         ASSERT_TRUE(r.error.isEmpty()) << r.error.toStdString();
         // 2 mm (submittal_sheet.h) on the print, after its scale.
-        EXPECT_GE(r.minTextPt * scale * 25.4 / 72, kMinTextMm * 0.999) << paper;
+        EXPECT_GE(r.minTextPt * scale * 25.4 / 72, kMinTextMm * 0.999) << what;
         QString word;
         const double box = smallestWordBox(pdf, &word);
         ASSERT_LT(box, 1e9) << "pdftotext (poppler-utils) is needed";
         // The smallest word's box (ascent to descent, about 1.16 em for our sans serif) holds
         // at least the minimum size: no word was set smaller than minTextPt.
-        EXPECT_GE(box, r.minTextPt * 0.99) << paper << " " << scale << ": \"" << word.toStdString()
-                                           << "\" is set in " << box << " pt";
+        EXPECT_GE(box, r.minTextPt * 0.99)
+            << what << ": \"" << word.toStdString() << "\" is set in " << box << " pt";
     }
 }
 
@@ -171,15 +182,8 @@ TEST(SubmittalReading, TheCleanDrawingSaysSoInASentence) {
 // The title block's words never overlap: the review sample's project name takes two lines,
 // and its second line once ran under the TITLE label.
 TEST(SubmittalReading, TitleBlockWordsDoNotOverlap) {
-    const Drawing d = sample("kestrel-mill-mcc1-review.lineward");
-    const QString dir = test::tempDir("reading-title");
-    for (const auto& [paper, scale] : std::vector<std::pair<const char*, double>>{
-             {"tabloid", 1.0}, {"a3", 1.0}, {"tabloid", 0.5}}) {
-        SubmittalOptions o;
-        o.paper = *paperByName(paper);
-        o.printScale = scale;
-        const QString pdf = dir + "/" + paper + QString::number(scale) + ".pdf";
-        ASSERT_TRUE(write(d, pdf, o).error.isEmpty());
+    for (const auto& [what, scale, pdf, r] : reviewOnEachPaper("reading-title")) {
+        ASSERT_TRUE(r.error.isEmpty()) << r.error.toStdString();
         const auto words = wordBoxes(pdf, 1);
         ASSERT_FALSE(words.empty()) << "pdftotext (poppler-utils) is needed";
         // The title block starts at its first line, the caution's heading.
@@ -197,8 +201,8 @@ TEST(SubmittalReading, TitleBlockWordsDoNotOverlap) {
             for (size_t j = i + 1; j < block.size(); ++j) {
                 const QRectF both = block[i].box.intersected(block[j].box);
                 EXPECT_LT(both.width() * both.height(), 0.5)
-                    << paper << " " << scale << ": \"" << block[i].word.toStdString()
-                    << "\" and \"" << block[j].word.toStdString() << "\" overlap";
+                    << what << ": \"" << block[i].word.toStdString() << "\" and \""
+                    << block[j].word.toStdString() << "\" overlap";
             }
     }
 }
